@@ -1,0 +1,3 @@
+export default function Loading() {
+  return <p className="text-center text-sm text-ink-soft" role="status">Loading…</p>;
+}

@@ -1,0 +1,12 @@
+import { guard } from "@/lib/auth/guard";
+import { json, withApi } from "@/lib/api/handler";
+
+export const GET = withApi(async () => {
+  const actor = await guard();
+  return json({
+    user: { id: actor.userId, email: actor.email, name: actor.name },
+    organization: { id: actor.organizationId, name: actor.organizationName },
+    role: actor.role,
+    athleteId: actor.athleteId,
+  });
+});

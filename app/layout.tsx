@@ -1,0 +1,17 @@
+import type { Metadata, Viewport } from "next";
+import "./globals.css";
+
+export const metadata: Metadata = {
+  title: { default: "Changewise", template: "%s · Changewise" },
+  description: "Pre/post testing for strength and conditioning: real change against test noise and the smallest worthwhile change.",
+};
+
+export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#1E2A44" };
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en">
+      <body className="min-h-screen bg-paper font-sans text-ink antialiased">{children}</body>
+    </html>
+  );
+}

@@ -1,0 +1,28 @@
+import Link from "next/link";
+import type { Actor } from "@/lib/data/actors";
+import { navFor, ROLE_LABELS } from "@/lib/nav";
+import { NavLinks } from "./nav-links";
+import { SignOutButton } from "./sign-out-button";
+
+export function AppShell({ actor, children }: { actor: Actor; children: React.ReactNode }) {
+  return (
+    <div className="min-h-screen">
+      <header className="bg-ink text-white">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
+          <Link href="/" className="text-lg font-bold tracking-tight">Changewise</Link>
+          <nav aria-label="Main" className="flex-1">
+            <NavLinks items={navFor(actor.role)} />
+          </nav>
+          <div className="flex items-center gap-3 text-sm">
+            <span className="text-white/80">
+              <span className="font-semibold text-white">{actor.name}</span> · {ROLE_LABELS[actor.role]} ·{" "}
+              {actor.organizationName}
+            </span>
+            <SignOutButton />
+          </div>
+        </div>
+      </header>
+      <main className="mx-auto max-w-6xl px-4 py-6">{children}</main>
+    </div>
+  );
+}

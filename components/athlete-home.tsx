@@ -1,0 +1,60 @@
+"use client";
+
+import { useApi } from "@/hooks/use-api";
+import type { AthleteResult } from "@/lib/data/athlete-results";
+import { PHASE_LABELS, formatDate, formatValue } from "@/lib/labels";
+import type { Phase } from "@/db/schema";
+
+export function AthleteHome({ athleteId, name }: { athleteId: number | null; name: string }) {
+  const { data, error, isPending } = useApi<{ results: AthleteResult[] }>(
+    athleteId ? `/api/athletes/${athleteId}/results` : null,
+  );
+
+  return (
+    <section aria-labelledby="progress-heading" className="space-y-4">
+      <h1 id="progress-heading" className="text-2xl font-bold">My progress</h1>
+      <p className="text-ink-soft">
+        Hello {name}. Your results appear here once your sport scientist publishes a testing session. You see only
+        your own results; nobody else&apos;s.
+      </p>
+      {!athleteId && (
+        <p className="card p-4">Your account is not linked to an athlete record yet. Ask your coach to link it.</p>
+      )}
+      {isPending && athleteId && <p role="status" className="text-ink-soft">Loading your results…</p>}
+      {error && <p role="alert" className="card p-4">Your results could not load: {error.message}</p>}
+      {data && data.results.length === 0 && (
+        <p className="card p-6 text-ink-soft">No published results yet.</p>
+      )}
+      {data && data.results.length > 0 && (
+        <div className="card overflow-x-auto">
+          <table className="w-full text-left text-sm">
+            <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">
+              <tr>
+                <th className="px-4 py-2">Date</th>
+                <th className="px-4 py-2">Session</th>
+                <th className="px-4 py-2">Test</th>
+                <th className="px-4 py-2 text-right">Result</th>
+              </tr>
+            </thead>
+            <tbody>
+              {data.results.map((r) => (
+                <tr key={r.id} className="border-b border-line last:border-0">
+                  <td className="px-4 py-2">{formatDate(r.date)}</td>
+                  <td className="px-4 py-2">{PHASE_LABELS[r.phase as Phase]}</td>
+                  <td className="px-4 py-2">{r.testName}</td>
+                  <td className="num px-4 py-2 text-right">
+                    {r.flag ? r.flag : `${formatValue(r.value, 2)} ${r.unit}`}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+      <p className="text-xs text-ink-faint">
+        These numbers support training decisions; they are not a medical or return-to-play judgement. Talk to your
+        medical staff about any health question.
+      </p>
+    </section>
+  );
+}

@@ -1,0 +1,62 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { signIn } from "next-auth/react";
+import { useRouter, useSearchParams } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { signInSchema, type SignInInput } from "@/lib/validation/auth";
+
+/** Only same-site paths are followed after sign-in. */
+function safeNext(value: string | null): string {
+  return value && value.startsWith("/") && !value.startsWith("//") ? value : "/";
+}
+
+export function SignInForm() {
+  const router = useRouter();
+  const params = useSearchParams();
+  const [failure, setFailure] = useState<string | null>(null);
+  const {
+    register,
+    handleSubmit,
+    formState: { errors, isSubmitting },
+  } = useForm<SignInInput>({ resolver: zodResolver(signInSchema) });
+
+  async function onSubmit(values: SignInInput) {
+    setFailure(null);
+    const result = await signIn("credentials", { ...values, redirect: false });
+    if (!result || result.error) {
+      setFailure(
+        !result || result.error === "CredentialsSignin"
+          ? "That e-mail and password do not match an account."
+          : result.error,
+      );
+      return;
+    }
+    router.replace(safeNext(params.get("next")));
+    router.refresh();
+  }
+
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+      <div>
+        <label htmlFor="email" className="label">E-mail</label>
+        <input id="email" type="email" autoComplete="username" className="field" {...register("email")} />
+        {errors.email && <p className="mt-1 text-sm text-decline">{errors.email.message}</p>}
+      </div>
+      <div>
+        <label htmlFor="password" className="label">Password</label>
+        <input id="password" type="password" autoComplete="current-password" className="field" {...register("password")} />
+        {errors.password && <p className="mt-1 text-sm text-decline">{errors.password.message}</p>}
+      </div>
+      {failure && (
+        <p role="alert" className="rounded-md border border-decline bg-decline-soft px-3 py-2 text-sm">
+          {failure}
+        </p>
+      )}
+      <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
+        {isSubmitting ? "Signing in…" : "Sign in"}
+      </button>
+    </form>
+  );
+}

@@ -1,0 +1,366 @@
+/**
+ * The Changewise data model. Every row that belongs to a club carries its
+ * organization id, so every query can be scoped to one tenant in its WHERE clause.
+ */
+import { sql } from "drizzle-orm";
+import {
+  blob,
+  index,
+  integer,
+  primaryKey,
+  real,
+  sqliteTable,
+  text,
+  uniqueIndex,
+} from "drizzle-orm/sqlite-core";
+
+export const ROLES = ["owner", "scientist", "coach", "athlete"] as const;
+export type Role = (typeof ROLES)[number];
+
+export const DIRECTIONS = ["higher", "lower"] as const;
+export type Direction = (typeof DIRECTIONS)[number];
+
+export const TRIAL_RULES = ["best", "mean"] as const;
+export type TrialRule = (typeof TRIAL_RULES)[number];
+
+/** sd-factor: factor × baseline between-athlete SD; fixed: a value in the test's unit; cv-factor: factor × CV% of the mean. */
+export const SWC_METHODS = ["sd-factor", "fixed", "cv-factor"] as const;
+export type SwcMethod = (typeof SWC_METHODS)[number];
+
+export const PHASES = ["baseline", "pre-block", "post-block", "retest", "in-season"] as const;
+export type Phase = (typeof PHASES)[number];
+
+export const SESSION_STATUSES = ["draft", "published"] as const;
+export type SessionStatus = (typeof SESSION_STATUSES)[number];
+
+export const RESULT_FLAGS = ["absent", "injured", "invalid"] as const;
+export type ResultFlag = (typeof RESULT_FLAGS)[number];
+
+export const SEXES = ["female", "male", "other"] as const;
+
+const createdAt = () =>
+  integer("created_at", { mode: "timestamp_ms" })
+    .notNull()
+    .default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
+
+export const organizations = sqliteTable("organizations", {
+  id: integer("id").primaryKey({ autoIncrement: true }),
+  name: text("name").notNull(),
+  createdAt: createdAt(),
+});
+
+export const users = sqliteTable("users", {
+  id: integer("id").primaryKey({ autoIncrement: true }),
+  email: text("email").notNull().unique(),
+  name: text("name").notNull(),
+  passwordHash: text("password_hash"),
+  createdAt: createdAt(),
+});
+
+export const memberships = sqliteTable(
+  "memberships",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    userId: integer("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    role: text("role", { enum: ROLES }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    uniqueIndex("memberships_user_org_unique").on(t.userId, t.organizationId),
+    index("memberships_org_idx").on(t.organizationId),
+  ],
+);
+
+export const squads = sqliteTable(
+  "squads",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    sport: text("sport"),
+    archived: integer("archived", { mode: "boolean" }).notNull().default(false),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("squads_org_name_unique").on(t.organizationId, t.name)],
+);
+
+export const squadCoaches = sqliteTable(
+  "squad_coaches",
+  {
+    squadId: integer("squad_id")
+      .notNull()
+      .references(() => squads.id, { onDelete: "cascade" }),
+    userId: integer("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+  },
+  (t) => [primaryKey({ columns: [t.squadId, t.userId] }), index("squad_coaches_user_idx").on(t.userId)],
+);
+
+export const athletes = sqliteTable(
+  "athletes",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    userId: integer("user_id").references(() => users.id, { onDelete: "set null" }),
+    name: text("name").notNull(),
+    dateOfBirth: text("date_of_birth"),
+    sex: text("sex", { enum: SEXES }),
+    position: text("position"),
+    externalId: text("external_id"),
+    notes: text("notes"),
+    archived: integer("archived", { mode: "boolean" }).notNull().default(false),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("athletes_org_idx").on(t.organizationId),
+    uniqueIndex("athletes_user_unique").on(t.userId),
+    uniqueIndex("athletes_org_external_unique").on(t.organizationId, t.externalId),
+  ],
+);
+
+export const squadAthletes = sqliteTable(
+  "squad_athletes",
+  {
+    squadId: integer("squad_id")
+      .notNull()
+      .references(() => squads.id, { onDelete: "cascade" }),
+    athleteId: integer("athlete_id")
+      .notNull()
+      .references(() => athletes.id, { onDelete: "cascade" }),
+  },
+  (t) => [primaryKey({ columns: [t.squadId, t.athleteId] }), index("squad_athletes_athlete_idx").on(t.athleteId)],
+);
+
+export const tests = sqliteTable(
+  "tests",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    unit: text("unit").notNull(),
+    decimals: integer("decimals").notNull().default(2),
+    direction: text("direction", { enum: DIRECTIONS }).notNull(),
+    trialRule: text("trial_rule", { enum: TRIAL_RULES }).notNull().default("best"),
+    trialsPerSession: integer("trials_per_session").notNull().default(3),
+    swcMethod: text("swc_method", { enum: SWC_METHODS }).notNull().default("sd-factor"),
+    /** The factor (sd-factor, cv-factor) or the value in the test's unit (fixed). */
+    swcValue: real("swc_value").notNull().default(0.2),
+    /** Within-athlete CV% used by the cv-factor SWC method. */
+    cvPercent: real("cv_percent"),
+    typicalError: real("typical_error"),
+    typicalErrorDf: integer("typical_error_df"),
+    typicalErrorSource: text("typical_error_source"),
+    plausibleMin: real("plausible_min"),
+    plausibleMax: real("plausible_max"),
+    archived: integer("archived", { mode: "boolean" }).notNull().default(false),
+    version: integer("version").notNull().default(1),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("tests_org_name_unique").on(t.organizationId, t.name)],
+);
+
+export const testingSessions = sqliteTable(
+  "testing_sessions",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    squadId: integer("squad_id")
+      .notNull()
+      .references(() => squads.id, { onDelete: "cascade" }),
+    /** ISO date (YYYY-MM-DD) of the testing day. */
+    date: text("date").notNull(),
+    phase: text("phase", { enum: PHASES }).notNull(),
+    status: text("status", { enum: SESSION_STATUSES }).notNull().default("draft"),
+    notes: text("notes"),
+    version: integer("version").notNull().default(1),
+    createdBy: integer("created_by").references(() => users.id, { onDelete: "set null" }),
+    publishedAt: integer("published_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("sessions_org_date_idx").on(t.organizationId, t.date),
+    index("sessions_squad_date_idx").on(t.squadId, t.date),
+  ],
+);
+
+/** The battery: which tests a session measures, in display order. */
+export const sessionTests = sqliteTable(
+  "session_tests",
+  {
+    sessionId: integer("session_id")
+      .notNull()
+      .references(() => testingSessions.id, { onDelete: "cascade" }),
+    testId: integer("test_id")
+      .notNull()
+      .references(() => tests.id, { onDelete: "restrict" }),
+    position: integer("position").notNull().default(0),
+  },
+  (t) => [primaryKey({ columns: [t.sessionId, t.testId] }), index("session_tests_test_idx").on(t.testId)],
+);
+
+export const results = sqliteTable(
+  "results",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    sessionId: integer("session_id")
+      .notNull()
+      .references(() => testingSessions.id, { onDelete: "cascade" }),
+    athleteId: integer("athlete_id")
+      .notNull()
+      .references(() => athletes.id, { onDelete: "cascade" }),
+    testId: integer("test_id")
+      .notNull()
+      .references(() => tests.id, { onDelete: "restrict" }),
+    /** JSON array of trial scores in entry order; null marks an empty trial slot. */
+    trials: text("trials", { mode: "json" }).$type<(number | null)[]>().notNull().default(sql`'[]'`),
+    /** The trials reduced by the test's rule (best or mean); null when no valid trial. */
+    value: real("value"),
+    flag: text("flag", { enum: RESULT_FLAGS }),
+    note: text("note"),
+    updatedBy: integer("updated_by").references(() => users.id, { onDelete: "set null" }),
+    updatedAt: integer("updated_at", { mode: "timestamp_ms" })
+      .notNull()
+      .default(sql`(cast(unixepoch('subsec') * 1000 as integer))`),
+    version: integer("version").notNull().default(1),
+  },
+  (t) => [
+    uniqueIndex("results_session_athlete_test_unique").on(t.sessionId, t.athleteId, t.testId),
+    // Change reports read one test across two sessions; progress pages read one athlete over time.
+    index("results_test_session_idx").on(t.testId, t.sessionId),
+    index("results_athlete_test_idx").on(t.athleteId, t.testId),
+  ],
+);
+
+export const reliabilityStudies = sqliteTable(
+  "reliability_studies",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    testId: integer("test_id")
+      .notNull()
+      .references(() => tests.id, { onDelete: "cascade" }),
+    firstSessionId: integer("first_session_id").references(() => testingSessions.id, { onDelete: "set null" }),
+    secondSessionId: integer("second_session_id").references(() => testingSessions.id, { onDelete: "set null" }),
+    label: text("label"),
+    n: integer("n").notNull(),
+    typicalError: real("typical_error").notNull(),
+    typicalErrorDf: integer("typical_error_df").notNull(),
+    cvPercent: real("cv_percent"),
+    icc31: real("icc31"),
+    icc21: real("icc21"),
+    /** Full result of the computation, kept so a report can be reproduced later. */
+    summary: text("summary", { mode: "json" }).$type<Record<string, unknown>>(),
+    adoptedAt: integer("adopted_at", { mode: "timestamp_ms" }),
+    createdBy: integer("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("reliability_org_test_idx").on(t.organizationId, t.testId)],
+);
+
+export const uploads = sqliteTable(
+  "uploads",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    sessionId: integer("session_id").references(() => testingSessions.id, { onDelete: "set null" }),
+    filename: text("filename").notNull(),
+    sizeBytes: integer("size_bytes").notNull(),
+    contentType: text("content_type"),
+    content: blob("content", { mode: "buffer" }).notNull(),
+    format: text("format"),
+    rowsImported: integer("rows_imported").notNull().default(0),
+    createdBy: integer("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("uploads_org_idx").on(t.organizationId)],
+);
+
+export const auditEvents = sqliteTable(
+  "audit_events",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    actorUserId: integer("actor_user_id").references(() => users.id, { onDelete: "set null" }),
+    action: text("action").notNull(),
+    entityType: text("entity_type").notNull(),
+    entityId: integer("entity_id"),
+    /** Session the change belongs to, so a sheet can list and undo its own changes. */
+    sessionId: integer("session_id"),
+    before: text("before", { mode: "json" }).$type<unknown>(),
+    after: text("after", { mode: "json" }).$type<unknown>(),
+    undoneAt: integer("undone_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    index("audit_org_entity_idx").on(t.organizationId, t.entityType, t.entityId),
+    index("audit_session_idx").on(t.sessionId, t.id),
+  ],
+);
+
+export const invitations = sqliteTable(
+  "invitations",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    role: text("role", { enum: ROLES }).notNull(),
+    athleteId: integer("athlete_id").references(() => athletes.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull().unique(),
+    invitedBy: integer("invited_by").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    acceptedAt: integer("accepted_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("invitations_org_idx").on(t.organizationId)],
+);
+
+export const passwordResetTokens = sqliteTable("password_reset_tokens", {
+  id: integer("id").primaryKey({ autoIncrement: true }),
+  userId: integer("user_id")
+    .notNull()
+    .references(() => users.id, { onDelete: "cascade" }),
+  tokenHash: text("token_hash").notNull().unique(),
+  expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+  usedAt: integer("used_at", { mode: "timestamp_ms" }),
+  createdAt: createdAt(),
+});
+
+/** Failed sign-ins, kept in the database so throttling holds across server processes. */
+export const signInAttempts = sqliteTable(
+  "sign_in_attempts",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    email: text("email").notNull(),
+    address: text("address").notNull(),
+    attemptedAt: integer("attempted_at").notNull(),
+  },
+  (t) => [
+    index("sign_in_attempts_email_idx").on(t.email, t.attemptedAt),
+    index("sign_in_attempts_address_idx").on(t.address, t.attemptedAt),
+  ],
+);

@@ -1,0 +1,69 @@
+import { NextResponse } from "next/server";
+import { ZodError, type ZodType } from "zod";
+import { ApiError, invalidInput, type ErrorBody, type FieldErrors } from "./errors";
+
+export function zodFieldErrors(error: ZodError): FieldErrors {
+  const fields: FieldErrors = {};
+  for (const issue of error.issues) {
+    const key = issue.path.join(".") || "_";
+    if (!fields[key]) fields[key] = issue.message;
+  }
+  return fields;
+}
+
+export function errorResponse(error: unknown): NextResponse<ErrorBody> {
+  if (error instanceof ApiError) return NextResponse.json(error.toBody(), { status: error.status });
+  if (error instanceof ZodError) {
+    return NextResponse.json(invalidInput("Some fields need attention.", zodFieldErrors(error)).toBody(), { status: 422 });
+  }
+  // Checked by name so the API layer does not pull the statistics core into every route.
+  if (error instanceof Error && error.name === "StatsInputError") {
+    return NextResponse.json(invalidInput(error.message).toBody(), { status: 422 });
+  }
+  console.error("Unhandled API error", error);
+  return NextResponse.json(
+    { error: { code: "internal", message: "Something went wrong on our side. Nothing was changed." } } as ErrorBody,
+    { status: 500 },
+  );
+}
+
+type RouteContext<P> = { params: Promise<P> };
+
+/** Wraps a route handler so every failure leaves as the one error shape. */
+export function withApi<P = Record<string, string>>(
+  handler: (request: Request, context: RouteContext<P>) => Promise<Response>,
+) {
+  return async (request: Request, context: RouteContext<P>): Promise<Response> => {
+    try {
+      return await handler(request, context);
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}
+
+/** Reads a JSON body and validates it; malformed JSON is a 400, not a 500. */
+export async function readJson<T>(request: Request, schema: ZodType<T>): Promise<T> {
+  const type = request.headers.get("content-type") ?? "";
+  if (!type.includes("application/json")) {
+    throw new ApiError(415, "unsupported_media_type", "Send the body as JSON (Content-Type: application/json).");
+  }
+  let body: unknown;
+  try {
+    body = await request.json();
+  } catch {
+    throw new ApiError(400, "bad_request", "The body is not valid JSON.");
+  }
+  return schema.parse(body);
+}
+
+/** Parses a path segment id; anything that is not a positive integer cannot exist. */
+export function parseId(value: string | undefined, what = "That record"): number {
+  const id = Number(value);
+  if (!Number.isSafeInteger(id) || id <= 0) throw new ApiError(404, "not_found", `${what} was not found.`);
+  return id;
+}
+
+export function json<T>(data: T, init?: ResponseInit) {
+  return NextResponse.json(data, init);
+}

@@ -1,0 +1,57 @@
+/**
+ * The one authorisation gate. Every route handler and server action starts with
+ * `guard(...)`: signed in? role allowed? each named record inside the caller's reach?
+ */
+import type { Role } from "@/db/schema";
+import { forbidden, notFound, unauthenticated, ApiError } from "@/lib/api/errors";
+import { loadActor, type Actor } from "@/lib/data/actors";
+import { athleteInReach, sessionInReach, squadInReach, testInReach } from "@/lib/data/reach";
+import { currentUserId } from "./session";
+
+export type { Actor };
+
+export const ALL_ROLES: readonly Role[] = ["owner", "scientist", "coach", "athlete"];
+export const STAFF: readonly Role[] = ["owner", "scientist", "coach"];
+export const MANAGERS: readonly Role[] = ["owner", "scientist"];
+export const OWNERS: readonly Role[] = ["owner"];
+
+export type GuardOptions = {
+  roles?: readonly Role[];
+  squadId?: number;
+  athleteId?: number;
+  sessionId?: number;
+  testId?: number;
+};
+
+export async function guard(options: GuardOptions = {}): Promise<Actor> {
+  const userId = await currentUserId();
+  if (userId === null) throw unauthenticated();
+  const actor = await loadActor(userId);
+  if (!actor) throw forbidden("Your account is not a member of any organisation.");
+  await authorize(actor, options);
+  return actor;
+}
+
+/** The checks of `guard` for an actor already resolved (also used directly by tests). */
+export async function authorize(actor: Actor, options: GuardOptions): Promise<void> {
+  if (options.roles && !options.roles.includes(actor.role)) throw forbidden();
+  const checks: [number | undefined, (a: Actor, id: number) => Promise<boolean>, string][] = [
+    [options.squadId, squadInReach, "Squad"],
+    [options.athleteId, athleteInReach, "Athlete"],
+    [options.sessionId, sessionInReach, "Session"],
+    [options.testId, testInReach, "Test"],
+  ];
+  for (const [id, inReach, what] of checks) {
+    if (id !== undefined && !(await inReach(actor, id))) throw notFound(what);
+  }
+}
+
+/** For server actions: the same gate, answering with a plain object instead of throwing. */
+export async function guardAction(options: GuardOptions = {}) {
+  try {
+    return { ok: true as const, actor: await guard(options) };
+  } catch (error) {
+    if (error instanceof ApiError) return { ok: false as const, error: error.toBody().error };
+    throw error;
+  }
+}

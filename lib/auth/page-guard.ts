@@ -1,0 +1,19 @@
+import { notFound, redirect } from "next/navigation";
+import { ApiError } from "@/lib/api/errors";
+import { guard, type GuardOptions } from "./guard";
+
+/**
+ * The guard for server components: signed-out visitors go to sign-in, and anything
+ * outside the caller's role or reach is simply not found.
+ */
+export async function pageGuard(options: GuardOptions = {}) {
+  try {
+    return await guard(options);
+  } catch (error) {
+    if (error instanceof ApiError) {
+      if (error.status === 401) redirect("/sign-in");
+      notFound();
+    }
+    throw error;
+  }
+}

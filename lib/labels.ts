@@ -1,0 +1,29 @@
+import type { Phase, ResultFlag, SessionStatus } from "@/db/schema";
+
+export const PHASE_LABELS: Record<Phase, string> = {
+  baseline: "Baseline",
+  "pre-block": "Pre-block",
+  "post-block": "Post-block",
+  retest: "Retest",
+  "in-season": "In-season check",
+};
+
+export const STATUS_LABELS: Record<SessionStatus, string> = { draft: "Draft", published: "Published" };
+
+export const FLAG_LABELS: Record<ResultFlag, string> = { absent: "Absent", injured: "Injured", invalid: "Invalid" };
+
+/** "2026-09-14" → "14 Sep 2026", without time-zone drift. */
+export function formatDate(isoDate: string): string {
+  const [y, m, d] = isoDate.split("-").map(Number);
+  if (!y || !m || !d) return isoDate;
+  return new Date(Date.UTC(y, m - 1, d)).toLocaleDateString("en-GB", {
+    day: "numeric",
+    month: "short",
+    year: "numeric",
+    timeZone: "UTC",
+  });
+}
+
+export function formatValue(value: number | null | undefined, decimals: number): string {
+  return value === null || value === undefined || !Number.isFinite(value) ? "–" : value.toFixed(decimals);
+}

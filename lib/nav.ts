@@ -1,0 +1,20 @@
+import type { Role } from "@/db/schema";
+
+export type NavItem = { href: string; label: string; roles: readonly Role[] };
+
+/** Screens by role, with our own names (PRODUCT.md §6). Only screens that exist are listed. */
+export const NAV_ITEMS: NavItem[] = [
+  { href: "/", label: "Squads", roles: ["owner", "scientist", "coach"] },
+  { href: "/", label: "My progress", roles: ["athlete"] },
+];
+
+export function navFor(role: Role): NavItem[] {
+  return NAV_ITEMS.filter((item) => item.roles.includes(role));
+}
+
+export const ROLE_LABELS: Record<Role, string> = {
+  owner: "Owner",
+  scientist: "Sport scientist",
+  coach: "Coach",
+  athlete: "Athlete",
+};
