@@ -1,17 +1,32 @@
 import { defineConfig } from "vitest/config";
 import { fileURLToPath } from "node:url";
 
+const alias = { "@": fileURLToPath(new URL("./", import.meta.url)) };
+
 export default defineConfig({
-  resolve: {
-    alias: { "@": fileURLToPath(new URL("./", import.meta.url)) },
-  },
+  resolve: { alias },
   test: {
     environment: "node",
-    include: ["tests/**/*.test.ts", "lib/**/*.test.ts"],
-    // Integration tests each open their own SQLite file; two cores, so keep forks few.
+    // Two cores: at most two forks, each integration file on its own SQLite file.
     pool: "forks",
     maxWorkers: 2,
-    testTimeout: 20000,
-    hookTimeout: 60000,
+    testTimeout: 20_000,
+    hookTimeout: 240_000,
+    projects: [
+      {
+        extends: true,
+        test: { name: "unit", include: ["tests/stats/**/*.test.ts", "tests/unit/**/*.test.ts", "tests/integration/**/*.test.ts", "lib/**/*.test.ts"] },
+      },
+      {
+        extends: true,
+        test: {
+          name: "e2e",
+          include: ["tests/e2e/**/*.test.ts"],
+          globalSetup: ["tests/e2e/global-setup.ts"],
+          fileParallelism: false,
+          testTimeout: 60_000,
+        },
+      },
+    ],
   },
 });

@@ -1,0 +1,47 @@
+import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { chromium, type BrowserContext, type Page } from "playwright-core";
+
+export const ARTIFACTS = "tests/.artifacts";
+
+/** Debian's Chromium, headless, with a fresh profile and no background traffic. */
+export async function openBrowser(): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
+  const profile = mkdtempSync(join(tmpdir(), "changewise-chromium-"));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
+    headless: true,
+    viewport: { width: 1180, height: 820 },
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+      "--no-first-run",
+      "--disable-quic",
+    ],
+  });
+  return {
+    context,
+    async close() {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function screenshot(page: Page, name: string) {
+  mkdirSync(ARTIFACTS, { recursive: true });
+  const path = join(ARTIFACTS, `${name}.png`);
+  await page.screenshot({ path, fullPage: true });
+  return path;
+}
+
+export async function signInThroughForm(page: Page, baseUrl: string, email: string, password = "changewise-demo") {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill(password);
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
+}
