@@ -1,9 +1,17 @@
-import { guard, STAFF } from "@/lib/auth/guard";
-import { json, withApi } from "@/lib/api/handler";
+import { guard, OWNERS, STAFF } from "@/lib/auth/guard";
+import { json, readJson, withApi } from "@/lib/api/handler";
+import { createSquad } from "@/lib/data/squad-admin";
 import { listSquads } from "@/lib/data/squads";
+import { squadCreateSchema } from "@/lib/validation/roster";
 
 export const GET = withApi(async (request) => {
   const actor = await guard({ roles: STAFF });
   const includeArchived = new URL(request.url).searchParams.get("archived") === "include";
   return json({ squads: await listSquads(actor, { includeArchived }) });
+});
+
+export const POST = withApi(async (request) => {
+  const actor = await guard({ roles: OWNERS });
+  const input = await readJson(request, squadCreateSchema);
+  return json({ squad: await createSquad(actor, input) }, { status: 201 });
 });

@@ -1,0 +1,8 @@
+import { guard, MANAGERS } from "@/lib/auth/guard";
+import { json, withApi } from "@/lib/api/handler";
+import { listCoaches } from "@/lib/data/squad-admin";
+
+export const GET = withApi(async () => {
+  const actor = await guard({ roles: MANAGERS });
+  return json({ coaches: await listCoaches(actor) });
+});

@@ -1,0 +1,11 @@
+import { guard, STAFF } from "@/lib/auth/guard";
+import { json, parseId, withApi } from "@/lib/api/handler";
+import { undoLastChange } from "@/lib/data/results";
+
+type Params = { sessionId: string };
+
+export const POST = withApi<Params>(async (_request, { params }) => {
+  const sessionId = parseId((await params).sessionId, "Session");
+  const actor = await guard({ roles: STAFF, sessionId });
+  return json({ undone: await undoLastChange(actor, sessionId) });
+});

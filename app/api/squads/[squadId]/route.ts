@@ -1,0 +1,20 @@
+import { guard, OWNERS, STAFF } from "@/lib/auth/guard";
+import { json, parseId, readJson, withApi } from "@/lib/api/handler";
+import { getSquad, updateSquad } from "@/lib/data/squad-admin";
+import { squadUpdateSchema } from "@/lib/validation/roster";
+
+type Params = { squadId: string };
+
+export const GET = withApi<Params>(async (_request, { params }) => {
+  const squadId = parseId((await params).squadId, "Squad");
+  const actor = await guard({ roles: STAFF, squadId });
+  return json(await getSquad(actor, squadId));
+});
+
+/** Renaming, archiving and assigning coaches belong to the owner. */
+export const PATCH = withApi<Params>(async (request, { params }) => {
+  const squadId = parseId((await params).squadId, "Squad");
+  const actor = await guard({ roles: OWNERS, squadId });
+  const input = await readJson(request, squadUpdateSchema);
+  return json({ squad: await updateSquad(actor, squadId, input) });
+});

@@ -1,0 +1,49 @@
+import { and, asc, eq } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { results, testingSessions, tests } from "@/db/schema";
+import type { Actor } from "./actors";
+import { sessionScope } from "./scope";
+
+export type AthleteResult = {
+  id: number;
+  sessionId: number;
+  date: string;
+  phase: string;
+  status: string;
+  testId: number;
+  testName: string;
+  unit: string;
+  direction: string;
+  trials: (number | null)[];
+  value: number | null;
+  flag: string | null;
+};
+
+/**
+ * One athlete's results over time. The caller must already have the athlete in reach;
+ * the session scope still applies, so an athlete sees only published sessions.
+ */
+export async function listAthleteResults(actor: Actor, athleteId: number): Promise<AthleteResult[]> {
+  return getDb()
+    .select({
+      id: results.id,
+      sessionId: results.sessionId,
+      date: testingSessions.date,
+      phase: testingSessions.phase,
+      status: testingSessions.status,
+      testId: results.testId,
+      testName: tests.name,
+      unit: tests.unit,
+      direction: tests.direction,
+      trials: results.trials,
+      value: results.value,
+      flag: results.flag,
+    })
+    .from(results)
+    .innerJoin(testingSessions, eq(testingSessions.id, results.sessionId))
+    .innerJoin(tests, eq(tests.id, results.testId))
+    .where(
+      and(eq(results.athleteId, athleteId), eq(results.organizationId, actor.organizationId), sessionScope(actor)),
+    )
+    .orderBy(asc(testingSessions.date), asc(tests.name));
+}

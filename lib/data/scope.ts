@@ -1,0 +1,57 @@
+/**
+ * WHERE-clause builders that keep every query inside the caller's reach:
+ * the organisation always, a coach's own squads, an athlete's own record.
+ */
+import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { squadAthletes, squadCoaches, squads, testingSessions, athletes } from "@/db/schema";
+import type { Actor } from "./actors";
+
+export const isManager = (actor: Actor) => actor.role === "owner" || actor.role === "scientist";
+
+/** Squads a coach is assigned to, inside the organisation. */
+export function coachSquadIds(actor: Actor) {
+  return getDb()
+    .select({ id: squadCoaches.squadId })
+    .from(squadCoaches)
+    .innerJoin(squads, eq(squads.id, squadCoaches.squadId))
+    .where(and(eq(squadCoaches.userId, actor.userId), eq(squads.organizationId, actor.organizationId)));
+}
+
+/** Athletes reachable through a coach's squads. */
+export function coachAthleteIds(actor: Actor) {
+  return getDb()
+    .select({ id: squadAthletes.athleteId })
+    .from(squadAthletes)
+    .where(inArray(squadAthletes.squadId, coachSquadIds(actor)));
+}
+
+const never = sql`0 = 1`;
+
+export function squadScope(actor: Actor): SQL {
+  const inOrg = eq(squads.organizationId, actor.organizationId);
+  if (isManager(actor)) return inOrg;
+  if (actor.role === "coach") return and(inOrg, inArray(squads.id, coachSquadIds(actor)))!;
+  return never;
+}
+
+export function athleteScope(actor: Actor): SQL {
+  const inOrg = eq(athletes.organizationId, actor.organizationId);
+  if (isManager(actor)) return inOrg;
+  if (actor.role === "coach") return and(inOrg, inArray(athletes.id, coachAthleteIds(actor)))!;
+  if (actor.athleteId) return and(inOrg, eq(athletes.id, actor.athleteId))!;
+  return never;
+}
+
+/** Athletes see only published sessions of squads they belong to. */
+export function sessionScope(actor: Actor): SQL {
+  const inOrg = eq(testingSessions.organizationId, actor.organizationId);
+  if (isManager(actor)) return inOrg;
+  if (actor.role === "coach") return and(inOrg, inArray(testingSessions.squadId, coachSquadIds(actor)))!;
+  if (!actor.athleteId) return never;
+  const ownSquads = getDb()
+    .select({ id: squadAthletes.squadId })
+    .from(squadAthletes)
+    .where(eq(squadAthletes.athleteId, actor.athleteId));
+  return and(inOrg, eq(testingSessions.status, "published"), inArray(testingSessions.squadId, ownSquads))!;
+}

@@ -1,0 +1,171 @@
+import { and, asc, count, desc, eq, inArray, notInArray, or } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { athletes, auditEvents, results, sessionTests, squadAthletes, squads, testingSessions, tests } from "@/db/schema";
+import { conflict, forbidden, invalidInput, notFound } from "@/lib/api/errors";
+import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
+import type { Actor } from "./actors";
+import { listResultRows } from "./results";
+import { isManager, sessionScope, squadScope } from "./scope";
+
+const sessionColumns = {
+  id: testingSessions.id,
+  squadId: testingSessions.squadId,
+  squadName: squads.name,
+  date: testingSessions.date,
+  phase: testingSessions.phase,
+  status: testingSessions.status,
+  notes: testingSessions.notes,
+  version: testingSessions.version,
+};
+
+export async function listSessions(actor: Actor, { squadId }: { squadId?: number } = {}) {
+  const db = getDb();
+  const where = squadId ? and(sessionScope(actor), eq(testingSessions.squadId, squadId)) : sessionScope(actor);
+  const rows = await db
+    .select(sessionColumns)
+    .from(testingSessions)
+    .innerJoin(squads, eq(squads.id, testingSessions.squadId))
+    .where(where)
+    .orderBy(desc(testingSessions.date), desc(testingSessions.id));
+  if (rows.length === 0) return [];
+  const ids = rows.map((r) => r.id);
+  const battery = await db
+    .select({ sessionId: sessionTests.sessionId, testId: sessionTests.testId })
+    .from(sessionTests)
+    .where(inArray(sessionTests.sessionId, ids))
+    .orderBy(asc(sessionTests.position));
+  const counts = await db
+    .select({ sessionId: results.sessionId, n: count() })
+    .from(results)
+    .where(inArray(results.sessionId, ids))
+    .groupBy(results.sessionId);
+  const countBy = new Map(counts.map((c) => [c.sessionId, c.n]));
+  return rows.map((r) => ({
+    ...r,
+    testIds: battery.filter((b) => b.sessionId === r.id).map((b) => b.testId),
+    resultCount: countBy.get(r.id) ?? 0,
+  }));
+}
+
+/** The battery's tests must be active tests of the caller's organisation. */
+async function checkBattery(db: Pick<ReturnType<typeof getDb>, "select">, actor: Actor, testIds: number[]) {
+  const unique = [...new Set(testIds)];
+  const found = await db
+    .select({ id: tests.id })
+    .from(tests)
+    .where(and(inArray(tests.id, unique), eq(tests.organizationId, actor.organizationId), eq(tests.archived, false)));
+  if (found.length !== unique.length) throw invalidInput("Pick tests from your test library.", { testIds: "Unknown or archived test." });
+  return unique;
+}
+
+export async function createSession(actor: Actor, input: SessionCreateInput) {
+  return getDb().transaction(async (tx) => {
+    const [squad] = await tx.select({ id: squads.id, archived: squads.archived }).from(squads).where(and(eq(squads.id, input.squadId), squadScope(actor)));
+    if (!squad) throw notFound("Squad");
+    if (squad.archived) throw invalidInput("That squad is archived.", { squadId: "Archived squad." });
+    const testIds = await checkBattery(tx, actor, input.testIds);
+    const [session] = await tx
+      .insert(testingSessions)
+      .values({ organizationId: actor.organizationId, squadId: input.squadId, date: input.date, phase: input.phase, notes: input.notes, createdBy: actor.userId })
+      .returning({ id: testingSessions.id });
+    await tx.insert(sessionTests).values(testIds.map((testId, position) => ({ sessionId: session.id, testId, position })));
+    await tx.insert(auditEvents).values({
+      organizationId: actor.organizationId, actorUserId: actor.userId, action: "session.create", entityType: "session", entityId: session.id, sessionId: session.id, after: { ...input, testIds },
+    });
+    return session;
+  });
+}
+
+export async function getSessionHeader(actor: Actor, sessionId: number) {
+  const [row] = await getDb()
+    .select(sessionColumns)
+    .from(testingSessions)
+    .innerJoin(squads, eq(squads.id, testingSessions.squadId))
+    .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)));
+  if (!row) throw notFound("Session");
+  return row;
+}
+
+export const canEditSession = (actor: Actor, status: string) =>
+  isManager(actor) || (actor.role === "coach" && status === "draft");
+
+export async function sessionBattery(sessionId: number) {
+  return getDb()
+    .select({
+      id: tests.id,
+      name: tests.name,
+      unit: tests.unit,
+      decimals: tests.decimals,
+      direction: tests.direction,
+      trialRule: tests.trialRule,
+      trialsPerSession: tests.trialsPerSession,
+      plausibleMin: tests.plausibleMin,
+      plausibleMax: tests.plausibleMax,
+    })
+    .from(sessionTests)
+    .innerJoin(tests, eq(tests.id, sessionTests.testId))
+    .where(eq(sessionTests.sessionId, sessionId))
+    .orderBy(asc(sessionTests.position));
+}
+
+/** Everything the Session sheet needs: battery, roster (plus anyone with a result) and results. */
+export async function getSessionSheet(actor: Actor, sessionId: number) {
+  const db = getDb();
+  const session = await getSessionHeader(actor, sessionId);
+  const battery = await sessionBattery(sessionId);
+  const resultRows = await listResultRows(sessionId);
+  const squadMembers = db.select({ id: squadAthletes.athleteId }).from(squadAthletes).where(eq(squadAthletes.squadId, session.squadId));
+  const withResult = db.select({ id: results.athleteId }).from(results).where(eq(results.sessionId, sessionId));
+  // Archived athletes stay on the sheet only where they already have a result.
+  const athleteList = await db
+    .select({ id: athletes.id, name: athletes.name, position: athletes.position })
+    .from(athletes)
+    .where(
+      and(
+        eq(athletes.organizationId, actor.organizationId),
+        or(and(inArray(athletes.id, squadMembers), eq(athletes.archived, false)), inArray(athletes.id, withResult)),
+      ),
+    )
+    .orderBy(asc(athletes.name));
+  return {
+    session,
+    tests: battery,
+    athletes: athleteList,
+    results: resultRows,
+    canEdit: canEditSession(actor, session.status),
+    canPublish: isManager(actor),
+  };
+}
+
+export async function updateSession(actor: Actor, sessionId: number, input: SessionUpdateInput) {
+  const { version, testIds, ...changes } = input;
+  if (changes.status && !isManager(actor)) throw forbidden("Only a sport scientist or the owner publishes results.");
+  return getDb().transaction(async (tx) => {
+    const [before] = await tx
+      .select({ id: testingSessions.id, status: testingSessions.status, version: testingSessions.version, date: testingSessions.date, phase: testingSessions.phase, notes: testingSessions.notes })
+      .from(testingSessions)
+      .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)));
+    if (!before) throw notFound("Session");
+    if (!canEditSession(actor, before.status)) throw forbidden("This session is published; ask a sport scientist to change it.");
+    if (before.version !== version) throw conflict("Someone else changed this session since you opened it. Reload to see their change.", { current: before });
+    const publishing = changes.status === "published" && before.status !== "published";
+    await tx
+      .update(testingSessions)
+      .set({ ...changes, version: version + 1, ...(publishing ? { publishedAt: new Date() } : {}) })
+      .where(eq(testingSessions.id, sessionId));
+    if (testIds) {
+      const unique = await checkBattery(tx, actor, testIds);
+      const [orphaned] = await tx
+        .select({ n: count() })
+        .from(results)
+        .where(and(eq(results.sessionId, sessionId), notInArray(results.testId, unique)));
+      if ((orphaned?.n ?? 0) > 0) throw conflict("A test with results in this session cannot leave its battery.");
+      await tx.delete(sessionTests).where(eq(sessionTests.sessionId, sessionId));
+      await tx.insert(sessionTests).values(unique.map((testId, position) => ({ sessionId, testId, position })));
+    }
+    await tx.insert(auditEvents).values({
+      organizationId: actor.organizationId, actorUserId: actor.userId, action: publishing ? "session.publish" : "session.update", entityType: "session", entityId: sessionId, sessionId, before, after: input,
+    });
+    return { id: sessionId, version: version + 1, ...changes };
+  });
+}

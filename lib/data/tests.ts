@@ -1,0 +1,133 @@
+import { and, asc, count, eq } from "drizzle-orm";
+import { getDb } from "@/db/client";
+import { auditEvents, results, sessionTests, tests } from "@/db/schema";
+import { conflict, notFound } from "@/lib/api/errors";
+import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
+import type { Actor } from "./actors";
+import { isUniqueViolation } from "./errors";
+
+export const testColumns = {
+  id: tests.id,
+  name: tests.name,
+  unit: tests.unit,
+  decimals: tests.decimals,
+  direction: tests.direction,
+  trialRule: tests.trialRule,
+  trialsPerSession: tests.trialsPerSession,
+  swcMethod: tests.swcMethod,
+  swcValue: tests.swcValue,
+  cvPercent: tests.cvPercent,
+  typicalError: tests.typicalError,
+  typicalErrorDf: tests.typicalErrorDf,
+  typicalErrorSource: tests.typicalErrorSource,
+  plausibleMin: tests.plausibleMin,
+  plausibleMax: tests.plausibleMax,
+  archived: tests.archived,
+  version: tests.version,
+};
+
+export type TestRow = {
+  id: number; name: string; unit: string; decimals: number; direction: "higher" | "lower"; trialRule: "best" | "mean";
+  trialsPerSession: number; swcMethod: "sd-factor" | "fixed" | "cv-factor"; swcValue: number; cvPercent: number | null;
+  typicalError: number | null; typicalErrorDf: number | null; typicalErrorSource: string | null;
+  plausibleMin: number | null; plausibleMax: number | null; archived: boolean; version: number;
+};
+
+const nameTaken = (name: string) => conflict(`A test called "${name}" already exists in your library.`);
+
+export async function listTests(actor: Actor, { includeArchived = false } = {}) {
+  const db = getDb();
+  const where = includeArchived
+    ? eq(tests.organizationId, actor.organizationId)
+    : and(eq(tests.organizationId, actor.organizationId), eq(tests.archived, false));
+  const rows = await db.select(testColumns).from(tests).where(where).orderBy(asc(tests.name));
+  const counts = await db
+    .select({ testId: results.testId, n: count() })
+    .from(results)
+    .where(eq(results.organizationId, actor.organizationId))
+    .groupBy(results.testId);
+  const byTest = new Map(counts.map((c) => [c.testId, c.n]));
+  return rows.map((r) => ({ ...r, resultCount: byTest.get(r.id) ?? 0 }));
+}
+
+export async function getTest(actor: Actor, testId: number): Promise<TestRow> {
+  const [row] = await getDb()
+    .select(testColumns)
+    .from(tests)
+    .where(and(eq(tests.id, testId), eq(tests.organizationId, actor.organizationId)));
+  if (!row) throw notFound("Test");
+  return row;
+}
+
+export async function createTest(actor: Actor, input: TestCreateInput): Promise<TestRow> {
+  try {
+    return await getDb().transaction(async (tx) => {
+      const [row] = await tx
+        .insert(tests)
+        .values({ ...input, organizationId: actor.organizationId })
+        .returning(testColumns);
+      await tx.insert(auditEvents).values({
+        organizationId: actor.organizationId, actorUserId: actor.userId, action: "test.create", entityType: "test", entityId: row.id, after: row,
+      });
+      return row;
+    });
+  } catch (error) {
+    if (isUniqueViolation(error)) throw nameTaken(input.name);
+    throw error;
+  }
+}
+
+/** Applies an edit only if nobody changed the test since `version` was read. */
+export async function updateTest(actor: Actor, testId: number, input: TestUpdateInput): Promise<TestRow> {
+  const { version, ...changes } = input;
+  try {
+    return await getDb().transaction(async (tx) => {
+      const [before] = await tx
+        .select(testColumns)
+        .from(tests)
+        .where(and(eq(tests.id, testId), eq(tests.organizationId, actor.organizationId)));
+      if (!before) throw notFound("Test");
+      if (before.version !== version) {
+        throw conflict("Someone else changed this test since you opened it. Reload to see their change.", { current: before });
+      }
+      const merged = { ...before, ...changes };
+      if (merged.plausibleMin !== null && merged.plausibleMax !== null && merged.plausibleMin >= merged.plausibleMax) {
+        throw conflict("The lowest plausible value must be below the highest.");
+      }
+      const [row] = await tx
+        .update(tests)
+        .set({ ...changes, version: version + 1 })
+        .where(and(eq(tests.id, testId), eq(tests.version, version)))
+        .returning(testColumns);
+      await tx.insert(auditEvents).values({
+        organizationId: actor.organizationId, actorUserId: actor.userId, action: "test.update", entityType: "test", entityId: testId, before, after: row,
+      });
+      return row;
+    });
+  } catch (error) {
+    if (isUniqueViolation(error)) throw nameTaken(input.name ?? "");
+    throw error;
+  }
+}
+
+/** A test with results (or in a session's battery) is archived, never deleted. */
+export async function deleteOrArchiveTest(actor: Actor, testId: number): Promise<{ deleted: true } | { archived: true }> {
+  return getDb().transaction(async (tx) => {
+    const [test] = await tx
+      .select({ id: tests.id, name: tests.name })
+      .from(tests)
+      .where(and(eq(tests.id, testId), eq(tests.organizationId, actor.organizationId)));
+    if (!test) throw notFound("Test");
+    const [used] = await tx.select({ n: count() }).from(results).where(eq(results.testId, testId));
+    const [inBattery] = await tx.select({ n: count() }).from(sessionTests).where(eq(sessionTests.testId, testId));
+    const audit = { organizationId: actor.organizationId, actorUserId: actor.userId, entityType: "test", entityId: testId, before: test };
+    if ((used?.n ?? 0) > 0 || (inBattery?.n ?? 0) > 0) {
+      await tx.update(tests).set({ archived: true }).where(eq(tests.id, testId));
+      await tx.insert(auditEvents).values({ ...audit, action: "test.archive" });
+      return { archived: true as const };
+    }
+    await tx.delete(tests).where(eq(tests.id, testId));
+    await tx.insert(auditEvents).values({ ...audit, action: "test.delete" });
+    return { deleted: true as const };
+  });
+}

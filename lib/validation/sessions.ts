@@ -1,0 +1,43 @@
+import { z } from "zod";
+import { PHASES, RESULT_FLAGS, SESSION_STATUSES } from "@/db/schema";
+import { idSchema, isoDate, optionalText } from "./common";
+
+export const sessionCreateSchema = z.object({
+  squadId: idSchema,
+  date: isoDate,
+  phase: z.enum(PHASES, { message: "Choose the phase of the block." }),
+  testIds: z.array(idSchema).min(1, "Pick at least one test for the battery.").max(30),
+  notes: optionalText(2000, "Notes"),
+});
+export type SessionCreateInput = z.infer<typeof sessionCreateSchema>;
+
+export const sessionUpdateSchema = z.object({
+  version: z.number().int().positive(),
+  date: isoDate.optional(),
+  phase: z.enum(PHASES).optional(),
+  status: z.enum(SESSION_STATUSES).optional(),
+  notes: optionalText(2000, "Notes").optional(),
+  testIds: z.array(idSchema).min(1).max(30).optional(),
+});
+export type SessionUpdateInput = z.infer<typeof sessionUpdateSchema>;
+
+export const MAX_TRIALS = 10;
+
+/** A trial score as typed: a finite number, or null for an empty slot. */
+export const trialValue = z.number().finite("Scores must be numbers.").nullable();
+
+export const resultWriteSchema = z.object({
+  athleteId: idSchema,
+  testId: idSchema,
+  trials: z.array(trialValue).max(MAX_TRIALS, `At most ${MAX_TRIALS} trials.`),
+  flag: z.enum(RESULT_FLAGS).nullable().default(null),
+  note: optionalText(500, "Note"),
+  /** The version the writer read; null when the cell had no result yet. */
+  version: z.number().int().positive().nullable(),
+});
+export type ResultWriteInput = z.infer<typeof resultWriteSchema>;
+
+export const resultsBatchSchema = z.object({
+  results: z.array(resultWriteSchema).min(1, "Nothing to save.").max(5000, "Save at most 5000 results at once."),
+});
+export type ResultsBatchInput = z.infer<typeof resultsBatchSchema>;
