@@ -17,5 +17,5 @@ export async function proxy(request: NextRequest) {
 
 export const config = {
   // API routes answer 401 themselves; static assets, the sign-in page and the icon stay public.
-  matcher: ["/((?!api|_next/static|_next/image|icon.svg|favicon.ico|sign-in|invite|reset-password).*)"],
+  matcher: ["/((?!api|_next/static|_next/image|icon.svg|favicon.ico|sign-in).*)"],
 };

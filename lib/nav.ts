@@ -2,9 +2,14 @@ import type { Role } from "@/db/schema";
 
 export type NavItem = { href: string; label: string; roles: readonly Role[] };
 
+const STAFF_ROLES: readonly Role[] = ["owner", "scientist", "coach"];
+
 /** Screens by role, with our own names (PRODUCT.md §6). Only screens that exist are listed. */
 export const NAV_ITEMS: NavItem[] = [
-  { href: "/", label: "Squads", roles: ["owner", "scientist", "coach"] },
+  { href: "/", label: "Squads", roles: STAFF_ROLES },
+  { href: "/squads", label: "Roster", roles: STAFF_ROLES },
+  { href: "/tests", label: "Test library", roles: STAFF_ROLES },
+  { href: "/sessions", label: "Sessions", roles: STAFF_ROLES },
   { href: "/", label: "My progress", roles: ["athlete"] },
 ];
 

@@ -29,6 +29,12 @@ export function assertPositive(value: number, what: string): void {
   if (value <= 0) throw new StatsInputError(`${what} must be above zero (got ${show(value)}).`);
 }
 
+/** A finite number of at least `min`. */
+export function assertAtLeast(value: number, min: number, what: string): void {
+  assertFinite(value, what);
+  if (value < min) throw new StatsInputError(`${what} must be at least ${min} (got ${show(value)}).`);
+}
+
 /** A probability strictly between 0 and 1, e.g. a confidence level, alpha or power. */
 export function assertProbability(value: number, what: string): void {
   if (typeof value !== "number" || !(value > 0 && value < 1)) {
@@ -82,21 +88,20 @@ export function assertFiniteScores(values: ArrayLike<number>, label: string): vo
     const v = values[i];
     if (typeof v !== "number" || !Number.isFinite(v)) {
       throw new StatsInputError(
-        `${capitalise(label)} score ${i + 1} is not a number (got ${String(v)}).`,
+        `${label ? `${capitalise(label)} score` : "Score"} ${i + 1} is not a number (got ${String(v)}).`,
       );
     }
   }
 }
 
-/** At least `min` finite scores. */
+/** At least `min` finite scores; `label` (may be "") names them, e.g. "baseline". */
 export function assertSample(values: ArrayLike<number>, label: string, min = 2): void {
+  const named = label ? `${label} scores` : "scores";
   if (values == null || typeof values.length !== "number") {
-    throw new StatsInputError(`${capitalise(label)} scores must be a list of numbers.`);
+    throw new StatsInputError(`The ${named} must be a list of numbers.`);
   }
   if (values.length < min) {
-    throw new StatsInputError(
-      `At least ${min} ${label} scores are needed (got ${values.length}).`,
-    );
+    throw new StatsInputError(`At least ${min} ${named} are needed (got ${values.length}).`);
   }
   assertFiniteScores(values, label);
 }
