@@ -37,7 +37,7 @@ beforeAll(async () => {
 });
 afterAll(() => env.cleanup());
 
-const p = (name: string, value: number) => ({ [name]: String(value) });
+const p = <K extends string>(name: K, value: number) => ({ [name]: String(value) }) as Record<K, string>;
 
 describe("Test library", () => {
   it("owner and scientist create and edit; a coach only reads", async () => {
