@@ -1,5 +1,6 @@
 "use client";
 
+import Link from "next/link";
 import type { Role } from "@/db/schema";
 import { useApi } from "@/hooks/use-api";
 import type { SquadSummary } from "@/lib/data/squads";
@@ -44,14 +45,20 @@ export function SquadsOverview({ role }: { role: Role }) {
               {data.squads.map((squad) => (
                 <tr key={squad.id} className="border-b border-line last:border-0">
                   <td className="px-4 py-3">
-                    <span className="font-semibold">{squad.name}</span>
+                    <Link href={`/squads/${squad.id}`} className="font-semibold underline-offset-2 hover:underline">
+                      {squad.name}
+                    </Link>
                     {squad.sport && <span className="ml-2 text-ink-faint">{squad.sport}</span>}
                   </td>
                   <td className="num px-4 py-3 text-right">{squad.athleteCount}</td>
                   <td className="px-4 py-3">
-                    {squad.latestSession
-                      ? `${formatDate(squad.latestSession.date)} · ${PHASE_LABELS[squad.latestSession.phase as Phase]}`
-                      : <span className="text-ink-faint">No sessions yet</span>}
+                    {squad.latestSession ? (
+                      <Link href={`/sessions/${squad.latestSession.id}`} className="underline-offset-2 hover:underline">
+                        {formatDate(squad.latestSession.date)} · {PHASE_LABELS[squad.latestSession.phase as Phase]}
+                      </Link>
+                    ) : (
+                      <span className="text-ink-faint">No sessions yet</span>
+                    )}
                   </td>
                   <td className="px-4 py-3">
                     {squad.latestSession ? STATUS_LABELS[squad.latestSession.status as SessionStatus] : "–"}

@@ -1,0 +1,48 @@
+/**
+ * Reads a typed score. Accepts a decimal point or a decimal comma ("2,31" → 2.31), as
+ * spreadsheets and timing-gate exports in many countries write them. Empty text is an
+ * empty slot; anything else that is not a plain number is refused, never guessed.
+ */
+export type ParsedDecimal = { ok: true; value: number | null } | { ok: false; message: string };
+
+const PLAIN_NUMBER = /^[+-]?(\d+([.,]\d*)?|[.,]\d+)$/;
+
+export function parseDecimal(text: string): ParsedDecimal {
+  const trimmed = text.trim();
+  if (trimmed === "") return { ok: true, value: null };
+  if (!PLAIN_NUMBER.test(trimmed)) return { ok: false, message: `“${trimmed}” is not a number.` };
+  const value = Number(trimmed.replace(",", "."));
+  if (!Number.isFinite(value)) return { ok: false, message: `“${trimmed}” is not a number.` };
+  return { ok: true, value };
+}
+
+/** For react-hook-form `setValueAs`: empty → null, a number → number, anything else → NaN (zod refuses it). */
+export function numberOrNull(raw: unknown): number | null {
+  if (typeof raw === "number") return Number.isNaN(raw) ? null : raw;
+  if (raw === null || raw === undefined) return null;
+  const parsed = parseDecimal(String(raw));
+  return parsed.ok ? parsed.value : Number.NaN;
+}
+
+/** Like numberOrNull for required numbers: empty becomes NaN so the schema reports it. */
+export function numberRequired(raw: unknown): number {
+  const value = numberOrNull(raw);
+  return value === null ? Number.NaN : value;
+}
+
+/** A number as it was recorded, without padding or rounding away what was typed. */
+export function plainNumber(value: number | null | undefined): string {
+  return value === null || value === undefined || !Number.isFinite(value) ? "" : String(value);
+}
+
+/**
+ * A recorded number padded to the test's decimals so columns line up ("1.8" → "1.80"),
+ * but never rounded: a value typed with more digits shows them all.
+ */
+export function paddedNumber(value: number | null | undefined, decimals: number): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return "";
+  const written = String(value);
+  if (written.includes("e")) return written;
+  const digits = written.split(".")[1]?.length ?? 0;
+  return value.toFixed(Math.max(decimals, digits));
+}

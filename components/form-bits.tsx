@@ -1,0 +1,48 @@
+"use client";
+
+import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
+import { ApiClientError } from "@/hooks/use-api";
+
+export function FieldError({ id, message }: { id?: string; message?: string }) {
+  if (!message) return null;
+  return (
+    <p id={id} className="mt-1 text-sm text-decline">
+      {message}
+    </p>
+  );
+}
+
+export function FormAlert({ message }: { message: string | null }) {
+  if (!message) return null;
+  return (
+    <p role="alert" className="rounded-md border border-decline bg-decline-soft px-3 py-2 text-sm">
+      {message}
+    </p>
+  );
+}
+
+type ErrorBody = { error?: { message?: string; fields?: Record<string, string> } };
+
+/**
+ * Puts a 422's `error.fields` next to the matching form fields. Returns the message to
+ * show above the form (the general message, plus any field the form does not have).
+ */
+export function applyServerErrors<T extends FieldValues>(
+  error: unknown,
+  setError: UseFormSetError<T>,
+  formFields: readonly string[],
+): string {
+  if (!(error instanceof ApiClientError)) return error instanceof Error ? error.message : "The change could not be saved.";
+  const fields = (error.body as ErrorBody | null)?.error?.fields ?? {};
+  const leftover: string[] = [];
+  for (const [key, message] of Object.entries(fields)) {
+    const root = key.split(".")[0];
+    if (formFields.includes(root)) setError(root as Path<T>, { type: "server", message });
+    else leftover.push(message);
+  }
+  // A taken name comes back as a 409 without fields; it belongs beside the name.
+  if (error.status === 409 && /already/i.test(error.message) && formFields.includes("name")) {
+    setError("name" as Path<T>, { type: "server", message: error.message });
+  }
+  return [error.message, ...leftover].join(" ");
+}

@@ -1,0 +1,139 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { Controller, useForm } from "react-hook-form";
+import type { z } from "zod";
+import { FieldError, FormAlert, applyServerErrors } from "@/components/form-bits";
+import { PHASES } from "@/db/schema";
+import type { SquadListItem, TestItem } from "@/hooks/api-types";
+import { fetchJson } from "@/hooks/use-api";
+import { PHASE_LABELS } from "@/lib/labels";
+import { sessionCreateSchema, type SessionCreateInput } from "@/lib/validation/sessions";
+
+const FIELDS = ["squadId", "date", "phase", "testIds", "notes"] as const;
+
+function today() {
+  const d = new Date();
+  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`;
+}
+
+/** A dated testing session for one squad, with its battery of tests. */
+export function SessionCreateForm({
+  squads,
+  tests,
+  defaultSquadId,
+  onDone,
+}: {
+  squads: SquadListItem[];
+  tests: TestItem[];
+  defaultSquadId: number | null;
+  onDone: (session: { id: number }) => void;
+}) {
+  const [failure, setFailure] = useState<string | null>(null);
+  const {
+    register,
+    control,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<z.input<typeof sessionCreateSchema>, unknown, SessionCreateInput>({
+    resolver: zodResolver(sessionCreateSchema),
+    defaultValues: {
+      squadId: defaultSquadId ?? (squads.length === 1 ? squads[0].id : undefined),
+      date: today(),
+      testIds: [],
+    },
+  });
+
+  async function onSubmit(values: SessionCreateInput) {
+    setFailure(null);
+    try {
+      const { session } = await fetchJson<{ session: { id: number } }>("/api/sessions", { method: "POST", body: JSON.stringify(values) });
+      onDone(session);
+    } catch (error) {
+      setFailure(applyServerErrors(error, setError, FIELDS));
+    }
+  }
+
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+      <div className="grid gap-4 sm:grid-cols-3">
+        <div>
+          <label htmlFor="session-squad" className="label">Squad</label>
+          <select id="session-squad" className="field" {...register("squadId", { setValueAs: (v) => (v === "" ? undefined : Number(v)) })}>
+            <option value="">Choose…</option>
+            {squads.map((s) => (
+              <option key={s.id} value={s.id}>{s.name}</option>
+            ))}
+          </select>
+          <FieldError message={errors.squadId?.message && "Choose the squad."} />
+        </div>
+        <div>
+          <label htmlFor="session-date" className="label">Date</label>
+          <input id="session-date" type="date" className="field" {...register("date")} />
+          <FieldError message={errors.date?.message} />
+        </div>
+        <div>
+          <label htmlFor="session-phase" className="label">Phase</label>
+          <select id="session-phase" className="field" {...register("phase")}>
+            <option value="">Choose…</option>
+            {PHASES.map((p) => (
+              <option key={p} value={p}>{PHASE_LABELS[p]}</option>
+            ))}
+          </select>
+          <FieldError message={errors.phase?.message} />
+        </div>
+      </div>
+      <fieldset>
+        <legend className="label">Battery</legend>
+        <Controller
+          control={control}
+          name="testIds"
+          render={({ field }) => {
+            const chosen = field.value ?? [];
+            return (
+              <div className="grid gap-1 rounded-md border border-line p-3 sm:grid-cols-2">
+                {tests.map((t) => (
+                  <label key={t.id} className="flex items-center gap-2 py-1 text-sm">
+                    <input
+                      type="checkbox"
+                      checked={chosen.includes(t.id)}
+                      onBlur={field.onBlur}
+                      onChange={(e) =>
+                        field.onChange(
+                          e.target.checked
+                            ? tests.filter((x) => x.id === t.id || chosen.includes(x.id)).map((x) => x.id)
+                            : chosen.filter((id) => id !== t.id),
+                        )
+                      }
+                    />
+                    <span className="font-semibold">{t.name}</span>
+                    <span className="text-ink-faint">
+                      {t.unit} · {t.trialRule === "best" ? "best" : "mean"} of {t.trialsPerSession}
+                    </span>
+                  </label>
+                ))}
+                {tests.length === 0 && (
+                  <p className="text-sm text-ink-soft">The Test library is empty. Ask your sport scientist to add tests.</p>
+                )}
+              </div>
+            );
+          }}
+        />
+        <FieldError message={errors.testIds?.message} />
+      </fieldset>
+      <div>
+        <label htmlFor="session-notes" className="label">Notes (optional)</label>
+        <textarea id="session-notes" rows={2} className="field" placeholder="Conditions, surface, warm-up…" {...register("notes")} />
+        <FieldError message={errors.notes?.message} />
+      </div>
+      <FormAlert message={failure} />
+      <div className="flex justify-end">
+        <button type="submit" className="btn-primary" disabled={isSubmitting}>
+          {isSubmitting ? "Creating…" : "Create session"}
+        </button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,136 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Dialog } from "@/components/dialog";
+import type { Role } from "@/db/schema";
+import type { SessionListItem, SquadListItem, TestItem } from "@/hooks/api-types";
+import { useApi } from "@/hooks/use-api";
+import { useInvalidate } from "@/hooks/use-invalidate";
+import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
+import { PublishControl } from "./publish-control";
+import { SessionCreateForm } from "./session-create-form";
+
+/** Testing sessions of the caller's squads, newest first, with a squad filter and "New session". */
+export function SessionList({ role, initialSquadId }: { role: Role; initialSquadId: number | null }) {
+  const router = useRouter();
+  const invalidate = useInvalidate();
+  const [squadId, setSquadId] = useState<number | null>(initialSquadId);
+  const [creating, setCreating] = useState(false);
+  const squads = useApi<{ squads: SquadListItem[] }>("/api/squads");
+  const tests = useApi<{ tests: TestItem[] }>("/api/tests?archived=include");
+  const sessions = useApi<{ sessions: SessionListItem[] }>(squadId ? `/api/sessions?squadId=${squadId}` : "/api/sessions");
+  const testName = new Map((tests.data?.tests ?? []).map((t) => [t.id, t.name]));
+  const canPublish = role === "owner" || role === "scientist";
+
+  function chooseSquad(value: string) {
+    const id = value ? Number(value) : null;
+    setSquadId(id);
+    router.replace(id ? `/sessions?squadId=${id}` : "/sessions", { scroll: false });
+  }
+
+  const list = [...(sessions.data?.sessions ?? [])].sort((a, b) => b.date.localeCompare(a.date) || b.id - a.id);
+  return (
+    <section aria-labelledby="sessions-heading" className="space-y-4">
+      <div className="flex flex-wrap items-baseline justify-between gap-3">
+        <div>
+          <h1 id="sessions-heading" className="text-2xl font-bold">Sessions</h1>
+          <p className="text-sm text-ink-soft">Dated testing sessions. Open one to enter scores on its Session sheet.</p>
+        </div>
+        <div className="flex items-center gap-3">
+          <label htmlFor="session-filter" className="text-sm font-semibold">Squad</label>
+          <select id="session-filter" className="field w-auto" value={squadId ?? ""} onChange={(e) => chooseSquad(e.target.value)}>
+            <option value="">All squads</option>
+            {(squads.data?.squads ?? []).map((s) => (
+              <option key={s.id} value={s.id}>{s.name}</option>
+            ))}
+          </select>
+          <button type="button" className="btn-primary" disabled={!squads.data || !tests.data} onClick={() => setCreating(true)}>
+            New session
+          </button>
+        </div>
+      </div>
+
+      {sessions.isPending && <p role="status" className="text-ink-soft">Loading sessions…</p>}
+      {sessions.error && (
+        <div role="alert" className="card p-4">
+          <p className="font-semibold">Sessions could not load: {sessions.error.message}</p>
+          <button className="btn-quiet mt-2" onClick={() => sessions.refetch()}>Try again</button>
+        </div>
+      )}
+      {sessions.data && list.length === 0 && (
+        <p className="card p-6 text-ink-soft">No sessions yet{squadId ? " for this squad" : ""}. Create one with “New session”.</p>
+      )}
+      {list.length > 0 && (
+        <div className="card overflow-x-auto">
+          <table className="w-full text-left text-sm">
+            <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">
+              <tr>
+                <th className="px-3 py-2">Date</th>
+                <th className="px-3 py-2">Squad</th>
+                <th className="px-3 py-2">Phase</th>
+                <th className="px-3 py-2">Status</th>
+                <th className="px-3 py-2">Battery</th>
+                <th className="px-3 py-2 text-right">Results</th>
+                <th className="px-3 py-2"><span className="sr-only">Actions</span></th>
+              </tr>
+            </thead>
+            <tbody>
+              {list.map((s) => (
+                <tr key={s.id} className="border-b border-line align-top last:border-0">
+                  <td className="num whitespace-nowrap px-3 py-2.5">
+                    <Link href={`/sessions/${s.id}`} className="font-semibold underline-offset-2 hover:underline">
+                      {formatDate(s.date)}
+                    </Link>
+                  </td>
+                  <td className="whitespace-nowrap px-3 py-2.5">{s.squadName}</td>
+                  <td className="whitespace-nowrap px-3 py-2.5">{PHASE_LABELS[s.phase] ?? s.phase}</td>
+                  <td className="px-3 py-2.5">
+                    <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${s.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}>
+                      {STATUS_LABELS[s.status]}
+                    </span>
+                  </td>
+                  <td className="px-3 py-2.5 text-ink-soft">
+                    {s.testIds.map((id) => testName.get(id) ?? `Test ${id}`).join(" · ")}
+                    {s.notes && <div className="text-xs text-ink-faint">{s.notes}</div>}
+                  </td>
+                  <td className="num px-3 py-2.5 text-right">{s.resultCount}</td>
+                  <td className="px-3 py-2.5">
+                    <div className="flex justify-end gap-1.5 whitespace-nowrap">
+                      <Link href={`/sessions/${s.id}`} className="btn-quiet px-2 py-1 text-xs">Session sheet</Link>
+                      {canPublish && (
+                        <PublishControl
+                          compact
+                          sessionId={s.id}
+                          status={s.status}
+                          squadName={s.squadName}
+                          onDone={() => void invalidate("/api/sessions", "/api/squads")}
+                        />
+                      )}
+                    </div>
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+
+      <Dialog open={creating} wide title="New session" onClose={() => setCreating(false)}>
+        {creating && squads.data && tests.data && (
+          <SessionCreateForm
+            squads={squads.data.squads.filter((s) => !s.archived)}
+            tests={tests.data.tests.filter((t) => !t.archived)}
+            defaultSquadId={squadId}
+            onDone={(session) => {
+              setCreating(false);
+              void invalidate("/api/sessions", "/api/squads");
+              router.push(`/sessions/${session.id}`);
+            }}
+          />
+        )}
+      </Dialog>
+    </section>
+  );
+}

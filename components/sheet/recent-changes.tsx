@@ -1,0 +1,63 @@
+"use client";
+
+import type { AuditEvent } from "@/hooks/api-types";
+import { useApi } from "@/hooks/use-api";
+import { describeEntry, timeWords } from "./sheet-model";
+
+const ACTION_WORDS: Record<string, string> = {
+  "result.create": "entered",
+  "result.update": "changed",
+  "result.undo": "undid a change to",
+};
+
+function EventText({ e }: { e: AuditEvent }) {
+  if (e.action === "results.import") {
+    const rows = e.details?.rows;
+    return (
+      <>
+        <span className="font-semibold">{e.actorName ?? "Someone"}</span> imported{" "}
+        {rows !== undefined ? <span className="num">{rows}</span> : "the"} rows{e.details?.filename ? ` from ${e.details.filename}` : ""}
+      </>
+    );
+  }
+  return (
+    <>
+      <span className="font-semibold">{e.actorName ?? "Someone"}</span> {ACTION_WORDS[e.action] ?? e.action}{" "}
+      {e.athleteName ?? "an athlete"} · {e.testName ?? "a test"}:{" "}
+      <span className={`num ${e.undone ? "line-through" : ""}`}>
+        {describeEntry(e.before)} → {describeEntry(e.after)}
+      </span>
+    </>
+  );
+}
+
+/** The latest changes to this session's scores, newest first: who, when, old → new. */
+export function RecentChanges({ url }: { url: string }) {
+  const { data, error, isPending, refetch } = useApi<{ events: AuditEvent[] }>(url);
+  return (
+    <section aria-labelledby="changes-heading" className="card p-4">
+      <div className="mb-2 flex items-baseline justify-between">
+        <h2 id="changes-heading" className="font-bold">Recent changes</h2>
+        <button type="button" className="text-xs font-semibold text-ink-soft hover:text-ink" onClick={() => refetch()}>
+          Refresh
+        </button>
+      </div>
+      {isPending && <p role="status" className="text-sm text-ink-soft">Loading changes…</p>}
+      {error && <p role="alert" className="text-sm">Changes could not load: {error.message}</p>}
+      {data && data.events.length === 0 && <p className="text-sm text-ink-soft">No changes recorded yet.</p>}
+      {data && data.events.length > 0 && (
+        <ol className="max-h-80 divide-y divide-line overflow-y-auto text-sm">
+          {data.events.map((e) => (
+            <li key={e.id} className={`grid grid-cols-[6.5rem_1fr] gap-x-3 py-1.5 ${e.undone ? "text-ink-faint" : ""}`}>
+              <span className="num text-ink-faint">{timeWords(e.at)}</span>
+              <span>
+                <EventText e={e} />
+                {e.undone && <span className="ml-2 rounded bg-steady-soft px-1.5 text-xs text-steady">undone</span>}
+              </span>
+            </li>
+          ))}
+        </ol>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,138 @@
+"use client";
+
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import { PublishControl } from "@/components/sessions/publish-control";
+import { ApiClientError } from "@/hooks/use-api";
+import { useInvalidate } from "@/hooks/use-invalidate";
+import { useSessionSheet } from "@/hooks/use-session-sheet";
+import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
+import { RecentChanges } from "./recent-changes";
+import { SheetGrid } from "./sheet-grid";
+import { UndoButton } from "./undo-button";
+
+/** The Session sheet: fast, keyboard-first score entry for one testing session. */
+export function SessionSheet({ sessionId }: { sessionId: number }) {
+  const sheet = useSessionSheet(sessionId);
+  const invalidate = useInvalidate();
+  const { data, error, isPending, refetch } = sheet.query;
+  const [testFilter, setTestFilter] = useState<number | "all">("all");
+  const [announcement, setAnnouncement] = useState("");
+  const tests = useMemo(
+    () => (data ? (testFilter === "all" ? data.tests : data.tests.filter((t) => t.id === testFilter)) : []),
+    [data, testFilter],
+  );
+
+  if (isPending) return <p role="status" className="text-ink-soft">Loading the Session sheet…</p>;
+  if (error) {
+    if (error instanceof ApiClientError && error.status === 404) {
+      return (
+        <div className="card mx-auto max-w-lg p-6 text-center">
+          <h1 className="text-lg font-bold">Session not found</h1>
+          <p className="mt-2 text-sm text-ink-soft">It does not exist, or it is outside what your account can see.</p>
+          <Link href="/sessions" className="btn-quiet mt-4">Back to Sessions</Link>
+        </div>
+      );
+    }
+    return (
+      <div role="alert" className="card p-4">
+        <p className="font-semibold">The Session sheet could not load: {error.message}</p>
+        <button className="btn-quiet mt-2" onClick={() => refetch()}>Try again</button>
+      </div>
+    );
+  }
+
+  const { session } = data;
+  const filled = data.results.filter((r) => r.value !== null || r.flag !== null).length;
+  const expected = data.athletes.length * data.tests.length;
+  const refused = Object.keys(sheet.invalid).length;
+  const unsaved = Object.values(sheet.cells).filter((c) => c.status === "failed" || c.status === "conflict").length;
+
+  return (
+    <section aria-labelledby="sheet-heading" className="space-y-3">
+      <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">
+        <Link href="/sessions" className="hover:underline">Sessions</Link> <span aria-hidden>›</span>{" "}
+        <Link href={`/squads/${session.squadId}`} className="hover:underline">{session.squadName}</Link>
+      </nav>
+      <div className="flex flex-wrap items-start justify-between gap-3">
+        <div>
+          <h1 id="sheet-heading" className="text-2xl font-bold">Session sheet</h1>
+          <p className="text-ink-soft">
+            <span className="font-semibold text-ink">{session.squadName}</span> · {PHASE_LABELS[session.phase]} ·{" "}
+            <span className="num">{formatDate(session.date)}</span> ·{" "}
+            <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${session.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}>
+              {STATUS_LABELS[session.status]}
+            </span>{" "}
+            · <span className="num">{filled}</span> of <span className="num">{expected}</span> results
+          </p>
+          {session.notes && <p className="mt-1 text-sm text-ink-soft">{session.notes}</p>}
+        </div>
+        <div className="flex flex-wrap items-center gap-2">
+          {data.canEdit && (
+            <>
+              <UndoButton sheet={sheet} onMessage={setAnnouncement} />
+              <Link href={`/sessions/${session.id}/import`} className="btn-quiet">Import CSV</Link>
+            </>
+          )}
+          {data.canPublish && (
+            <PublishControl
+              sessionId={session.id}
+              status={session.status}
+              version={session.version}
+              squadName={session.squadName}
+              onDone={() => void invalidate(`/api/sessions`, "/api/squads")}
+            />
+          )}
+        </div>
+      </div>
+
+      <p className="text-xs text-ink-faint">
+        <span aria-hidden>⚠︎ </span>
+        Maximal tests (sprints, jumps, 1RM, intermittent runs) carry injury risk: screen athletes, warm up, and test under
+        qualified supervision, following your organisation&apos;s and governing body&apos;s protocols. Scores support
+        training decisions; they are not a medical or return-to-play judgement.
+      </p>
+
+      {!data.canEdit && (
+        <p className="rounded-md border border-line bg-band px-3 py-2 text-sm">
+          Read only: your account cannot change the scores of this session
+          {session.status === "published" ? " (it is published to athletes)" : ""}.
+        </p>
+      )}
+
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <div className="flex items-center gap-2">
+          <label htmlFor="sheet-test-filter" className="text-sm font-semibold">Show</label>
+          <select
+            id="sheet-test-filter"
+            className="field w-auto py-1.5"
+            value={testFilter}
+            onChange={(e) => setTestFilter(e.target.value === "all" ? "all" : Number(e.target.value))}
+          >
+            <option value="all">All tests</option>
+            {data.tests.map((t) => (
+              <option key={t.id} value={t.id}>{t.name}</option>
+            ))}
+          </select>
+        </div>
+        {data.canEdit && (
+          <p className="text-xs text-ink-soft">
+            Type a score, <kbd className="rounded border border-line px-1">Tab</kbd> to the next trial,{" "}
+            <kbd className="rounded border border-line px-1">Enter</kbd> for the next athlete. Decimal commas are fine; paste
+            a block from a spreadsheet into the first cell.
+          </p>
+        )}
+      </div>
+
+      <p aria-live="polite" className="min-h-5 text-sm">
+        {announcement}
+        {refused > 0 && ` ${refused} cell${refused === 1 ? " holds" : "s hold"} text that is not a number and ${refused === 1 ? "was" : "were"} not saved.`}
+        {unsaved > 0 && ` ${unsaved} result${unsaved === 1 ? " needs" : "s need"} your attention below.`}
+      </p>
+
+      <SheetGrid data={data} tests={tests} sheet={sheet} canEdit={data.canEdit} onAnnounce={setAnnouncement} />
+
+      <RecentChanges url={sheet.auditUrl} />
+    </section>
+  );
+}

@@ -1,0 +1,143 @@
+"use client";
+
+import { Fragment } from "react";
+import { paddedNumber } from "@/components/decimal";
+import { RESULT_FLAGS, type ResultFlag } from "@/db/schema";
+import type { SheetTest } from "@/hooks/api-types";
+import type { SessionSheetState } from "@/hooks/use-session-sheet";
+import { FLAG_LABELS, formatValue } from "@/lib/labels";
+import { reduceTrials, trialSpread } from "@/lib/trials";
+import { CellIssues, type Issue } from "./cell-issues";
+import { CellStatus } from "./cell-status";
+import { TrialInput } from "./trial-input";
+import { cellKey, outsidePlausible, padTrials, plausibleWords, trialKey } from "./sheet-model";
+
+type Athlete = { id: number; name: string; position: string | null };
+
+/** One athlete: for each test its trial slots, the reduced score with its spread, and the flag. */
+export function SheetRow({
+  athlete,
+  row,
+  tests,
+  navIndex,
+  sheet,
+  canEdit,
+  totalColumns,
+}: {
+  athlete: Athlete;
+  row: number;
+  tests: SheetTest[];
+  navIndex: Map<string, number>;
+  sheet: SessionSheetState;
+  canEdit: boolean;
+  totalColumns: number;
+}) {
+  const issues: Issue[] = [];
+  return (
+    <>
+      <tr className="group">
+        <th scope="row" className="sticky left-0 z-10 border-b border-line bg-white px-3 py-1 text-left font-semibold group-hover:bg-paper">
+          <span className="block whitespace-nowrap text-sm">{athlete.name}</span>
+          {athlete.position && <span className="block text-xs font-normal text-ink-faint">{athlete.position}</span>}
+        </th>
+        {tests.map((test) => {
+          const key = cellKey(athlete.id, test.id);
+          const shown = sheet.shownFor(athlete.id, test.id);
+          const state = sheet.cells[key];
+          if (state && (state.status === "failed" || state.status === "conflict")) issues.push({ testId: test.id, testName: test.name, state });
+          const trials = padTrials(shown.trials, test.trialsPerSession);
+          const value = reduceTrials(trials, test.trialRule, test.direction);
+          const spread = trialSpread(trials);
+          const label = `${athlete.name}, ${test.name}`;
+          const dimmed = shown.flag === "absent" || shown.flag === "invalid";
+          return (
+            <Fragment key={test.id}>
+              {Array.from({ length: test.trialsPerSession }, (_, index) => {
+                const v = trials[index] ?? null;
+                const outside = outsidePlausible(test, v) ? plausibleWords(test) : null;
+                const trialLabel = `${label}, trial ${index + 1}`;
+                return (
+                  <td key={index} className={`border-b border-line px-0.5 py-1 ${index === 0 ? "border-l-2 pl-2" : ""}`}>
+                    {canEdit ? (
+                      <TrialInput
+                        id={`cell-${athlete.id}-${test.id}-${index}`}
+                        label={trialLabel}
+                        value={v}
+                        decimals={test.decimals}
+                        invalid={sheet.invalid[trialKey(athlete.id, test.id, index)]}
+                        outside={outside}
+                        dimmed={dimmed}
+                        row={row}
+                        col={navIndex.get(`${test.id}:${index}`) ?? 0}
+                        onCommit={(text) => sheet.enterTrials([{ athleteId: athlete.id, testId: test.id, index, text }])}
+                        onRevert={() => sheet.revertTrial(athlete.id, test.id, index)}
+                      />
+                    ) : (
+                      <span
+                        aria-label={trialLabel}
+                        title={outside ? `Outside the plausible range ${outside}` : undefined}
+                        className={`num block w-[4.25rem] rounded px-1.5 py-2 text-right ${outside ? "border border-dashed border-decline" : ""}`}
+                      >
+                        {v === null ? "–" : paddedNumber(v, test.decimals)}
+                      </span>
+                    )}
+                  </td>
+                );
+              })}
+              <td className="whitespace-nowrap border-b border-line px-2 py-1 text-right">
+                <span className="flex items-center justify-end gap-1.5">
+                  <span className="flex flex-col items-end leading-tight">
+                    <span className="num text-base font-semibold" aria-label={`${label}, ${test.trialRule === "best" ? "best" : "mean"}`}>
+                      {shown.flag && value === null ? <em className="text-sm font-normal text-ink-soft">{FLAG_LABELS[shown.flag]}</em> : formatValue(value, test.decimals)}
+                    </span>
+                    {spread !== null && (
+                      <span className="num text-[11px] text-ink-faint" title="Spread of the trials (highest − lowest)">
+                        ↔ {formatValue(spread, test.decimals)}
+                      </span>
+                    )}
+                  </span>
+                  {canEdit && <CellStatus state={state} label={label} onRetry={() => sheet.retry(athlete.id, test.id)} />}
+                </span>
+              </td>
+              <td className="border-b border-line px-1 py-1">
+                {canEdit ? (
+                  <select
+                    aria-label={`${label}, flag`}
+                    data-row={row}
+                    data-col={navIndex.get(`${test.id}:flag`) ?? 0}
+                    value={shown.flag ?? ""}
+                    onChange={(e) => sheet.setFlag(athlete.id, test.id, (e.target.value || null) as ResultFlag | null)}
+                    className={`h-10 w-[5.5rem] rounded border border-line bg-white px-1 text-sm focus:border-gain focus:outline-none focus:ring-2 focus:ring-gain ${
+                      shown.flag ? "font-semibold" : "text-ink-faint"
+                    }`}
+                  >
+                    <option value="">—</option>
+                    {RESULT_FLAGS.map((f) => (
+                      <option key={f} value={f}>{FLAG_LABELS[f]}</option>
+                    ))}
+                  </select>
+                ) : (
+                  <span className="text-sm">{shown.flag ? FLAG_LABELS[shown.flag] : ""}</span>
+                )}
+              </td>
+            </Fragment>
+          );
+        })}
+      </tr>
+      {issues.length > 0 && (
+        <tr>
+          <td colSpan={totalColumns} className="border-b border-line bg-paper px-2 py-1.5">
+            <div className="sticky left-2 w-fit max-w-[calc(100vw-4rem)]">
+              <CellIssues
+                athleteName={athlete.name}
+                issues={issues}
+                onRetry={(testId) => sheet.retry(athlete.id, testId)}
+                onTheirs={(testId) => sheet.takeTheirs(athlete.id, testId)}
+              />
+            </div>
+          </td>
+        </tr>
+      )}
+    </>
+  );
+}

@@ -1,0 +1,93 @@
+"use client";
+
+import { memo, useState } from "react";
+import { paddedNumber } from "@/components/decimal";
+
+/**
+ * One trial slot. Keeps what is typed locally and hands it over on blur; navigation keys
+ * and paste are handled by the grid (through the data-* attributes).
+ */
+export const TrialInput = memo(function TrialInput({
+  id,
+  label,
+  value,
+  decimals,
+  invalid,
+  outside,
+  dimmed,
+  row,
+  col,
+  onCommit,
+  onRevert,
+}: {
+  id: string;
+  label: string;
+  value: number | null;
+  decimals: number;
+  invalid?: { text: string; message: string };
+  /** Words for the plausible range when the value lies outside it. */
+  outside: string | null;
+  dimmed: boolean;
+  row: number;
+  col: number;
+  onCommit: (text: string) => void;
+  onRevert: () => void;
+}) {
+  const [draft, setDraft] = useState<string | null>(null);
+  const stored = invalid?.text ?? paddedNumber(value, decimals);
+  const shown = draft ?? stored;
+  const messageId = `${id}-msg`;
+
+  const tone = invalid
+    ? "border-decline bg-decline-soft ring-1 ring-decline"
+    : outside
+      ? "border-decline border-dashed ring-1 ring-decline/60"
+      : "border-line";
+
+  return (
+    <span className="relative block">
+      <input
+        id={id}
+        type="text"
+        inputMode="decimal"
+        autoComplete="off"
+        spellCheck={false}
+        aria-label={label}
+        aria-invalid={invalid ? true : undefined}
+        aria-describedby={invalid ? messageId : undefined}
+        title={invalid ? invalid.message : outside ? `Outside the plausible range ${outside}` : undefined}
+        data-row={row}
+        data-col={col}
+        value={shown}
+        onFocus={(e) => {
+          setDraft(stored);
+          e.currentTarget.select();
+        }}
+        onChange={(e) => setDraft(e.target.value)}
+        onBlur={() => {
+          const text = draft;
+          setDraft(null);
+          if (text !== null && text.trim() !== stored.trim()) onCommit(text);
+        }}
+        onKeyDown={(e) => {
+          if (e.key === "Escape") {
+            setDraft(paddedNumber(value, decimals));
+            onRevert();
+          }
+        }}
+        className={`num h-10 w-[4.25rem] rounded border px-1.5 text-right text-base focus:border-gain focus:outline-none focus:ring-2 focus:ring-gain ${tone} ${
+          dimmed ? "text-ink-faint" : "text-ink"
+        }`}
+      />
+      {invalid && (
+        <span
+          id={messageId}
+          role="alert"
+          className="pointer-events-none absolute bottom-full left-0 z-30 mb-1 whitespace-nowrap rounded bg-ink px-2 py-1 text-xs font-semibold text-white shadow"
+        >
+          {invalid.message}
+        </span>
+      )}
+    </span>
+  );
+});

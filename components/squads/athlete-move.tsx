@@ -1,0 +1,93 @@
+"use client";
+
+import { useQueries } from "@tanstack/react-query";
+import { useState } from "react";
+import { FormAlert } from "@/components/form-bits";
+import type { RosterAthlete, SquadListItem } from "@/hooks/api-types";
+import { fetchJson, useApi } from "@/hooks/use-api";
+
+/**
+ * Moves an athlete to another squad, or adds them to a second one. The API takes the full
+ * new list of squads, so the athlete's current squads (archived ones too) are read first and kept.
+ */
+export function AthleteMove({
+  athlete,
+  fromSquadId,
+  onDone,
+}: {
+  athlete: RosterAthlete;
+  fromSquadId: number;
+  onDone: (message: string) => void;
+}) {
+  const squads = useApi<{ squads: SquadListItem[] }>("/api/squads?archived=include");
+  const list = squads.data?.squads ?? [];
+  const rosters = useQueries({
+    queries: list.map((s) => {
+      const url = `/api/squads/${s.id}/athletes?archived=include`;
+      return { queryKey: [url], queryFn: () => fetchJson<{ athletes: RosterAthlete[] }>(url) };
+    }),
+  });
+  const [target, setTarget] = useState("");
+  const [keep, setKeep] = useState(false);
+  const [failure, setFailure] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  const loading = squads.isPending || rosters.some((r) => r.isPending);
+  const failed = squads.error ?? rosters.find((r) => r.error)?.error;
+  const current = list.filter((s, i) => s.id === fromSquadId || rosters[i]?.data?.athletes.some((a) => a.id === athlete.id));
+  const targets = list.filter((s) => !s.archived && !current.some((c) => c.id === s.id));
+
+  async function move() {
+    const targetId = Number(target);
+    const ids = new Set(current.map((s) => s.id));
+    if (!keep) ids.delete(fromSquadId);
+    ids.add(targetId);
+    setBusy(true);
+    setFailure(null);
+    try {
+      await fetchJson(`/api/athletes/${athlete.id}`, { method: "PATCH", body: JSON.stringify({ squadIds: [...ids] }) });
+      const name = list.find((s) => s.id === targetId)?.name ?? "the squad";
+      onDone(keep ? `${athlete.name} was added to ${name} as well.` : `${athlete.name} was moved to ${name}.`);
+    } catch (e) {
+      setFailure(e instanceof Error ? e.message : "The move failed.");
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  if (loading) return <p role="status" className="text-sm text-ink-soft">Reading {athlete.name}&apos;s squads…</p>;
+  if (failed) return <FormAlert message={`Squads could not load: ${failed.message}`} />;
+  return (
+    <div className="space-y-4">
+      <p className="text-sm">
+        {athlete.name} is in: <span className="font-semibold">{current.map((s) => s.name).join(", ")}</span>.
+        Their results stay with the sessions they were recorded in.
+      </p>
+      {targets.length === 0 ? (
+        <p className="text-sm text-ink-soft">There is no other squad you can move them to.</p>
+      ) : (
+        <>
+          <div>
+            <label htmlFor="move-target" className="label">Squad</label>
+            <select id="move-target" className="field" value={target} onChange={(e) => setTarget(e.target.value)}>
+              <option value="">Choose…</option>
+              {targets.map((s) => (
+                <option key={s.id} value={s.id}>{s.name}</option>
+              ))}
+            </select>
+          </div>
+          <label className="flex items-center gap-2 text-sm">
+            <input type="checkbox" checked={keep} onChange={(e) => setKeep(e.target.checked)} />
+            Keep them in this squad too
+          </label>
+        </>
+      )}
+      <FormAlert message={failure} />
+      <div className="flex justify-end">
+        <button type="button" className="btn-primary" disabled={!target || busy} onClick={move}>
+          {busy ? "Saving…" : keep ? "Add to squad" : "Move"}
+        </button>
+      </div>
+    </div>
+  );
+}

@@ -1,0 +1,111 @@
+"use client";
+
+import { useMemo, useState } from "react";
+import type { RosterAthlete } from "@/hooks/api-types";
+import { formatDate } from "@/lib/labels";
+
+type SortKey = "name" | "position" | "sex" | "dateOfBirth" | "externalId";
+const COLUMNS: { key: SortKey; label: string }[] = [
+  { key: "name", label: "Name" },
+  { key: "position", label: "Position / event" },
+  { key: "sex", label: "Sex" },
+  { key: "dateOfBirth", label: "Date of birth" },
+  { key: "externalId", label: "External id" },
+];
+const SEX_LABELS: Record<string, string> = { female: "Female", male: "Male", other: "Other" };
+
+function compare(a: string | null, b: string | null) {
+  return (a ?? "").localeCompare(b ?? "", "en", { numeric: true, sensitivity: "base" });
+}
+
+export function AthleteTable({
+  athletes,
+  renderActions,
+}: {
+  athletes: RosterAthlete[];
+  renderActions: (athlete: RosterAthlete) => React.ReactNode;
+}) {
+  const [query, setQuery] = useState("");
+  const [sort, setSort] = useState<{ key: SortKey; dir: 1 | -1 }>({ key: "name", dir: 1 });
+
+  // Missing values sort last in either direction, so gaps never hide the top of the list.
+  const shown = useMemo(() => {
+    const q = query.trim().toLowerCase();
+    const filtered = q
+      ? athletes.filter((a) =>
+          [a.name, a.position, a.externalId, a.sex ? SEX_LABELS[a.sex] : null, a.dateOfBirth].some((v) => v?.toLowerCase().includes(q)),
+        )
+      : athletes;
+    return [...filtered].sort((a, b) => {
+      const av = a[sort.key];
+      const bv = b[sort.key];
+      if (!av !== !bv) return av ? -1 : 1;
+      return compare(av, bv) * sort.dir || compare(a.name, b.name);
+    });
+  }, [athletes, query, sort]);
+
+  return (
+    <div className="space-y-3">
+      <div className="flex flex-wrap items-center gap-3">
+        <label htmlFor="roster-filter" className="sr-only">Filter athletes</label>
+        <input
+          id="roster-filter"
+          type="search"
+          className="field max-w-xs"
+          placeholder="Filter by name, position, id…"
+          value={query}
+          onChange={(e) => setQuery(e.target.value)}
+        />
+        <span className="text-sm text-ink-soft" aria-live="polite">
+          <span className="num">{shown.length}</span> of <span className="num">{athletes.length}</span> athletes
+        </span>
+      </div>
+      <div className="card overflow-x-auto">
+        <table className="w-full text-left text-sm">
+          <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">
+            <tr>
+              {COLUMNS.map((col) => {
+                const active = sort.key === col.key;
+                return (
+                  <th key={col.key} className="px-3 py-2" aria-sort={active ? (sort.dir === 1 ? "ascending" : "descending") : "none"}>
+                    <button
+                      type="button"
+                      className="flex items-center gap-1 font-semibold uppercase tracking-wide hover:text-ink"
+                      onClick={() => setSort(active ? { key: col.key, dir: sort.dir === 1 ? -1 : 1 } : { key: col.key, dir: 1 })}
+                    >
+                      {col.label}
+                      <span aria-hidden className={active ? "text-ink" : "opacity-30"}>{active && sort.dir === -1 ? "▼" : "▲"}</span>
+                    </button>
+                  </th>
+                );
+              })}
+              <th className="px-3 py-2"><span className="sr-only">Actions</span></th>
+            </tr>
+          </thead>
+          <tbody>
+            {shown.length === 0 && (
+              <tr>
+                <td colSpan={COLUMNS.length + 1} className="px-3 py-6 text-center text-ink-soft">
+                  {athletes.length === 0 ? "No athletes in this squad yet." : "No athlete matches the filter."}
+                </td>
+              </tr>
+            )}
+            {shown.map((a) => (
+              <tr key={a.id} className={`border-b border-line last:border-0 ${a.archived ? "bg-paper text-ink-faint" : ""}`}>
+                <td className="px-3 py-2">
+                  <span className="font-semibold">{a.name}</span>
+                  {a.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
+                </td>
+                <td className="px-3 py-2">{a.position ?? "–"}</td>
+                <td className="px-3 py-2">{a.sex ? SEX_LABELS[a.sex] : "–"}</td>
+                <td className="num whitespace-nowrap px-3 py-2">{a.dateOfBirth ? formatDate(a.dateOfBirth) : "–"}</td>
+                <td className="num px-3 py-2">{a.externalId ?? "–"}</td>
+                <td className="px-3 py-2">{renderActions(a)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}

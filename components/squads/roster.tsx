@@ -1,0 +1,154 @@
+"use client";
+
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import { Dialog } from "@/components/dialog";
+import type { RosterAthlete, SquadDetail } from "@/hooks/api-types";
+import { ApiClientError, fetchJson, useApi } from "@/hooks/use-api";
+import { useInvalidate } from "@/hooks/use-invalidate";
+import { AddExistingAthlete } from "./add-existing-athlete";
+import { AthleteForm } from "./athlete-form";
+import { AthleteMove } from "./athlete-move";
+import { AthleteTable } from "./athlete-table";
+import { SquadSettings } from "./squad-settings";
+
+type Panel =
+  | { kind: "add" }
+  | { kind: "edit"; athlete: RosterAthlete }
+  | { kind: "move"; athlete: RosterAthlete }
+  | { kind: "settings" }
+  | null;
+
+/** The Roster of one squad: its athletes, and for the owner the squad itself. */
+export function Roster({ squadId }: { squadId: number }) {
+  const [showArchived, setShowArchived] = useState(false);
+  const [panel, setPanel] = useState<Panel>(null);
+  const [addMode, setAddMode] = useState<"new" | "existing">("new");
+  const [notice, setNotice] = useState<string | null>(null);
+  const invalidate = useInvalidate();
+  const detail = useApi<SquadDetail>(`/api/squads/${squadId}`);
+  const athletesUrl = `/api/squads/${squadId}/athletes${showArchived ? "?archived=include" : ""}`;
+  const athletes = useApi<{ athletes: RosterAthlete[] }>(athletesUrl);
+  const memberIds = useMemo(() => new Set((athletes.data?.athletes ?? []).map((a) => a.id)), [athletes.data]);
+
+  function done(message: string) {
+    setNotice(message);
+    setPanel(null);
+    void invalidate("/api/squads", "/api/athletes");
+  }
+
+  async function setArchived(athlete: RosterAthlete, archived: boolean) {
+    try {
+      await fetchJson(`/api/athletes/${athlete.id}`, { method: "PATCH", body: JSON.stringify({ archived }) });
+      done(archived ? `${athlete.name} was archived; their results are kept.` : `${athlete.name} was restored.`);
+    } catch (e) {
+      setNotice(`${athlete.name}: ${e instanceof Error ? e.message : "the change failed"}`);
+    }
+  }
+
+  if (detail.error instanceof ApiClientError && detail.error.status === 404) {
+    return (
+      <div className="card mx-auto max-w-lg p-6 text-center">
+        <h1 className="text-lg font-bold">Squad not found</h1>
+        <p className="mt-2 text-sm text-ink-soft">It does not exist, or it is outside what your account can see.</p>
+        <Link href="/squads" className="btn-quiet mt-4">Back to the Roster</Link>
+      </div>
+    );
+  }
+
+  const squad = detail.data?.squad;
+  return (
+    <section aria-labelledby="squad-heading" className="space-y-4">
+      <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">
+        <Link href="/squads" className="hover:underline">Roster</Link> <span aria-hidden>›</span> {squad?.name ?? "…"}
+      </nav>
+      <div className="flex flex-wrap items-start justify-between gap-3">
+        <div>
+          <h1 id="squad-heading" className="text-2xl font-bold">
+            {squad?.name ?? "Squad"}
+            {squad?.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 align-middle text-xs text-steady">Archived</span>}
+          </h1>
+          {squad && (
+            <p className="text-sm text-ink-soft">
+              {squad.sport ?? "No sport given"} · Coaches:{" "}
+              {squad.coaches.length > 0 ? squad.coaches.map((c) => c.name).join(", ") : "none assigned"}
+            </p>
+          )}
+        </div>
+        <div className="flex flex-wrap gap-2">
+          <Link href={`/sessions?squadId=${squadId}`} className="btn-quiet">Sessions</Link>
+          {detail.data?.canManage && (
+            <button type="button" className="btn-quiet" onClick={() => setPanel({ kind: "settings" })}>Squad settings</button>
+          )}
+          <button type="button" className="btn-primary" onClick={() => setPanel({ kind: "add" })}>Add athlete</button>
+        </div>
+      </div>
+
+      {notice && (
+        <p role="status" className="rounded-md border border-line bg-band px-3 py-2 text-sm">{notice}</p>
+      )}
+      {(detail.error || athletes.error) && (
+        <div role="alert" className="card p-4">
+          <p className="font-semibold">The Roster could not load: {(detail.error ?? athletes.error)?.message}</p>
+          <button className="btn-quiet mt-2" onClick={() => { void detail.refetch(); void athletes.refetch(); }}>Try again</button>
+        </div>
+      )}
+      {athletes.isPending && <p role="status" className="text-ink-soft">Loading athletes…</p>}
+      <label className="flex items-center gap-2 text-sm">
+        <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} />
+        Show archived athletes
+      </label>
+      {athletes.data && (
+        <AthleteTable
+          athletes={athletes.data.athletes}
+          renderActions={(a) => (
+            <div className="flex justify-end gap-1.5 whitespace-nowrap">
+              <button type="button" className="btn-quiet px-2 py-1 text-xs" aria-label={`Edit ${a.name}`} onClick={() => setPanel({ kind: "edit", athlete: a })}>
+                Edit
+              </button>
+              <button type="button" className="btn-quiet px-2 py-1 text-xs" aria-label={`Move ${a.name}`} onClick={() => setPanel({ kind: "move", athlete: a })}>
+                Move
+              </button>
+              <button type="button" className="btn-quiet px-2 py-1 text-xs" aria-label={`${a.archived ? "Restore" : "Archive"} ${a.name}`} onClick={() => setArchived(a, !a.archived)}>
+                {a.archived ? "Restore" : "Archive"}
+              </button>
+            </div>
+          )}
+        />
+      )}
+
+      <Dialog open={panel?.kind === "add"} title={`Add an athlete to ${squad?.name ?? "the squad"}`} onClose={() => setPanel(null)}>
+        <div role="tablist" aria-label="How to add" className="mb-4 flex gap-2">
+          {(["new", "existing"] as const).map((mode) => (
+            <button
+              key={mode}
+              type="button"
+              role="tab"
+              aria-selected={addMode === mode}
+              className={`rounded-md px-3 py-1.5 text-sm font-semibold ${addMode === mode ? "bg-ink text-white" : "bg-band text-ink"}`}
+              onClick={() => setAddMode(mode)}
+            >
+              {mode === "new" ? "New athlete" : "Already in the organisation"}
+            </button>
+          ))}
+        </div>
+        {addMode === "new" ? (
+          <AthleteForm squadId={squadId} athlete={null} onDone={(a) => done(`${a.name} was added.`)} />
+        ) : (
+          <AddExistingAthlete squadId={squadId} alreadyIn={memberIds} onDone={(a) => done(`${a.name} was added.`)} />
+        )}
+      </Dialog>
+      <Dialog open={panel?.kind === "edit"} title={panel?.kind === "edit" ? `Edit ${panel.athlete.name}` : ""} onClose={() => setPanel(null)}>
+        {panel?.kind === "edit" && (
+          <AthleteForm key={panel.athlete.id} squadId={squadId} athlete={panel.athlete} onDone={(a) => done(`${a.name} was saved.`)} />
+        )}
+      </Dialog>
+      <Dialog open={panel?.kind === "move"} title={panel?.kind === "move" ? `Move ${panel.athlete.name}` : ""} onClose={() => setPanel(null)}>
+        {panel?.kind === "move" && <AthleteMove athlete={panel.athlete} fromSquadId={squadId} onDone={done} />}
+      </Dialog>
+      <Dialog open={panel?.kind === "settings"} title="Squad settings" onClose={() => setPanel(null)}>
+        {panel?.kind === "settings" && squad && <SquadSettings squad={squad} onSaved={done} />}
+      </Dialog>
+    </section>
+  );
+}

@@ -1,0 +1,52 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
+import { FieldError, FormAlert, applyServerErrors } from "@/components/form-bits";
+import { fetchJson } from "@/hooks/use-api";
+import { squadCreateSchema, type SquadCreateInput } from "@/lib/validation/roster";
+
+type Squad = { id: number; name: string };
+
+export function SquadCreateForm({ onDone }: { onDone: (squad: Squad) => void }) {
+  const [failure, setFailure] = useState<string | null>(null);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<z.input<typeof squadCreateSchema>, unknown, SquadCreateInput>({ resolver: zodResolver(squadCreateSchema) });
+
+  async function onSubmit(values: SquadCreateInput) {
+    setFailure(null);
+    try {
+      const { squad } = await fetchJson<{ squad: Squad }>("/api/squads", { method: "POST", body: JSON.stringify(values) });
+      onDone(squad);
+    } catch (error) {
+      setFailure(applyServerErrors(error, setError, ["name", "sport"]));
+    }
+  }
+
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+      <div>
+        <label htmlFor="squad-name" className="label">Squad name</label>
+        <input id="squad-name" className="field" placeholder="e.g. Academy U16" {...register("name")} />
+        <FieldError message={errors.name?.message} />
+      </div>
+      <div>
+        <label htmlFor="squad-sport" className="label">Sport (optional)</label>
+        <input id="squad-sport" className="field" {...register("sport")} />
+        <FieldError message={errors.sport?.message} />
+      </div>
+      <FormAlert message={failure} />
+      <div className="flex justify-end">
+        <button type="submit" className="btn-primary" disabled={isSubmitting}>
+          {isSubmitting ? "Creating…" : "Create squad"}
+        </button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,93 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Dialog } from "@/components/dialog";
+import type { Phase, Role } from "@/db/schema";
+import type { SquadListItem } from "@/hooks/api-types";
+import { useApi } from "@/hooks/use-api";
+import { useInvalidate } from "@/hooks/use-invalidate";
+import { PHASE_LABELS, formatDate } from "@/lib/labels";
+import { SquadCreateForm } from "./squad-create-form";
+
+/** Roster entry point: pick a squad. The owner may create one. */
+export function SquadList({ role }: { role: Role }) {
+  const [showArchived, setShowArchived] = useState(false);
+  const [creating, setCreating] = useState(false);
+  const router = useRouter();
+  const invalidate = useInvalidate();
+  const { data, error, isPending, refetch } = useApi<{ squads: SquadListItem[] }>(
+    showArchived ? "/api/squads?archived=include" : "/api/squads",
+  );
+
+  return (
+    <section aria-labelledby="roster-heading" className="space-y-4">
+      <div className="flex flex-wrap items-baseline justify-between gap-3">
+        <div>
+          <h1 id="roster-heading" className="text-2xl font-bold">Roster</h1>
+          <p className="text-sm text-ink-soft">
+            {role === "coach" ? "Open one of your squads to see and change its athletes." : "Open a squad to see and change its athletes."}
+          </p>
+        </div>
+        <div className="flex items-center gap-3">
+          <label className="flex items-center gap-2 text-sm">
+            <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} />
+            Show archived squads
+          </label>
+          {role === "owner" && (
+            <button type="button" className="btn-primary" onClick={() => setCreating(true)}>New squad</button>
+          )}
+        </div>
+      </div>
+
+      {isPending && <p role="status" className="text-ink-soft">Loading squads…</p>}
+      {error && (
+        <div role="alert" className="card p-4">
+          <p className="font-semibold">Squads could not load: {error.message}</p>
+          <button className="btn-quiet mt-2" onClick={() => refetch()}>Try again</button>
+        </div>
+      )}
+      {data && data.squads.length === 0 && (
+        <p className="card p-6 text-ink-soft">
+          {role === "coach" ? "You are not assigned to a squad yet. Ask your head of performance to add you." : "No squads yet."}
+        </p>
+      )}
+      {data && data.squads.length > 0 && (
+        <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
+          {data.squads.map((squad) => (
+            <li key={squad.id}>
+              <Link
+                href={`/squads/${squad.id}`}
+                className={`card block p-4 hover:border-ink-faint ${squad.archived ? "bg-paper text-ink-faint" : ""}`}
+              >
+                <span className="flex items-baseline justify-between gap-2">
+                  <span className="text-lg font-bold">{squad.name}</span>
+                  {squad.archived && <span className="rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
+                </span>
+                <span className="block text-sm text-ink-soft">
+                  {squad.sport ?? "No sport given"} · <span className="num">{squad.athleteCount}</span> athletes
+                </span>
+                <span className="mt-1 block text-xs text-ink-faint">
+                  {squad.latestSession
+                    ? `Latest session ${formatDate(squad.latestSession.date)} · ${PHASE_LABELS[squad.latestSession.phase as Phase] ?? squad.latestSession.phase}`
+                    : "No sessions yet"}
+                </span>
+              </Link>
+            </li>
+          ))}
+        </ul>
+      )}
+
+      <Dialog open={creating} title="New squad" onClose={() => setCreating(false)}>
+        <SquadCreateForm
+          onDone={(squad) => {
+            setCreating(false);
+            void invalidate("/api/squads");
+            router.push(`/squads/${squad.id}`);
+          }}
+        />
+      </Dialog>
+    </section>
+  );
+}

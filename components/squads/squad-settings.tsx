@@ -1,0 +1,154 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { z } from "zod";
+import { FieldError, FormAlert, applyServerErrors } from "@/components/form-bits";
+import type { Person, SquadDetail } from "@/hooks/api-types";
+import { fetchJson, useApi } from "@/hooks/use-api";
+import { squadCreateSchema } from "@/lib/validation/roster";
+
+type Squad = SquadDetail["squad"];
+type NameInput = z.infer<typeof squadCreateSchema>;
+
+const patch = (squadId: number, body: unknown) =>
+  fetchJson(`/api/squads/${squadId}`, { method: "PATCH", body: JSON.stringify(body) });
+
+/** Owner only: rename the squad, choose its coaches, archive or restore it. */
+export function SquadSettings({ squad, onSaved }: { squad: Squad; onSaved: (message: string) => void }) {
+  return (
+    <div className="space-y-6">
+      <RenameForm squad={squad} onSaved={onSaved} />
+      <CoachPicker squad={squad} onSaved={onSaved} />
+      <ArchiveSquad squad={squad} onSaved={onSaved} />
+    </div>
+  );
+}
+
+function RenameForm({ squad, onSaved }: { squad: Squad; onSaved: (message: string) => void }) {
+  const [failure, setFailure] = useState<string | null>(null);
+  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof squadCreateSchema>, unknown, NameInput>({
+    resolver: zodResolver(squadCreateSchema),
+    defaultValues: { name: squad.name, sport: squad.sport ?? "" },
+  });
+  async function onSubmit(values: NameInput) {
+    setFailure(null);
+    try {
+      await patch(squad.id, values);
+      onSaved(`The squad is now called ${values.name}.`);
+    } catch (error) {
+      setFailure(applyServerErrors(error, setError, ["name", "sport"]));
+    }
+  }
+  return (
+    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-3">
+      <h3 className="font-semibold">Name</h3>
+      <div className="grid gap-3 sm:grid-cols-2">
+        <div>
+          <label htmlFor="settings-name" className="label">Squad name</label>
+          <input id="settings-name" className="field" {...register("name")} />
+          <FieldError message={formState.errors.name?.message} />
+        </div>
+        <div>
+          <label htmlFor="settings-sport" className="label">Sport</label>
+          <input id="settings-sport" className="field" {...register("sport")} />
+          <FieldError message={formState.errors.sport?.message} />
+        </div>
+      </div>
+      <FormAlert message={failure} />
+      <button type="submit" className="btn-quiet" disabled={formState.isSubmitting}>Rename</button>
+    </form>
+  );
+}
+
+function CoachPicker({ squad, onSaved }: { squad: Squad; onSaved: (message: string) => void }) {
+  const { data, error, isPending } = useApi<{ coaches: Person[] }>("/api/coaches");
+  const [chosen, setChosen] = useState<Set<number>>(() => new Set(squad.coaches.map((c) => c.id)));
+  const [failure, setFailure] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+
+  async function save() {
+    setBusy(true);
+    setFailure(null);
+    try {
+      await patch(squad.id, { coachUserIds: [...chosen] });
+      onSaved(chosen.size === 0 ? "The squad has no coach assigned now." : `Coaches saved (${chosen.size}).`);
+    } catch (e) {
+      setFailure(e instanceof Error ? e.message : "The coaches could not be saved.");
+    } finally {
+      setBusy(false);
+    }
+  }
+
+  return (
+    <fieldset className="space-y-2">
+      <legend className="font-semibold">Coaches</legend>
+      <p className="text-sm text-ink-soft">Coaches see and edit only the squads they are assigned to.</p>
+      {isPending && <p role="status" className="text-sm text-ink-soft">Loading coaches…</p>}
+      {error && <FormAlert message={`Coaches could not load: ${error.message}`} />}
+      {data && data.coaches.length === 0 && <p className="text-sm">No member has the coach role yet.</p>}
+      {data && data.coaches.length > 0 && (
+        <ul className="max-h-48 space-y-1 overflow-y-auto rounded-md border border-line p-2">
+          {data.coaches.map((coach) => (
+            <li key={coach.id}>
+              <label className="flex items-center gap-2 text-sm">
+                <input
+                  type="checkbox"
+                  checked={chosen.has(coach.id)}
+                  onChange={(e) => {
+                    const next = new Set(chosen);
+                    if (e.target.checked) next.add(coach.id);
+                    else next.delete(coach.id);
+                    setChosen(next);
+                  }}
+                />
+                <span className="font-semibold">{coach.name}</span>
+                <span className="text-ink-faint">{coach.email}</span>
+              </label>
+            </li>
+          ))}
+        </ul>
+      )}
+      <FormAlert message={failure} />
+      <button type="button" className="btn-quiet" disabled={busy || !data} onClick={save}>Save coaches</button>
+    </fieldset>
+  );
+}
+
+function ArchiveSquad({ squad, onSaved }: { squad: Squad; onSaved: (message: string) => void }) {
+  const [confirming, setConfirming] = useState(false);
+  const [failure, setFailure] = useState<string | null>(null);
+  async function toggle() {
+    setFailure(null);
+    try {
+      await patch(squad.id, { archived: !squad.archived });
+      onSaved(squad.archived ? `${squad.name} was restored.` : `${squad.name} was archived.`);
+      setConfirming(false);
+    } catch (e) {
+      setFailure(e instanceof Error ? e.message : "The change failed.");
+    }
+  }
+  return (
+    <div className="space-y-2 border-t border-line pt-4">
+      <h3 className="font-semibold">{squad.archived ? "Restore" : "Archive"}</h3>
+      <p className="text-sm text-ink-soft">
+        {squad.archived
+          ? "Restoring brings the squad back into lists and new sessions."
+          : "An archived squad keeps its athletes, sessions and results, but leaves the lists."}
+      </p>
+      <FormAlert message={failure} />
+      {squad.archived ? (
+        <button type="button" className="btn-quiet" onClick={toggle}>Restore squad</button>
+      ) : confirming ? (
+        <div className="flex items-center gap-2">
+          <span className="text-sm">Archive {squad.name}?</span>
+          <button type="button" className="btn-quiet" onClick={toggle}>Archive</button>
+          <button type="button" className="btn-quiet" onClick={() => setConfirming(false)}>Cancel</button>
+        </div>
+      ) : (
+        <button type="button" className="btn-quiet" onClick={() => setConfirming(true)}>Archive squad…</button>
+      )}
+    </div>
+  );
+}

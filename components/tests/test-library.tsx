@@ -1,0 +1,135 @@
+"use client";
+
+import { useState } from "react";
+import { Dialog } from "@/components/dialog";
+import type { TestItem } from "@/hooks/api-types";
+import { useApi } from "@/hooks/use-api";
+import { useInvalidate } from "@/hooks/use-invalidate";
+import { TestForm } from "./test-form";
+import { TestRowActions } from "./test-row-actions";
+import { directionWords, rangeWords, swcWords, typicalErrorWords } from "./test-words";
+
+/** The Test library: every test of the organisation; owner and scientist may change it. */
+export function TestLibrary({ canEdit }: { canEdit: boolean }) {
+  const [showArchived, setShowArchived] = useState(false);
+  const [editing, setEditing] = useState<TestItem | "new" | null>(null);
+  const [notice, setNotice] = useState<string | null>(null);
+  const url = showArchived ? "/api/tests?archived=include" : "/api/tests";
+  const { data, error, isPending, refetch } = useApi<{ tests: TestItem[] }>(url);
+  const invalidate = useInvalidate();
+
+  function saved(test: TestItem) {
+    setNotice(editing === "new" ? `${test.name} was added to the Test library.` : `${test.name} was saved.`);
+    setEditing(null);
+    void invalidate("/api/tests");
+  }
+
+  return (
+    <section aria-labelledby="tests-heading" className="space-y-4">
+      <div className="flex flex-wrap items-baseline justify-between gap-3">
+        <div>
+          <h1 id="tests-heading" className="text-2xl font-bold">Test library</h1>
+          <p className="text-sm text-ink-soft">
+            Each test knows its unit, which direction is better, how trials are reduced and how noisy it is.
+            {!canEdit && " Your sport scientist keeps this library; you can read it."}
+          </p>
+        </div>
+        <div className="flex items-center gap-3">
+          <label className="flex items-center gap-2 text-sm">
+            <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} />
+            Show archived
+          </label>
+          {canEdit && (
+            <button type="button" className="btn-primary" onClick={() => setEditing("new")}>
+              New test
+            </button>
+          )}
+        </div>
+      </div>
+
+      {notice && (
+        <p role="status" className="rounded-md border border-line bg-band px-3 py-2 text-sm">
+          {notice}
+        </p>
+      )}
+      {isPending && <p role="status" className="text-ink-soft">Loading the Test library…</p>}
+      {error && (
+        <div role="alert" className="card p-4">
+          <p className="font-semibold">The Test library could not load: {error.message}</p>
+          <button className="btn-quiet mt-2" onClick={() => refetch()}>Try again</button>
+        </div>
+      )}
+      {data && data.tests.length === 0 && (
+        <p className="card p-6 text-ink-soft">
+          No tests yet.{canEdit ? " Add the first one with “New test”." : ""}
+        </p>
+      )}
+      {data && data.tests.length > 0 && (
+        <div className="card overflow-x-auto">
+          <table className="w-full text-left text-sm">
+            <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">
+              <tr>
+                <th className="px-3 py-2">Test</th>
+                <th className="px-3 py-2">Unit</th>
+                <th className="px-3 py-2">Direction</th>
+                <th className="px-3 py-2">Trials</th>
+                <th className="px-3 py-2">SWC</th>
+                <th className="px-3 py-2">Typical error</th>
+                <th className="px-3 py-2">Plausible range</th>
+                <th className="px-3 py-2 text-right">Results</th>
+                {canEdit && <th className="px-3 py-2"><span className="sr-only">Actions</span></th>}
+              </tr>
+            </thead>
+            <tbody>
+              {data.tests.map((test) => {
+                const dir = directionWords(test.direction);
+                const te = typicalErrorWords(test);
+                const range = rangeWords(test);
+                return (
+                  <tr key={test.id} className={`border-b border-line align-top last:border-0 ${test.archived ? "bg-paper text-ink-faint" : ""}`}>
+                    <td className="px-3 py-2.5">
+                      <span className="font-semibold">{test.name}</span>
+                      {test.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
+                      <div className="text-xs text-ink-faint">{test.decimals} decimal{test.decimals === 1 ? "" : "s"}</div>
+                    </td>
+                    <td className="px-3 py-2.5">{test.unit}</td>
+                    <td className="whitespace-nowrap px-3 py-2.5">
+                      <span aria-hidden className="mr-1 font-bold">{dir.arrow}</span>
+                      {dir.words}
+                    </td>
+                    <td className="whitespace-nowrap px-3 py-2.5">
+                      {test.trialRule === "best" ? "Best" : "Mean"} of <span className="num">{test.trialsPerSession}</span>
+                    </td>
+                    <td className="whitespace-nowrap px-3 py-2.5">{swcWords(test)}</td>
+                    <td className="px-3 py-2.5">
+                      {te ? <span className="num">{te}</span> : <span className="text-ink-faint">Not set</span>}
+                      {test.typicalErrorSource && <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>}
+                    </td>
+                    <td className="num whitespace-nowrap px-3 py-2.5">{range ?? <span className="text-ink-faint">Any</span>}</td>
+                    <td className="num px-3 py-2.5 text-right">{test.resultCount}</td>
+                    {canEdit && (
+                      <td className="px-3 py-2.5">
+                        <TestRowActions test={test} onEdit={() => setEditing(test)} onNotice={setNotice} />
+                      </td>
+                    )}
+                  </tr>
+                );
+              })}
+            </tbody>
+          </table>
+        </div>
+      )}
+
+      <Dialog
+        open={editing !== null}
+        wide
+        title={editing === "new" ? "New test" : editing ? `Edit ${editing.name}` : ""}
+        onClose={() => setEditing(null)}
+      >
+        {editing !== null && (
+          <TestForm key={editing === "new" ? "new" : editing.id} test={editing === "new" ? null : editing} onDone={saved} />
+        )}
+      </Dialog>
+    </section>
+  );
+}
