@@ -14,9 +14,10 @@ export function AppShell({ actor, children }: { actor: Actor; children: React.Re
             <NavLinks items={navFor(actor.role)} />
           </nav>
           <div className="flex items-center gap-3 text-sm">
-            <span className="text-white/80">
-              <span className="font-semibold text-white">{actor.name}</span> · {ROLE_LABELS[actor.role]} ·{" "}
-              {actor.organizationName}
+            <span className="text-white/80" title={actor.organizationName}>
+              <span className="font-semibold text-white">{actor.name}</span> · {ROLE_LABELS[actor.role]}
+              {/* On a tablet the organisation name would push the navigation onto two rows. */}
+              <span className="hidden xl:inline"> · {actor.organizationName}</span>
             </span>
             <SignOutButton />
           </div>
