@@ -1,0 +1,47 @@
+import type { ImportPreview } from "@/lib/import/summary";
+import type { ImportFormat, WideTarget } from "@/lib/import/types";
+
+/** The mapping step's choices, in the shape the selects need. */
+export type MappingDraft =
+  | { format: "long"; athlete: string; test: string; trial: string; value: string }
+  | { format: "wide"; athleteColumn: string; columns: Record<string, WideTarget> };
+
+export function draftFromPreview(preview: ImportPreview): MappingDraft {
+  const m = preview.mapping;
+  if (m.format === "long") {
+    return { format: "long", athlete: m.columns.athlete ?? "", test: m.columns.test ?? "", trial: m.columns.trial ?? "", value: m.columns.value ?? "" };
+  }
+  const athleteColumn = m.athleteColumn ?? "";
+  const columns: Record<string, WideTarget> = {};
+  for (const header of preview.headers) if (header !== athleteColumn && header !== "") columns[header] = m.columns[header] ?? null;
+  return { format: "wide", athleteColumn, columns };
+}
+
+/** What the header suggests for a format the user switches to. */
+export function defaultDraft(preview: ImportPreview, format: ImportFormat): MappingDraft {
+  if (format === "long") {
+    const c = preview.longColumns;
+    return { format: "long", athlete: c.athlete ?? "", test: c.test ?? "", trial: c.trial ?? "", value: c.value ?? "" };
+  }
+  const athleteColumn = preview.suggestions.find((s) => s.status === "athlete")?.header ?? preview.headers[0] ?? "";
+  const columns: Record<string, WideTarget> = {};
+  for (const s of preview.suggestions) {
+    if (s.header === athleteColumn || s.header === "") continue;
+    columns[s.header] = s.status === "matched" ? { testId: s.testId!, trial: s.trial! } : null;
+  }
+  return { format: "wide", athleteColumn, columns };
+}
+
+export function withAthleteColumn(draft: Extract<MappingDraft, { format: "wide" }>, headers: string[], athleteColumn: string): MappingDraft {
+  const columns: Record<string, WideTarget> = {};
+  for (const header of headers) if (header !== athleteColumn && header !== "") columns[header] = draft.columns[header] ?? null;
+  return { format: "wide", athleteColumn, columns };
+}
+
+/** The multipart fields that carry a draft (the route reads the same names). */
+export function fieldsOf(draft: MappingDraft): Record<string, string> {
+  if (draft.format === "long") {
+    return { format: "long", athleteColumn: draft.athlete, testColumn: draft.test, trialColumn: draft.trial, valueColumn: draft.value };
+  }
+  return { format: "wide", athleteColumn: draft.athleteColumn, mapping: JSON.stringify(draft.columns) };
+}

@@ -1,0 +1,74 @@
+/** The answers of the import API, shared by the route handler and the Import page. */
+import type { Replacement } from "./merge";
+import type { PreviewValue } from "./plan";
+import type {
+  Delimiter, ImportContext, ImportCounts, ImportFormat, ImportMapping, ImportRowError, LongColumns, UnknownAthlete, UnknownTest, WideColumnSuggestion,
+} from "./types";
+
+export type ReplacementRow = ImportRowError & {
+  athleteName: string;
+  testName: string;
+  trial: number | null;
+  previous: number | null;
+  previousFlag: string | null;
+  next: number | null;
+};
+
+export type ImportPreview = {
+  mode: "preview";
+  file: { name: string; size: number };
+  format: ImportFormat;
+  detectedFormat: ImportFormat;
+  delimiter: Delimiter;
+  /** True when a comma inside a value is read as a decimal comma (files not separated by commas). */
+  decimalComma: boolean;
+  headers: string[];
+  headerRow: number;
+  /** The mapping this preview was read with (suggested, or the one sent). */
+  mapping: ImportMapping;
+  /** How each column reads on its own (wide), for the mapping step. */
+  suggestions: WideColumnSuggestion[];
+  /** The long-format columns found in the header. */
+  longColumns: LongColumns;
+  rowCount: number;
+  sample: { row: number; cells: string[] }[];
+  parsed: PreviewValue[];
+  unknownAthletes: UnknownAthlete[];
+  unknownAthleteCount: number;
+  unknownTests: UnknownTest[];
+  errors: ImportRowError[];
+  errorCount: number;
+  warnings: ImportRowError[];
+  warningCount: number;
+  counts: ImportCounts;
+  replacements: ReplacementRow[];
+  canCommit: boolean;
+  tests: { id: number; name: string; unit: string; trialsPerSession: number }[];
+};
+
+export type ImportCommitted = {
+  mode: "commit";
+  uploadId: number;
+  filename: string;
+  format: ImportFormat;
+  rowsImported: number;
+  counts: ImportCounts;
+};
+
+const fmt = (v: number | null) => (v === null ? "empty" : String(v));
+
+export function describeReplacements(replacements: Replacement[], context: ImportContext, limit: number): ReplacementRow[] {
+  const athletes = new Map(context.athletes.map((a) => [a.id, a.name]));
+  const tests = new Map(context.tests.map((t) => [t.id, t]));
+  return replacements.slice(0, limit).map((r) => {
+    const athleteName = athletes.get(r.athleteId) ?? `athlete ${r.athleteId}`;
+    const test = tests.get(r.testId);
+    const testName = test?.name ?? `test ${r.testId}`;
+    const unit = test ? ` ${test.unit}` : "";
+    const message =
+      r.trial === null
+        ? `${athleteName}'s ${testName} is marked “${r.previousFlag}”; importing scores would clear that mark.`
+        : `Replaces ${athleteName}'s ${testName} trial ${r.trial}: ${fmt(r.previous)}${unit} → ${fmt(r.next)}${unit}.`;
+    return { row: r.row, column: r.column, message, athleteName, testName, trial: r.trial, previous: r.previous, previousFlag: r.previousFlag, next: r.next };
+  });
+}
