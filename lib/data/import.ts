@@ -4,7 +4,7 @@
  * so a failure anywhere leaves the session exactly as it was.
  */
 import { and, asc, eq, notInArray, sql } from "drizzle-orm";
-import { getDb, type Database } from "@/db/client";
+import { getDb, type Database, type Transaction as Tx, writeTransaction } from "@/db/client";
 import { athletes, auditEvents, results, sessionTests, squadAthletes, squads, testingSessions, tests, uploads, type Phase, type SessionStatus } from "@/db/schema";
 import { ApiError, forbidden, notFound } from "@/lib/api/errors";
 import { analyseCsv, type Analysis } from "@/lib/import/analyse";
@@ -17,7 +17,6 @@ import type { ExistingResult, ImportContext } from "@/lib/import/types";
 import type { Actor } from "./actors";
 import { isManager, sessionScope } from "./scope";
 
-type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 type Reader = Pick<Database, "select">;
 
 export type ImportSession = {
@@ -214,7 +213,7 @@ async function commitImport(
   const { plan } = analysis;
   const rowsImported = plan.rowsWithValues;
   const filename = (file.filename || "upload.csv").slice(0, 255);
-  return getDb().transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     // Read inside the transaction: what is merged is what is there at this moment.
     const existing = await loadExisting(tx, session);
     const { writes, replacements, counts } = planWrites(plan.groups, existing, testsMap(context), plan.columnOf);

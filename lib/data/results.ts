@@ -1,5 +1,5 @@
 import { and, desc, eq, inArray, isNull } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, writeTransaction, type Transaction as Tx } from "@/db/client";
 import { athletes, auditEvents, results, sessionTests, squadAthletes, testingSessions, tests, users } from "@/db/schema";
 import { conflict, forbidden, invalidInput, notFound, type RowError } from "@/lib/api/errors";
 import { reduceTrials } from "@/lib/trials";
@@ -7,7 +7,6 @@ import type { ResultWriteInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
 import { isManager, sessionScope } from "./scope";
 
-type Tx = Parameters<Parameters<ReturnType<typeof getDb>["transaction"]>[0]>[0];
 type Reader = ReturnType<typeof getDb> | Tx;
 
 export type ResultRow = {
@@ -101,7 +100,7 @@ async function validateWrites(tx: Tx, session: { id: number; squadId: number }, 
  * read; if any cell changed since, nothing is written and the current values come back (409).
  */
 export async function writeResults(actor: Actor, sessionId: number, inputs: ResultWriteInput[]): Promise<ResultRow[]> {
-  return getDb().transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const session = await loadWritableSession(tx, actor, sessionId);
     const testById = await validateWrites(tx, session, inputs);
     const athleteIds = [...new Set(inputs.map((i) => i.athleteId))];
@@ -162,7 +161,7 @@ const sameContent = (a: Pick<Snapshot, "trials" | "flag" | "note">, b: Pick<Snap
 
 /** Reverts the caller's last sheet change in this session, unless someone changed that cell since. */
 export async function undoLastChange(actor: Actor, sessionId: number) {
-  return getDb().transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     await loadWritableSession(tx, actor, sessionId);
     const [event] = await tx
       .select({ id: auditEvents.id, entityId: auditEvents.entityId, before: auditEvents.before, after: auditEvents.after })

@@ -1,5 +1,5 @@
 import { and, asc, eq, inArray, notInArray } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, writeTransaction } from "@/db/client";
 import { athletes, auditEvents, squadAthletes, squads } from "@/db/schema";
 import { conflict, invalidInput, notFound } from "@/lib/api/errors";
 import type { AthleteCreateInput, AthleteUpdateInput, SquadAthleteAddInput } from "@/lib/validation/roster";
@@ -34,7 +34,7 @@ export async function listSquadAthletes(actor: Actor, squadId: number, { include
 
 export async function addAthleteToSquad(actor: Actor, squadId: number, input: SquadAthleteAddInput) {
   try {
-    return await getDb().transaction(async (tx) => {
+    return await writeTransaction(async (tx) => {
       let athleteId: number;
       if ("athleteId" in input) {
         const [existing] = await tx
@@ -70,7 +70,7 @@ export async function addAthleteToSquad(actor: Actor, squadId: number, input: Sq
 export async function updateAthlete(actor: Actor, athleteId: number, input: AthleteUpdateInput) {
   const { squadIds, ...changes } = input;
   try {
-    return await getDb().transaction(async (tx) => {
+    return await writeTransaction(async (tx) => {
       const [before] = await tx.select(rosterColumns).from(athletes).where(and(eq(athletes.id, athleteId), athleteScope(actor)));
       if (!before) throw notFound("Athlete");
       if (Object.keys(changes).length > 0) await tx.update(athletes).set(changes).where(eq(athletes.id, athleteId));

@@ -1,5 +1,5 @@
 import { and, asc, count, desc, eq, inArray, notInArray, or } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, writeTransaction } from "@/db/client";
 import { athletes, auditEvents, results, sessionTests, squadAthletes, squads, testingSessions, tests } from "@/db/schema";
 import { conflict, forbidden, invalidInput, notFound } from "@/lib/api/errors";
 import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
@@ -59,7 +59,7 @@ async function checkBattery(db: Pick<ReturnType<typeof getDb>, "select">, actor:
 }
 
 export async function createSession(actor: Actor, input: SessionCreateInput) {
-  return getDb().transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const [squad] = await tx.select({ id: squads.id, archived: squads.archived }).from(squads).where(and(eq(squads.id, input.squadId), squadScope(actor)));
     if (!squad) throw notFound("Squad");
     if (squad.archived) throw invalidInput("That squad is archived.", { squadId: "Archived squad." });
@@ -140,7 +140,7 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
 export async function updateSession(actor: Actor, sessionId: number, input: SessionUpdateInput) {
   const { version, testIds, ...changes } = input;
   if (changes.status && !isManager(actor)) throw forbidden("Only a sport scientist or the owner publishes results.");
-  return getDb().transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const [before] = await tx
       .select({ id: testingSessions.id, status: testingSessions.status, version: testingSessions.version, date: testingSessions.date, phase: testingSessions.phase, notes: testingSessions.notes })
       .from(testingSessions)

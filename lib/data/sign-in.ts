@@ -1,5 +1,5 @@
 import { and, eq, gt, or, sql } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, writeTransaction } from "@/db/client";
 import { signInAttempts, users } from "@/db/schema";
 
 export async function findUserCredentials(email: string) {
@@ -28,9 +28,9 @@ export async function countRecentFailures(email: string, address: string, since:
 }
 
 export async function recordFailure(email: string, address: string, at: number) {
-  await getDb().insert(signInAttempts).values({ email, address, attemptedAt: at });
+  await writeTransaction((tx) => tx.insert(signInAttempts).values({ email, address, attemptedAt: at }));
 }
 
 export async function clearFailures(email: string) {
-  await getDb().delete(signInAttempts).where(eq(signInAttempts.email, email));
+  await writeTransaction((tx) => tx.delete(signInAttempts).where(eq(signInAttempts.email, email)));
 }

@@ -1,5 +1,5 @@
 import { and, asc, eq, inArray } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, writeTransaction } from "@/db/client";
 import { auditEvents, memberships, squadCoaches, squads, users } from "@/db/schema";
 import { conflict, invalidInput, notFound } from "@/lib/api/errors";
 import type { SquadCreateInput, SquadUpdateInput } from "@/lib/validation/roster";
@@ -36,7 +36,7 @@ const nameTaken = (name: string) => conflict(`There is already a squad called "$
 
 export async function createSquad(actor: Actor, input: SquadCreateInput) {
   try {
-    return await getDb().transaction(async (tx) => {
+    return await writeTransaction(async (tx) => {
       const [row] = await tx.insert(squads).values({ ...input, organizationId: actor.organizationId }).returning(squadColumns);
       await tx.insert(auditEvents).values({
         organizationId: actor.organizationId, actorUserId: actor.userId, action: "squad.create", entityType: "squad", entityId: row.id, after: row,
@@ -52,7 +52,7 @@ export async function createSquad(actor: Actor, input: SquadCreateInput) {
 export async function updateSquad(actor: Actor, squadId: number, input: SquadUpdateInput) {
   const { coachUserIds, ...changes } = input;
   try {
-    return await getDb().transaction(async (tx) => {
+    return await writeTransaction(async (tx) => {
       const [before] = await tx
         .select(squadColumns)
         .from(squads)

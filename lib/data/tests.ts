@@ -1,5 +1,5 @@
 import { and, asc, count, eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { getDb, writeTransaction } from "@/db/client";
 import { auditEvents, results, sessionTests, tests } from "@/db/schema";
 import { conflict, notFound } from "@/lib/api/errors";
 import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
@@ -61,7 +61,7 @@ export async function getTest(actor: Actor, testId: number): Promise<TestRow> {
 
 export async function createTest(actor: Actor, input: TestCreateInput): Promise<TestRow> {
   try {
-    return await getDb().transaction(async (tx) => {
+    return await writeTransaction(async (tx) => {
       const [row] = await tx
         .insert(tests)
         .values({ ...input, organizationId: actor.organizationId })
@@ -81,7 +81,7 @@ export async function createTest(actor: Actor, input: TestCreateInput): Promise<
 export async function updateTest(actor: Actor, testId: number, input: TestUpdateInput): Promise<TestRow> {
   const { version, ...changes } = input;
   try {
-    return await getDb().transaction(async (tx) => {
+    return await writeTransaction(async (tx) => {
       const [before] = await tx
         .select(testColumns)
         .from(tests)
@@ -112,7 +112,7 @@ export async function updateTest(actor: Actor, testId: number, input: TestUpdate
 
 /** A test with results (or in a session's battery) is archived, never deleted. */
 export async function deleteOrArchiveTest(actor: Actor, testId: number): Promise<{ deleted: true } | { archived: true }> {
-  return getDb().transaction(async (tx) => {
+  return writeTransaction(async (tx) => {
     const [test] = await tx
       .select({ id: tests.id, name: tests.name })
       .from(tests)
