@@ -29,7 +29,21 @@ describe("Import over HTTP against the production build", () => {
 
 describe("Import in the browser", () => {
   let browser: Awaited<ReturnType<typeof openBrowser>>;
+  // A session of its own, so the Session sheet tests (same server, same database) find theirs untouched.
+  const session = { id: 0 };
   beforeAll(async () => {
+    const coach = new HttpSession(baseUrl);
+    await coach.signIn("coach@example.com");
+    const squads = (await coach.json("/api/squads")).json.squads;
+    const tests = (await coach.json("/api/tests")).json.tests;
+    const testIds = ["Countermovement jump", "10 m sprint"].map((name) => tests.find((t: any) => t.name === name).id);
+    const created = await coach.json("/api/sessions", {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ squadId: squads.find((s: any) => s.name === "Academy U18").id, date: "2026-11-23", phase: "retest", testIds }),
+    });
+    expect(created.status).toBe(201);
+    session.id = created.json.session.id;
     browser = await openBrowser();
   });
   afterAll(async () => browser?.close());
@@ -37,9 +51,6 @@ describe("Import in the browser", () => {
   it("a coach previews a file with problems, then imports a good one", async () => {
     const page = await browser.context.newPage();
     await signInThroughForm(page, baseUrl, "coach@example.com");
-    const list = await (await page.request.get(`${baseUrl}/api/sessions`)).json();
-    const session = list.sessions.find((s: any) => s.squadName === "Academy U18" && s.phase === "post-block");
-    expect(session).toBeTruthy();
 
     await page.goto(`${baseUrl}/sessions/${session.id}/import`);
     await page.getByRole("heading", { name: "Import", exact: true }).waitFor();
@@ -76,8 +87,6 @@ describe("Import in the browser", () => {
   it("maps an unknown column in the mapping step, and replaces a stored value only when asked", async () => {
     const page = await browser.context.newPage();
     await signInThroughForm(page, baseUrl, "coach@example.com");
-    const list = await (await page.request.get(`${baseUrl}/api/sessions`)).json();
-    const session = list.sessions.find((s: any) => s.squadName === "Academy U18" && s.phase === "post-block");
     await page.goto(`${baseUrl}/sessions/${session.id}/import`);
     const input = page.locator('input[type="file"]');
 
