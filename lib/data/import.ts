@@ -5,7 +5,7 @@
  */
 import { and, asc, eq, notInArray, sql } from "drizzle-orm";
 import { getDb, type Database, type Transaction as Tx, writeTransaction } from "@/db/client";
-import { athletes, auditEvents, results, sessionTests, squadAthletes, squads, testingSessions, tests, uploads, type Phase, type SessionStatus } from "@/db/schema";
+import { athletes, auditEvents, results, squadAthletes, squads, testingSessions, tests, uploads, type Phase, type SessionStatus } from "@/db/schema";
 import { ApiError, forbidden, notFound } from "@/lib/api/errors";
 import { analyseCsv, type Analysis } from "@/lib/import/analyse";
 import { ImportFileError, decodeCsvBytes } from "@/lib/import/decode";
@@ -15,7 +15,8 @@ import { mappingRequestOf, type ImportOptions } from "@/lib/import/options";
 import { describeReplacements, type ImportCommitted, type ImportPreview } from "@/lib/import/summary";
 import type { ExistingResult, ImportContext } from "@/lib/import/types";
 import type { Actor } from "./actors";
-import { isManager, sessionScope } from "./scope";
+import { canEditSession, sessionScope } from "./scope";
+import { sessionBattery } from "./sessions";
 
 type Reader = Pick<Database, "select">;
 
@@ -49,26 +50,12 @@ export async function getImportSession(actor: Actor, sessionId: number): Promise
     .innerJoin(squads, eq(squads.id, testingSessions.squadId))
     .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)));
   if (!row) throw notFound("Session");
-  return { ...row, canImport: isManager(actor) || (actor.role === "coach" && row.status === "draft") };
+  return { ...row, canImport: canEditSession(actor, row.status) };
 }
 
 /** Battery, the rest of the organisation's Test library (names only) and the squad roster. */
 export async function loadImportContext(session: ImportSession, db: Reader = getDb()): Promise<ImportContext> {
-  const battery = await db
-    .select({
-      id: tests.id,
-      name: tests.name,
-      unit: tests.unit,
-      direction: tests.direction,
-      trialRule: tests.trialRule,
-      trialsPerSession: tests.trialsPerSession,
-      plausibleMin: tests.plausibleMin,
-      plausibleMax: tests.plausibleMax,
-    })
-    .from(sessionTests)
-    .innerJoin(tests, eq(tests.id, sessionTests.testId))
-    .where(and(eq(sessionTests.sessionId, session.id), eq(tests.organizationId, session.organizationId)))
-    .orderBy(asc(sessionTests.position));
+  const battery = await sessionBattery(session.id, db);
   const batteryIds = battery.map((t) => t.id);
   const others = await db
     .select({ name: tests.name })

@@ -5,7 +5,7 @@ import { conflict, forbidden, invalidInput, notFound, type RowError } from "@/li
 import { reduceTrials } from "@/lib/trials";
 import type { ResultWriteInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
-import { isManager, sessionScope } from "./scope";
+import { canEditSession, sessionScope } from "./scope";
 
 type Reader = ReturnType<typeof getDb> | Tx;
 
@@ -60,7 +60,7 @@ async function loadWritableSession(tx: Tx, actor: Actor, sessionId: number) {
     .from(testingSessions)
     .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)));
   if (!session) throw notFound("Session");
-  if (!(isManager(actor) || (actor.role === "coach" && session.status === "draft"))) {
+  if (!canEditSession(actor, session.status)) {
     throw forbidden("This session is published; ask a sport scientist to correct a result.");
   }
   return session;

@@ -9,6 +9,10 @@ import type { Actor } from "./actors";
 
 export const isManager = (actor: Actor) => actor.role === "owner" || actor.role === "scientist";
 
+/** Coaches write into draft sessions only; a published session is corrected by a scientist or the owner. */
+export const canEditSession = (actor: Actor, status: string) =>
+  isManager(actor) || (actor.role === "coach" && status === "draft");
+
 /** Squads a coach is assigned to, inside the organisation. */
 export function coachSquadIds(actor: Actor) {
   return getDb()

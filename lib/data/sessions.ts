@@ -5,7 +5,7 @@ import { conflict, forbidden, invalidInput, notFound } from "@/lib/api/errors";
 import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
 import { listResultRows } from "./results";
-import { isManager, sessionScope, squadScope } from "./scope";
+import { canEditSession, isManager, sessionScope, squadScope } from "./scope";
 
 const sessionColumns = {
   id: testingSessions.id,
@@ -86,11 +86,8 @@ export async function getSessionHeader(actor: Actor, sessionId: number) {
   return row;
 }
 
-export const canEditSession = (actor: Actor, status: string) =>
-  isManager(actor) || (actor.role === "coach" && status === "draft");
-
-export async function sessionBattery(sessionId: number) {
-  return getDb()
+export async function sessionBattery(sessionId: number, reader: Pick<ReturnType<typeof getDb>, "select"> = getDb()) {
+  return reader
     .select({
       id: tests.id,
       name: tests.name,

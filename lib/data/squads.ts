@@ -1,4 +1,4 @@
-import { and, asc, count, desc, eq, inArray, max, sql } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, max } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { squadAthletes, squads, testingSessions, athletes } from "@/db/schema";
 import type { Actor } from "./actors";
