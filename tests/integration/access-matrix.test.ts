@@ -37,6 +37,14 @@ const ROUTES: Route[] = [
   { name: "PATCH /api/sessions/[id]", module: "@/app/api/sessions/[sessionId]/route", method: "PATCH", params: (i) => ({ sessionId: String(i.session) }), body: () => ({ version: 1, notes: "x" }) },
   { name: "PUT /api/sessions/[id]/results", module: "@/app/api/sessions/[sessionId]/results/route", method: "PUT", params: (i) => ({ sessionId: String(i.session) }), body: (i) => ({ results: [{ athleteId: i.athlete, testId: i.test, trials: [1], flag: null, version: 1 }] }) },
   { name: "POST /api/sessions/[id]/undo", module: "@/app/api/sessions/[sessionId]/undo/route", method: "POST", params: (i) => ({ sessionId: String(i.session) }) },
+  {
+    name: "POST /api/sessions/[id]/import", module: "@/app/api/sessions/[sessionId]/import/route", method: "POST", params: (i) => ({ sessionId: String(i.session) }),
+    body: () => {
+      const form = new FormData();
+      form.set("file", new File(["athlete,test,trial,value\nNHW001,Countermovement jump,1,30\n"], "x.csv", { type: "text/csv" }));
+      return form;
+    },
+  },
   { name: "GET /api/sessions/[id]/audit", module: "@/app/api/sessions/[sessionId]/audit/route", method: "GET", params: (i) => ({ sessionId: String(i.session) }) },
 ];
 
