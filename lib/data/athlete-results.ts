@@ -13,6 +13,7 @@ export type AthleteResult = {
   testId: number;
   testName: string;
   unit: string;
+  decimals: number;
   direction: string;
   trials: (number | null)[];
   value: number | null;
@@ -34,6 +35,7 @@ export async function listAthleteResults(actor: Actor, athleteId: number): Promi
       testId: results.testId,
       testName: tests.name,
       unit: tests.unit,
+      decimals: tests.decimals,
       direction: tests.direction,
       trials: results.trials,
       value: results.value,
