@@ -1,9 +1,12 @@
 "use client";
 
-import { useApi } from "@/hooks/use-api";
-import type { AthleteResult } from "@/lib/data/athlete-results";
-import { PHASE_LABELS, formatDate, formatValue } from "@/lib/labels";
+import { TableCard, type Column } from "@/components/table-card";
 import type { Phase } from "@/db/schema";
+import type { AthleteResult } from "@/hooks/api-types";
+import { useApi } from "@/hooks/use-api";
+import { PHASE_LABELS, formatDate, formatValue } from "@/lib/labels";
+
+const COLUMNS: Column[] = [{ label: "Date" }, { label: "Session" }, { label: "Test" }, { label: "Result", align: "right" }];
 
 export function AthleteHome({ athleteId, name }: { athleteId: number | null; name: string }) {
   const { data, error, isPending } = useApi<{ results: AthleteResult[] }>(
@@ -26,30 +29,18 @@ export function AthleteHome({ athleteId, name }: { athleteId: number | null; nam
         <p className="card p-6 text-ink-soft">No published results yet.</p>
       )}
       {data && data.results.length > 0 && (
-        <div className="card overflow-x-auto">
-          <table className="w-full text-left text-sm">
-            <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">
-              <tr>
-                <th className="px-4 py-2">Date</th>
-                <th className="px-4 py-2">Session</th>
-                <th className="px-4 py-2">Test</th>
-                <th className="px-4 py-2 text-right">Result</th>
-              </tr>
-            </thead>
-            <tbody>
-              {data.results.map((r) => (
-                <tr key={r.id} className="border-b border-line last:border-0">
-                  <td className="px-4 py-2">{formatDate(r.date)}</td>
-                  <td className="px-4 py-2">{PHASE_LABELS[r.phase as Phase]}</td>
-                  <td className="px-4 py-2">{r.testName}</td>
-                  <td className="num px-4 py-2 text-right">
-                    {r.flag ? r.flag : `${formatValue(r.value, 2)} ${r.unit}`}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <TableCard columns={COLUMNS} headCellClass="px-4 py-2">
+          {data.results.map((r) => (
+            <tr key={r.id} className="border-b border-line last:border-0">
+              <td className="px-4 py-2">{formatDate(r.date)}</td>
+              <td className="px-4 py-2">{PHASE_LABELS[r.phase as Phase]}</td>
+              <td className="px-4 py-2">{r.testName}</td>
+              <td className="num px-4 py-2 text-right">
+                {r.flag ? r.flag : `${formatValue(r.value, 2)} ${r.unit}`}
+              </td>
+            </tr>
+          ))}
+        </TableCard>
       )}
       <p className="text-xs text-ink-faint">
         These numbers support training decisions; they are not a medical or return-to-play judgement. Talk to your

@@ -1,7 +1,8 @@
 "use client";
 
+import type { ReactNode } from "react";
 import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
-import { ApiClientError } from "@/hooks/use-api";
+import { ApiClientError } from "@/hooks/fetch-json";
 
 export function FieldError({ id, message }: { id?: string; message?: string }) {
   if (!message) return null;
@@ -18,6 +19,53 @@ export function FormAlert({ message }: { message: string | null }) {
     <p role="alert" className="rounded-md border border-decline bg-decline-soft px-3 py-2 text-sm">
       {message}
     </p>
+  );
+}
+
+/** A label above its control (give the control the same `id`), and the field's error below it. */
+export function Field({
+  id,
+  label,
+  error,
+  className,
+  children,
+}: {
+  id: string;
+  label: ReactNode;
+  error?: string;
+  className?: string;
+  children: ReactNode;
+}) {
+  return (
+    <div className={className}>
+      <label htmlFor={id} className="label">{label}</label>
+      {children}
+      <FieldError id={`${id}-error`} message={error} />
+    </div>
+  );
+}
+
+/** The end of a form: what went wrong, then the submit button on the right. */
+export function SubmitRow({
+  failure,
+  submitting,
+  label,
+  busyLabel,
+}: {
+  failure: string | null;
+  submitting: boolean;
+  label: string;
+  busyLabel: string;
+}) {
+  return (
+    <>
+      <FormAlert message={failure} />
+      <div className="flex justify-end">
+        <button type="submit" className="btn-primary" disabled={submitting}>
+          {submitting ? busyLabel : label}
+        </button>
+      </div>
+    </>
   );
 }
 

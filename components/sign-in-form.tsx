@@ -5,6 +5,7 @@ import { signIn } from "next-auth/react";
 import { useRouter, useSearchParams } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
+import { Field, FormAlert } from "@/components/form-bits";
 import { signInSchema, type SignInInput } from "@/lib/validation/auth";
 
 /** Only same-site paths are followed after sign-in. */
@@ -39,21 +40,13 @@ export function SignInForm() {
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
-      <div>
-        <label htmlFor="email" className="label">E-mail</label>
+      <Field id="email" label="E-mail" error={errors.email?.message}>
         <input id="email" type="email" autoComplete="username" className="field" {...register("email")} />
-        {errors.email && <p className="mt-1 text-sm text-decline">{errors.email.message}</p>}
-      </div>
-      <div>
-        <label htmlFor="password" className="label">Password</label>
+      </Field>
+      <Field id="password" label="Password" error={errors.password?.message}>
         <input id="password" type="password" autoComplete="current-password" className="field" {...register("password")} />
-        {errors.password && <p className="mt-1 text-sm text-decline">{errors.password.message}</p>}
-      </div>
-      {failure && (
-        <p role="alert" className="rounded-md border border-decline bg-decline-soft px-3 py-2 text-sm">
-          {failure}
-        </p>
-      )}
+      </Field>
+      <FormAlert message={failure} />
       <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>
         {isSubmitting ? "Signing in…" : "Sign in"}
       </button>

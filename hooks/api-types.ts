@@ -1,38 +1,21 @@
 /**
- * The JSON shapes the staff screens read from the API (see the route handlers under app/api).
- * Kept client-side so components never import server modules.
+ * The JSON shapes the screens read from the API (see the route handlers under app/api).
+ * Where a query in lib/data already names a shape, it is re-exported from there: type-only
+ * imports are erased, so no server module reaches the client bundle.
  */
-import type { Direction, Phase, ResultFlag, SessionStatus, SwcMethod, TrialRule } from "@/db/schema";
+import type { Phase, ResultFlag, SessionStatus } from "@/db/schema";
+import type { ResultRow } from "@/lib/data/results";
+import type { TestRow } from "@/lib/data/tests";
 
-export type TestItem = {
-  id: number;
-  name: string;
-  unit: string;
-  decimals: number;
-  direction: Direction;
-  trialRule: TrialRule;
-  trialsPerSession: number;
-  swcMethod: SwcMethod;
-  swcValue: number;
-  cvPercent: number | null;
-  typicalError: number | null;
-  typicalErrorDf: number | null;
-  typicalErrorSource: string | null;
-  plausibleMin: number | null;
-  plausibleMax: number | null;
-  archived: boolean;
-  version: number;
-  resultCount: number;
-};
+export type { AthleteListItem } from "@/lib/data/athletes";
+export type { AthleteResult } from "@/lib/data/athlete-results";
+export type { ResultRow } from "@/lib/data/results";
+export type { SquadSummary } from "@/lib/data/squads";
+/** A test as one test's GET, POST and PATCH return it. */
+export type { TestRow } from "@/lib/data/tests";
 
-export type SquadListItem = {
-  id: number;
-  name: string;
-  sport: string | null;
-  archived: boolean;
-  athleteCount: number;
-  latestSession: { id: number; date: string; phase: string; status: string } | null;
-};
+/** A test of the Test library as `GET /api/tests` lists it. */
+export type TestItem = TestRow & { resultCount: number };
 
 export type Person = { id: number; name: string; email: string };
 
@@ -54,7 +37,8 @@ export type RosterAthlete = {
   archived: boolean;
 };
 
-export type SessionListItem = {
+/** A testing session as both the Sessions list and the Session sheet read it. */
+export type SessionHeader = {
   id: number;
   squadId: number;
   squadName: string;
@@ -62,46 +46,19 @@ export type SessionListItem = {
   phase: Phase;
   status: SessionStatus;
   notes: string | null;
-  testIds: number[];
-  resultCount: number;
-};
-
-export type SheetTest = {
-  id: number;
-  name: string;
-  unit: string;
-  decimals: number;
-  direction: Direction;
-  trialRule: TrialRule;
-  trialsPerSession: number;
-  plausibleMin: number | null;
-  plausibleMax: number | null;
-};
-
-export type ResultRow = {
-  id: number;
-  athleteId: number;
-  testId: number;
-  trials: (number | null)[];
-  value: number | null;
-  flag: ResultFlag | null;
-  note: string | null;
   version: number;
-  updatedAt: number;
-  updatedByName: string | null;
 };
+
+export type SessionListItem = SessionHeader & { testIds: number[]; resultCount: number };
+
+/** The battery columns of the Session sheet. */
+export type SheetTest = Pick<
+  TestRow,
+  "id" | "name" | "unit" | "decimals" | "direction" | "trialRule" | "trialsPerSession" | "plausibleMin" | "plausibleMax"
+>;
 
 export type SheetData = {
-  session: {
-    id: number;
-    squadId: number;
-    squadName: string;
-    date: string;
-    phase: Phase;
-    status: SessionStatus;
-    notes: string | null;
-    version: number;
-  };
+  session: SessionHeader;
   tests: SheetTest[];
   athletes: { id: number; name: string; position: string | null }[];
   results: ResultRow[];

@@ -1,6 +1,15 @@
 "use client";
 
+import { TableCard, type Column } from "@/components/table-card";
 import type { ImportPreview } from "@/lib/import/summary";
+
+const PARSED_COLUMNS: Column[] = [
+  { label: "Row", align: "right" },
+  { label: "Athlete" },
+  { label: "Test" },
+  { label: "Trial", align: "right" },
+  { label: "Score", align: "right" },
+];
 
 /** The first rows of the file as written, with the cells that have a problem marked. */
 export function PreviewTable({ preview }: { preview: ImportPreview }) {
@@ -14,53 +23,48 @@ export function PreviewTable({ preview }: { preview: ImportPreview }) {
   const headerProblems = new Set(preview.errors.filter((e) => e.row === preview.headerRow && e.column).map((e) => e.column));
   // A long file's value errors sit on the value column, a wide file's on its own column.
   const cellKey = (row: number, header: string) => `${row}|${header}`;
+  const columns: Column[] = [
+    { label: "Row", align: "right" },
+    ...preview.headers.map((h): Column => ({
+      label: h || <span className="italic">(no header)</span>,
+      className: headerProblems.has(h) ? "bg-decline-soft text-ink" : "",
+      title: headerProblems.has(h) ? preview.errors.find((e) => e.column === h && e.row === preview.headerRow)?.message : undefined,
+    })),
+  ];
 
   return (
-    <div className="card overflow-x-auto">
-      <table className="w-full text-left text-sm">
-        <caption className="px-4 pt-3 text-left text-sm text-ink-soft">
+    <TableCard
+      asWritten
+      headCellClass="px-3 py-2 font-semibold"
+      caption={
+        <>
           The first {preview.sample.length} of <span className="num">{preview.rowCount}</span> rows as written in the file. Marked cells have a problem, listed below.
-        </caption>
-        <thead className="border-b border-line text-xs text-ink-faint">
-          <tr>
-            <th scope="col" className="px-3 py-2 text-right font-semibold">Row</th>
-            {preview.headers.map((h, i) => (
-              <th
+        </>
+      }
+      columns={columns}
+    >
+      {preview.sample.map(({ row, cells }) => (
+        <tr key={row} className="border-b border-line last:border-0">
+          <th scope="row" className={`num px-3 py-1.5 text-right font-normal text-ink-faint ${rowProblems.has(row) ? "bg-decline-soft text-ink" : ""}`} title={rowProblems.get(row)}>
+            {row}
+          </th>
+          {preview.headers.map((h, i) => {
+            const problem = problems.get(cellKey(row, h));
+            const warning = warnings.get(cellKey(row, h));
+            return (
+              <td
                 key={i}
-                scope="col"
-                className={`px-3 py-2 font-semibold ${headerProblems.has(h) ? "bg-decline-soft text-ink" : ""}`}
-                title={headerProblems.has(h) ? preview.errors.find((e) => e.column === h && e.row === preview.headerRow)?.message : undefined}
+                title={problem ?? warning}
+                className={`num whitespace-nowrap px-3 py-1.5 ${problem ? "bg-decline-soft font-semibold outline outline-1 -outline-offset-1 outline-decline" : warning ? "bg-band" : ""}`}
               >
-                {h || <span className="italic">(no header)</span>}
-              </th>
-            ))}
-          </tr>
-        </thead>
-        <tbody>
-          {preview.sample.map(({ row, cells }) => (
-            <tr key={row} className="border-b border-line last:border-0">
-              <th scope="row" className={`num px-3 py-1.5 text-right font-normal text-ink-faint ${rowProblems.has(row) ? "bg-decline-soft text-ink" : ""}`} title={rowProblems.get(row)}>
-                {row}
-              </th>
-              {preview.headers.map((h, i) => {
-                const problem = problems.get(cellKey(row, h));
-                const warning = warnings.get(cellKey(row, h));
-                return (
-                  <td
-                    key={i}
-                    title={problem ?? warning}
-                    className={`num whitespace-nowrap px-3 py-1.5 ${problem ? "bg-decline-soft font-semibold outline outline-1 -outline-offset-1 outline-decline" : warning ? "bg-band" : ""}`}
-                  >
-                    {cells[i] ?? ""}
-                    {problem && <span className="sr-only"> (problem: {problem})</span>}
-                  </td>
-                );
-              })}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+                {cells[i] ?? ""}
+                {problem && <span className="sr-only"> (problem: {problem})</span>}
+              </td>
+            );
+          })}
+        </tr>
+      ))}
+    </TableCard>
   );
 }
 
@@ -69,32 +73,23 @@ export function ParsedValues({ preview }: { preview: ImportPreview }) {
   if (preview.parsed.length === 0) return null;
   const units = new Map(preview.tests.map((t) => [t.name, t.unit]));
   return (
-    <div className="card overflow-x-auto">
-      <table className="w-full text-left text-sm">
-        <caption className="px-4 pt-3 text-left text-sm text-ink-soft">How the first values read (matched to the roster and the battery)</caption>
-        <thead className="border-b border-line text-xs text-ink-faint">
-          <tr>
-            <th scope="col" className="px-3 py-2 text-right font-semibold">Row</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Athlete</th>
-            <th scope="col" className="px-3 py-2 font-semibold">Test</th>
-            <th scope="col" className="px-3 py-2 text-right font-semibold">Trial</th>
-            <th scope="col" className="px-3 py-2 text-right font-semibold">Score</th>
-          </tr>
-        </thead>
-        <tbody>
-          {preview.parsed.map((v) => (
-            <tr key={`${v.row}|${v.column}`} className="border-b border-line last:border-0">
-              <td className="num px-3 py-1.5 text-right text-ink-faint">{v.row}</td>
-              <td className="px-3 py-1.5">{v.athleteName}</td>
-              <td className="px-3 py-1.5">{v.testName}</td>
-              <td className="num px-3 py-1.5 text-right">{v.trial}</td>
-              <td className="num px-3 py-1.5 text-right">
-                {v.value} <span className="text-ink-faint">{units.get(v.testName)}</span>
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <TableCard
+      asWritten
+      headCellClass="px-3 py-2 font-semibold"
+      caption="How the first values read (matched to the roster and the battery)"
+      columns={PARSED_COLUMNS}
+    >
+      {preview.parsed.map((v) => (
+        <tr key={`${v.row}|${v.column}`} className="border-b border-line last:border-0">
+          <td className="num px-3 py-1.5 text-right text-ink-faint">{v.row}</td>
+          <td className="px-3 py-1.5">{v.athleteName}</td>
+          <td className="px-3 py-1.5">{v.testName}</td>
+          <td className="num px-3 py-1.5 text-right">{v.trial}</td>
+          <td className="num px-3 py-1.5 text-right">
+            {v.value} <span className="text-ink-faint">{units.get(v.testName)}</span>
+          </td>
+        </tr>
+      ))}
+    </TableCard>
   );
 }

@@ -4,9 +4,9 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { Controller, useForm } from "react-hook-form";
 import type { z } from "zod";
-import { FieldError, FormAlert, applyServerErrors } from "@/components/form-bits";
+import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
 import { PHASES } from "@/db/schema";
-import type { SquadListItem, TestItem } from "@/hooks/api-types";
+import type { SquadSummary, TestItem } from "@/hooks/api-types";
 import { fetchJson } from "@/hooks/use-api";
 import { PHASE_LABELS } from "@/lib/labels";
 import { sessionCreateSchema, type SessionCreateInput } from "@/lib/validation/sessions";
@@ -25,7 +25,7 @@ export function SessionCreateForm({
   defaultSquadId,
   onDone,
 }: {
-  squads: SquadListItem[];
+  squads: SquadSummary[];
   tests: TestItem[];
   defaultSquadId: number | null;
   onDone: (session: { id: number }) => void;
@@ -59,31 +59,25 @@ export function SessionCreateForm({
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
       <div className="grid gap-4 sm:grid-cols-3">
-        <div>
-          <label htmlFor="session-squad" className="label">Squad</label>
+        <Field id="session-squad" label="Squad" error={errors.squadId?.message && "Choose the squad."}>
           <select id="session-squad" className="field" {...register("squadId", { setValueAs: (v) => (v === "" ? undefined : Number(v)) })}>
             <option value="">Choose…</option>
             {squads.map((s) => (
               <option key={s.id} value={s.id}>{s.name}</option>
             ))}
           </select>
-          <FieldError message={errors.squadId?.message && "Choose the squad."} />
-        </div>
-        <div>
-          <label htmlFor="session-date" className="label">Date</label>
+        </Field>
+        <Field id="session-date" label="Date" error={errors.date?.message}>
           <input id="session-date" type="date" className="field" {...register("date")} />
-          <FieldError message={errors.date?.message} />
-        </div>
-        <div>
-          <label htmlFor="session-phase" className="label">Phase</label>
+        </Field>
+        <Field id="session-phase" label="Phase" error={errors.phase?.message}>
           <select id="session-phase" className="field" {...register("phase")}>
             <option value="">Choose…</option>
             {PHASES.map((p) => (
               <option key={p} value={p}>{PHASE_LABELS[p]}</option>
             ))}
           </select>
-          <FieldError message={errors.phase?.message} />
-        </div>
+        </Field>
       </div>
       <fieldset>
         <legend className="label">Battery</legend>
@@ -123,17 +117,10 @@ export function SessionCreateForm({
         />
         <FieldError message={errors.testIds?.message} />
       </fieldset>
-      <div>
-        <label htmlFor="session-notes" className="label">Notes (optional)</label>
+      <Field id="session-notes" label="Notes (optional)" error={errors.notes?.message}>
         <textarea id="session-notes" rows={2} className="field" placeholder="Conditions, surface, warm-up…" {...register("notes")} />
-        <FieldError message={errors.notes?.message} />
-      </div>
-      <FormAlert message={failure} />
-      <div className="flex justify-end">
-        <button type="submit" className="btn-primary" disabled={isSubmitting}>
-          {isSubmitting ? "Creating…" : "Create session"}
-        </button>
-      </div>
+      </Field>
+      <SubmitRow failure={failure} submitting={isSubmitting} label="Create session" busyLabel="Creating…" />
     </form>
   );
 }

@@ -4,13 +4,25 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
+import { QueryStatus } from "@/components/query-status";
+import { TableCard, type Column } from "@/components/table-card";
 import type { Role } from "@/db/schema";
-import type { SessionListItem, SquadListItem, TestItem } from "@/hooks/api-types";
+import type { SessionListItem, SquadSummary, TestItem } from "@/hooks/api-types";
 import { useApi } from "@/hooks/use-api";
 import { useInvalidate } from "@/hooks/use-invalidate";
 import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
 import { PublishControl } from "./publish-control";
 import { SessionCreateForm } from "./session-create-form";
+
+const COLUMNS: Column[] = [
+  { label: "Date" },
+  { label: "Squad" },
+  { label: "Phase" },
+  { label: "Status" },
+  { label: "Battery" },
+  { label: "Results", align: "right" },
+  { label: "Actions", srOnly: true },
+];
 
 /** Testing sessions of the caller's squads, newest first, with a squad filter and "New session". */
 export function SessionList({ role, initialSquadId }: { role: Role; initialSquadId: number | null }) {
@@ -18,7 +30,7 @@ export function SessionList({ role, initialSquadId }: { role: Role; initialSquad
   const invalidate = useInvalidate();
   const [squadId, setSquadId] = useState<number | null>(initialSquadId);
   const [creating, setCreating] = useState(false);
-  const squads = useApi<{ squads: SquadListItem[] }>("/api/squads");
+  const squads = useApi<{ squads: SquadSummary[] }>("/api/squads");
   const tests = useApi<{ tests: TestItem[] }>("/api/tests?archived=include");
   const sessions = useApi<{ sessions: SessionListItem[] }>(squadId ? `/api/sessions?squadId=${squadId}` : "/api/sessions");
   const testName = new Map((tests.data?.tests ?? []).map((t) => [t.id, t.name]));
@@ -52,69 +64,50 @@ export function SessionList({ role, initialSquadId }: { role: Role; initialSquad
         </div>
       </div>
 
-      {sessions.isPending && <p role="status" className="text-ink-soft">Loading sessions…</p>}
-      {sessions.error && (
-        <div role="alert" className="card p-4">
-          <p className="font-semibold">Sessions could not load: {sessions.error.message}</p>
-          <button className="btn-quiet mt-2" onClick={() => sessions.refetch()}>Try again</button>
-        </div>
-      )}
-      {sessions.data && list.length === 0 && (
-        <p className="card p-6 text-ink-soft">No sessions yet{squadId ? " for this squad" : ""}. Create one with “New session”.</p>
-      )}
+      <QueryStatus
+        query={sessions}
+        loading="Loading sessions…"
+        failure="Sessions could not load"
+        empty={sessions.data && list.length === 0 && `No sessions yet${squadId ? " for this squad" : ""}. Create one with “New session”.`}
+      />
       {list.length > 0 && (
-        <div className="card overflow-x-auto">
-          <table className="w-full text-left text-sm">
-            <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">
-              <tr>
-                <th className="px-3 py-2">Date</th>
-                <th className="px-3 py-2">Squad</th>
-                <th className="px-3 py-2">Phase</th>
-                <th className="px-3 py-2">Status</th>
-                <th className="px-3 py-2">Battery</th>
-                <th className="px-3 py-2 text-right">Results</th>
-                <th className="px-3 py-2"><span className="sr-only">Actions</span></th>
-              </tr>
-            </thead>
-            <tbody>
-              {list.map((s) => (
-                <tr key={s.id} className="border-b border-line align-top last:border-0">
-                  <td className="num whitespace-nowrap px-3 py-2.5">
-                    <Link href={`/sessions/${s.id}`} className="font-semibold underline-offset-2 hover:underline">
-                      {formatDate(s.date)}
-                    </Link>
-                  </td>
-                  <td className="whitespace-nowrap px-3 py-2.5">{s.squadName}</td>
-                  <td className="whitespace-nowrap px-3 py-2.5">{PHASE_LABELS[s.phase] ?? s.phase}</td>
-                  <td className="px-3 py-2.5">
-                    <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${s.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}>
-                      {STATUS_LABELS[s.status]}
-                    </span>
-                  </td>
-                  <td className="px-3 py-2.5 text-ink-soft">
-                    {s.testIds.map((id) => testName.get(id) ?? `Test ${id}`).join(" · ")}
-                    {s.notes && <div className="text-xs text-ink-faint">{s.notes}</div>}
-                  </td>
-                  <td className="num px-3 py-2.5 text-right">{s.resultCount}</td>
-                  <td className="px-3 py-2.5">
-                    <div className="flex justify-end gap-1.5 whitespace-nowrap">
-                      <Link href={`/sessions/${s.id}`} className="btn-quiet px-2 py-1 text-xs">Session sheet</Link>
-                      {canPublish && (
-                        <PublishControl
-                          compact
-                          sessionId={s.id}
-                          status={s.status}
-                          squadName={s.squadName}
-                          onDone={() => void invalidate("/api/sessions", "/api/squads")}
-                        />
-                      )}
-                    </div>
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <TableCard columns={COLUMNS}>
+          {list.map((s) => (
+            <tr key={s.id} className="border-b border-line align-top last:border-0">
+              <td className="num whitespace-nowrap px-3 py-2.5">
+                <Link href={`/sessions/${s.id}`} className="font-semibold underline-offset-2 hover:underline">
+                  {formatDate(s.date)}
+                </Link>
+              </td>
+              <td className="whitespace-nowrap px-3 py-2.5">{s.squadName}</td>
+              <td className="whitespace-nowrap px-3 py-2.5">{PHASE_LABELS[s.phase] ?? s.phase}</td>
+              <td className="px-3 py-2.5">
+                <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${s.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}>
+                  {STATUS_LABELS[s.status]}
+                </span>
+              </td>
+              <td className="px-3 py-2.5 text-ink-soft">
+                {s.testIds.map((id) => testName.get(id) ?? `Test ${id}`).join(" · ")}
+                {s.notes && <div className="text-xs text-ink-faint">{s.notes}</div>}
+              </td>
+              <td className="num px-3 py-2.5 text-right">{s.resultCount}</td>
+              <td className="px-3 py-2.5">
+                <div className="flex justify-end gap-1.5 whitespace-nowrap">
+                  <Link href={`/sessions/${s.id}`} className="btn-quiet px-2 py-1 text-xs">Session sheet</Link>
+                  {canPublish && (
+                    <PublishControl
+                      compact
+                      sessionId={s.id}
+                      status={s.status}
+                      squadName={s.squadName}
+                      onDone={() => void invalidate("/api/sessions", "/api/squads")}
+                    />
+                  )}
+                </div>
+              </td>
+            </tr>
+          ))}
+        </TableCard>
       )}
 
       <Dialog open={creating} wide title="New session" onClose={() => setCreating(false)}>

@@ -2,6 +2,7 @@
 
 import Link from "next/link";
 import { useMemo, useState } from "react";
+import { LoadFailure } from "@/components/query-status";
 import { PublishControl } from "@/components/sessions/publish-control";
 import { ApiClientError } from "@/hooks/use-api";
 import { useInvalidate } from "@/hooks/use-invalidate";
@@ -34,12 +35,7 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
         </div>
       );
     }
-    return (
-      <div role="alert" className="card p-4">
-        <p className="font-semibold">The Session sheet could not load: {error.message}</p>
-        <button className="btn-quiet mt-2" onClick={() => refetch()}>Try again</button>
-      </div>
-    );
+    return <LoadFailure failure="The Session sheet could not load" error={error} onRetry={refetch} />;
   }
 
   const { session } = data;

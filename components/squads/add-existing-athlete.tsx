@@ -1,11 +1,9 @@
 "use client";
 
 import { useMemo, useState } from "react";
-import { FormAlert } from "@/components/form-bits";
-import type { RosterAthlete } from "@/hooks/api-types";
+import { Field, FormAlert } from "@/components/form-bits";
+import type { AthleteListItem, RosterAthlete } from "@/hooks/api-types";
 import { fetchJson, useApi } from "@/hooks/use-api";
-
-type Listed = { id: number; name: string; position: string | null; externalId: string | null };
 
 /** Adds an athlete who is already in the organisation (e.g. moving up from the academy) to this squad. */
 export function AddExistingAthlete({
@@ -17,7 +15,7 @@ export function AddExistingAthlete({
   alreadyIn: ReadonlySet<number>;
   onDone: (athlete: RosterAthlete) => void;
 }) {
-  const { data, isPending, error } = useApi<{ athletes: Listed[] }>("/api/athletes");
+  const { data, isPending, error } = useApi<{ athletes: AthleteListItem[] }>("/api/athletes");
   const [athleteId, setAthleteId] = useState("");
   const [failure, setFailure] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
@@ -44,8 +42,7 @@ export function AddExistingAthlete({
   if (candidates.length === 0) return <p className="text-sm text-ink-soft">Every athlete you can see is already in this squad.</p>;
   return (
     <div className="space-y-3">
-      <div>
-        <label htmlFor="existing-athlete" className="label">Athlete</label>
+      <Field id="existing-athlete" label="Athlete">
         <select id="existing-athlete" className="field" value={athleteId} onChange={(e) => setAthleteId(e.target.value)}>
           <option value="">Choose…</option>
           {candidates.map((a) => (
@@ -56,7 +53,7 @@ export function AddExistingAthlete({
             </option>
           ))}
         </select>
-      </div>
+      </Field>
       <FormAlert message={failure} />
       <div className="flex justify-end">
         <button type="button" className="btn-primary" disabled={!athleteId || busy} onClick={add}>

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { FieldError, FormAlert, applyServerErrors } from "@/components/form-bits";
+import { Field, SubmitRow, applyServerErrors } from "@/components/form-bits";
 import type { RosterAthlete } from "@/hooks/api-types";
 import { fetchJson } from "@/hooks/use-api";
 import { athleteCreateSchema, type AthleteCreateInput } from "@/lib/validation/roster";
@@ -58,51 +58,34 @@ export function AthleteForm({
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
       <div className="grid gap-4 sm:grid-cols-2">
-        <div className="sm:col-span-2">
-          <label htmlFor={id("name")} className="label">Name</label>
+        <Field id={id("name")} label="Name" error={errors.name?.message} className="sm:col-span-2">
           <input id={id("name")} className="field" autoComplete="off" {...register("name")} />
-          <FieldError message={errors.name?.message} />
-        </div>
-        <div>
-          <label htmlFor={id("position")} className="label">Position or event</label>
+        </Field>
+        <Field id={id("position")} label="Position or event" error={errors.position?.message}>
           <input id={id("position")} className="field" placeholder="e.g. MF, 400 m" {...register("position")} />
-          <FieldError message={errors.position?.message} />
-        </div>
-        <div>
-          <label htmlFor={id("sex")} className="label">Sex</label>
+        </Field>
+        <Field id={id("sex")} label="Sex" error={errors.sex?.message}>
           <select id={id("sex")} className="field" {...register("sex", { setValueAs: emptyToNull })}>
             <option value="">Not recorded</option>
             <option value="female">Female</option>
             <option value="male">Male</option>
             <option value="other">Other</option>
           </select>
-          <FieldError message={errors.sex?.message} />
-        </div>
-        <div>
-          <label htmlFor={id("dateOfBirth")} className="label">Date of birth</label>
+        </Field>
+        <Field id={id("dateOfBirth")} label="Date of birth" error={errors.dateOfBirth?.message}>
           <input id={id("dateOfBirth")} type="date" className="field" {...register("dateOfBirth")} />
-          <FieldError message={errors.dateOfBirth?.message} />
-        </div>
-        <div>
-          <label htmlFor={id("externalId")} className="label">External id</label>
+        </Field>
+        <Field id={id("externalId")} label="External id" error={errors.externalId?.message}>
           <input id={id("externalId")} className="field" placeholder="id in the gates or force plate" {...register("externalId")} />
-          <FieldError message={errors.externalId?.message} />
-        </div>
-        <div className="sm:col-span-2">
-          <label htmlFor={id("notes")} className="label">Notes</label>
+        </Field>
+        <Field id={id("notes")} label="Notes" error={errors.notes?.message} className="sm:col-span-2">
           <textarea id={id("notes")} rows={2} className="field" {...register("notes")} />
-          <FieldError message={errors.notes?.message} />
-        </div>
+        </Field>
       </div>
       <p className="text-xs text-ink-faint">
         Athlete data is personal data. Record only what the squad needs, with consent (a guardian&apos;s for minors).
       </p>
-      <FormAlert message={failure} />
-      <div className="flex justify-end">
-        <button type="submit" className="btn-primary" disabled={isSubmitting}>
-          {isSubmitting ? "Saving…" : athlete ? "Save athlete" : "Add athlete"}
-        </button>
-      </div>
+      <SubmitRow failure={failure} submitting={isSubmitting} label={athlete ? "Save athlete" : "Add athlete"} busyLabel="Saving…" />
     </form>
   );
 }

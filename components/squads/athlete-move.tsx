@@ -2,8 +2,8 @@
 
 import { useQueries } from "@tanstack/react-query";
 import { useState } from "react";
-import { FormAlert } from "@/components/form-bits";
-import type { RosterAthlete, SquadListItem } from "@/hooks/api-types";
+import { Field, FormAlert } from "@/components/form-bits";
+import type { RosterAthlete, SquadSummary } from "@/hooks/api-types";
 import { fetchJson, useApi } from "@/hooks/use-api";
 
 /**
@@ -19,7 +19,7 @@ export function AthleteMove({
   fromSquadId: number;
   onDone: (message: string) => void;
 }) {
-  const squads = useApi<{ squads: SquadListItem[] }>("/api/squads?archived=include");
+  const squads = useApi<{ squads: SquadSummary[] }>("/api/squads?archived=include");
   const list = squads.data?.squads ?? [];
   const rosters = useQueries({
     queries: list.map((s) => {
@@ -67,15 +67,14 @@ export function AthleteMove({
         <p className="text-sm text-ink-soft">There is no other squad you can move them to.</p>
       ) : (
         <>
-          <div>
-            <label htmlFor="move-target" className="label">Squad</label>
+          <Field id="move-target" label="Squad">
             <select id="move-target" className="field" value={target} onChange={(e) => setTarget(e.target.value)}>
               <option value="">Choose…</option>
               {targets.map((s) => (
                 <option key={s.id} value={s.id}>{s.name}</option>
               ))}
             </select>
-          </div>
+          </Field>
           <label className="flex items-center gap-2 text-sm">
             <input type="checkbox" checked={keep} onChange={(e) => setKeep(e.target.checked)} />
             Keep them in this squad too

@@ -1,6 +1,7 @@
 "use client";
 
 import { useMemo, useState } from "react";
+import { TableCard, type Column } from "@/components/table-card";
 import type { RosterAthlete } from "@/hooks/api-types";
 import { formatDate } from "@/lib/labels";
 
@@ -44,6 +45,26 @@ export function AthleteTable({
     });
   }, [athletes, query, sort]);
 
+  const columns: Column[] = [
+    ...COLUMNS.map((col): Column => {
+      const active = sort.key === col.key;
+      return {
+        "aria-sort": active ? (sort.dir === 1 ? "ascending" : "descending") : "none",
+        label: (
+          <button
+            type="button"
+            className="flex items-center gap-1 font-semibold uppercase tracking-wide hover:text-ink"
+            onClick={() => setSort(active ? { key: col.key, dir: sort.dir === 1 ? -1 : 1 } : { key: col.key, dir: 1 })}
+          >
+            {col.label}
+            <span aria-hidden className={active ? "text-ink" : "opacity-30"}>{active && sort.dir === -1 ? "▼" : "▲"}</span>
+          </button>
+        ),
+      };
+    }),
+    { label: "Actions", srOnly: true },
+  ];
+
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-center gap-3">
@@ -60,52 +81,28 @@ export function AthleteTable({
           <span className="num">{shown.length}</span> of <span className="num">{athletes.length}</span> athletes
         </span>
       </div>
-      <div className="card overflow-x-auto">
-        <table className="w-full text-left text-sm">
-          <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">
-            <tr>
-              {COLUMNS.map((col) => {
-                const active = sort.key === col.key;
-                return (
-                  <th key={col.key} className="px-3 py-2" aria-sort={active ? (sort.dir === 1 ? "ascending" : "descending") : "none"}>
-                    <button
-                      type="button"
-                      className="flex items-center gap-1 font-semibold uppercase tracking-wide hover:text-ink"
-                      onClick={() => setSort(active ? { key: col.key, dir: sort.dir === 1 ? -1 : 1 } : { key: col.key, dir: 1 })}
-                    >
-                      {col.label}
-                      <span aria-hidden className={active ? "text-ink" : "opacity-30"}>{active && sort.dir === -1 ? "▼" : "▲"}</span>
-                    </button>
-                  </th>
-                );
-              })}
-              <th className="px-3 py-2"><span className="sr-only">Actions</span></th>
-            </tr>
-          </thead>
-          <tbody>
-            {shown.length === 0 && (
-              <tr>
-                <td colSpan={COLUMNS.length + 1} className="px-3 py-6 text-center text-ink-soft">
-                  {athletes.length === 0 ? "No athletes in this squad yet." : "No athlete matches the filter."}
-                </td>
-              </tr>
-            )}
-            {shown.map((a) => (
-              <tr key={a.id} className={`border-b border-line last:border-0 ${a.archived ? "bg-paper text-ink-faint" : ""}`}>
-                <td className="px-3 py-2">
-                  <span className="font-semibold">{a.name}</span>
-                  {a.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
-                </td>
-                <td className="px-3 py-2">{a.position ?? "–"}</td>
-                <td className="px-3 py-2">{a.sex ? SEX_LABELS[a.sex] : "–"}</td>
-                <td className="num whitespace-nowrap px-3 py-2">{a.dateOfBirth ? formatDate(a.dateOfBirth) : "–"}</td>
-                <td className="num px-3 py-2">{a.externalId ?? "–"}</td>
-                <td className="px-3 py-2">{renderActions(a)}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <TableCard columns={columns}>
+        {shown.length === 0 && (
+          <tr>
+            <td colSpan={columns.length} className="px-3 py-6 text-center text-ink-soft">
+              {athletes.length === 0 ? "No athletes in this squad yet." : "No athlete matches the filter."}
+            </td>
+          </tr>
+        )}
+        {shown.map((a) => (
+          <tr key={a.id} className={`border-b border-line last:border-0 ${a.archived ? "bg-paper text-ink-faint" : ""}`}>
+            <td className="px-3 py-2">
+              <span className="font-semibold">{a.name}</span>
+              {a.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
+            </td>
+            <td className="px-3 py-2">{a.position ?? "–"}</td>
+            <td className="px-3 py-2">{a.sex ? SEX_LABELS[a.sex] : "–"}</td>
+            <td className="num whitespace-nowrap px-3 py-2">{a.dateOfBirth ? formatDate(a.dateOfBirth) : "–"}</td>
+            <td className="num px-3 py-2">{a.externalId ?? "–"}</td>
+            <td className="px-3 py-2">{renderActions(a)}</td>
+          </tr>
+        ))}
+      </TableCard>
     </div>
   );
 }

@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { Dialog } from "@/components/dialog";
+import { LoadFailure } from "@/components/query-status";
 import type { RosterAthlete, SquadDetail } from "@/hooks/api-types";
 import { ApiClientError, fetchJson, useApi } from "@/hooks/use-api";
 import { useInvalidate } from "@/hooks/use-invalidate";
@@ -57,6 +58,7 @@ export function Roster({ squadId }: { squadId: number }) {
   }
 
   const squad = detail.data?.squad;
+  const failed = detail.error ?? athletes.error;
   return (
     <section aria-labelledby="squad-heading" className="space-y-4">
       <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">
@@ -87,11 +89,12 @@ export function Roster({ squadId }: { squadId: number }) {
       {notice && (
         <p role="status" className="rounded-md border border-line bg-band px-3 py-2 text-sm">{notice}</p>
       )}
-      {(detail.error || athletes.error) && (
-        <div role="alert" className="card p-4">
-          <p className="font-semibold">The Roster could not load: {(detail.error ?? athletes.error)?.message}</p>
-          <button className="btn-quiet mt-2" onClick={() => { void detail.refetch(); void athletes.refetch(); }}>Try again</button>
-        </div>
+      {failed && (
+        <LoadFailure
+          failure="The Roster could not load"
+          error={failed}
+          onRetry={() => { void detail.refetch(); void athletes.refetch(); }}
+        />
       )}
       {athletes.isPending && <p role="status" className="text-ink-soft">Loading athletes…</p>}
       <label className="flex items-center gap-2 text-sm">

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { FieldError, FormAlert, applyServerErrors } from "@/components/form-bits";
+import { Field, SubmitRow, applyServerErrors } from "@/components/form-bits";
 import { fetchJson } from "@/hooks/use-api";
 import { squadCreateSchema, type SquadCreateInput } from "@/lib/validation/roster";
 
@@ -31,22 +31,13 @@ export function SquadCreateForm({ onDone }: { onDone: (squad: Squad) => void }) 
 
   return (
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
-      <div>
-        <label htmlFor="squad-name" className="label">Squad name</label>
+      <Field id="squad-name" label="Squad name" error={errors.name?.message}>
         <input id="squad-name" className="field" placeholder="e.g. Academy U16" {...register("name")} />
-        <FieldError message={errors.name?.message} />
-      </div>
-      <div>
-        <label htmlFor="squad-sport" className="label">Sport (optional)</label>
+      </Field>
+      <Field id="squad-sport" label="Sport (optional)" error={errors.sport?.message}>
         <input id="squad-sport" className="field" {...register("sport")} />
-        <FieldError message={errors.sport?.message} />
-      </div>
-      <FormAlert message={failure} />
-      <div className="flex justify-end">
-        <button type="submit" className="btn-primary" disabled={isSubmitting}>
-          {isSubmitting ? "Creating…" : "Create squad"}
-        </button>
-      </div>
+      </Field>
+      <SubmitRow failure={failure} submitting={isSubmitting} label="Create squad" busyLabel="Creating…" />
     </form>
   );
 }

@@ -5,11 +5,12 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import type { Phase, Role } from "@/db/schema";
-import type { SquadListItem } from "@/hooks/api-types";
+import type { SquadSummary } from "@/hooks/api-types";
 import { useApi } from "@/hooks/use-api";
 import { useInvalidate } from "@/hooks/use-invalidate";
 import { PHASE_LABELS, formatDate } from "@/lib/labels";
 import { SquadCreateForm } from "./squad-create-form";
+import { SquadsStatus } from "./squads-status";
 
 /** Roster entry point: pick a squad. The owner may create one. */
 export function SquadList({ role }: { role: Role }) {
@@ -17,7 +18,7 @@ export function SquadList({ role }: { role: Role }) {
   const [creating, setCreating] = useState(false);
   const router = useRouter();
   const invalidate = useInvalidate();
-  const { data, error, isPending, refetch } = useApi<{ squads: SquadListItem[] }>(
+  const squads = useApi<{ squads: SquadSummary[] }>(
     showArchived ? "/api/squads?archived=include" : "/api/squads",
   );
 
@@ -41,21 +42,10 @@ export function SquadList({ role }: { role: Role }) {
         </div>
       </div>
 
-      {isPending && <p role="status" className="text-ink-soft">Loading squads…</p>}
-      {error && (
-        <div role="alert" className="card p-4">
-          <p className="font-semibold">Squads could not load: {error.message}</p>
-          <button className="btn-quiet mt-2" onClick={() => refetch()}>Try again</button>
-        </div>
-      )}
-      {data && data.squads.length === 0 && (
-        <p className="card p-6 text-ink-soft">
-          {role === "coach" ? "You are not assigned to a squad yet. Ask your head of performance to add you." : "No squads yet."}
-        </p>
-      )}
-      {data && data.squads.length > 0 && (
+      <SquadsStatus query={squads} role={role} />
+      {squads.data && squads.data.squads.length > 0 && (
         <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
-          {data.squads.map((squad) => (
+          {squads.data.squads.map((squad) => (
             <li key={squad.id}>
               <Link
                 href={`/squads/${squad.id}`}

@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
-import { FieldError, FormAlert, applyServerErrors } from "@/components/form-bits";
+import { Field, FormAlert, applyServerErrors } from "@/components/form-bits";
 import type { Person, SquadDetail } from "@/hooks/api-types";
 import { fetchJson, useApi } from "@/hooks/use-api";
 import { squadCreateSchema } from "@/lib/validation/roster";
@@ -45,16 +45,12 @@ function RenameForm({ squad, onSaved }: { squad: Squad; onSaved: (message: strin
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-3">
       <h3 className="font-semibold">Name</h3>
       <div className="grid gap-3 sm:grid-cols-2">
-        <div>
-          <label htmlFor="settings-name" className="label">Squad name</label>
+        <Field id="settings-name" label="Squad name" error={formState.errors.name?.message}>
           <input id="settings-name" className="field" {...register("name")} />
-          <FieldError message={formState.errors.name?.message} />
-        </div>
-        <div>
-          <label htmlFor="settings-sport" className="label">Sport</label>
+        </Field>
+        <Field id="settings-sport" label="Sport" error={formState.errors.sport?.message}>
           <input id="settings-sport" className="field" {...register("sport")} />
-          <FieldError message={formState.errors.sport?.message} />
-        </div>
+        </Field>
       </div>
       <FormAlert message={failure} />
       <button type="submit" className="btn-quiet" disabled={formState.isSubmitting}>Rename</button>

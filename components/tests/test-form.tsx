@@ -5,8 +5,8 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { numberOrNull, numberRequired } from "@/components/decimal";
-import { FieldError, FormAlert, applyServerErrors } from "@/components/form-bits";
-import type { TestItem } from "@/hooks/api-types";
+import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
+import type { TestItem, TestRow } from "@/hooks/api-types";
 import { fetchJson } from "@/hooks/use-api";
 import { testCreateSchema, type TestCreateInput, type TestUpdateInput } from "@/lib/validation/tests";
 
@@ -36,7 +36,7 @@ function defaultsFor(test: TestItem | null): Record<string, unknown> {
 }
 
 /** Create or edit a test of the Test library. Editing sends the version that was read. */
-export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (saved: TestItem) => void }) {
+export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (saved: TestRow) => void }) {
   const [failure, setFailure] = useState<string | null>(null);
   const {
     register,
@@ -56,11 +56,11 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
     setFailure(null);
     try {
       const saved = test
-        ? await fetchJson<{ test: TestItem }>(`/api/tests/${test.id}`, {
+        ? await fetchJson<{ test: TestRow }>(`/api/tests/${test.id}`, {
             method: "PATCH",
             body: JSON.stringify({ ...values, version: test.version } satisfies TestUpdateInput),
           })
-        : await fetchJson<{ test: TestItem }>("/api/tests", { method: "POST", body: JSON.stringify(values) });
+        : await fetchJson<{ test: TestRow }>("/api/tests", { method: "POST", body: JSON.stringify(values) });
       onDone(saved.test);
     } catch (error) {
       setFailure(applyServerErrors(error, setError, FIELDS));
@@ -84,21 +84,15 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
         </p>
       )}
       <div className="grid gap-4 sm:grid-cols-[2fr_1fr_1fr]">
-        <div>
-          <label htmlFor="test-name" className="label">Name</label>
+        <Field id="test-name" label="Name" error={err("name")}>
           <input className="field" {...field("name")} {...register("name")} />
-          <FieldError id="test-name-error" message={err("name")} />
-        </div>
-        <div>
-          <label htmlFor="test-unit" className="label">Unit</label>
+        </Field>
+        <Field id="test-unit" label="Unit" error={err("unit")}>
           <input className="field" placeholder="cm, s, kg, m" {...field("unit")} {...register("unit")} />
-          <FieldError id="test-unit-error" message={err("unit")} />
-        </div>
-        <div>
-          <label htmlFor="test-decimals" className="label">Decimals</label>
+        </Field>
+        <Field id="test-decimals" label="Decimals" error={err("decimals")}>
           <input className="field num" inputMode="numeric" {...field("decimals")} {...register("decimals", num)} />
-          <FieldError id="test-decimals-error" message={err("decimals")} />
-        </div>
+        </Field>
       </div>
 
       <fieldset>
@@ -115,82 +109,58 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
       </fieldset>
 
       <div className="grid gap-4 sm:grid-cols-2">
-        <div>
-          <label htmlFor="test-trialRule" className="label">Trial rule</label>
+        <Field id="test-trialRule" label="Trial rule" error={err("trialRule")}>
           <select className="field" {...field("trialRule")} {...register("trialRule")}>
             <option value="best">Best of the trials</option>
             <option value="mean">Mean of the trials</option>
           </select>
-          <FieldError id="test-trialRule-error" message={err("trialRule")} />
-        </div>
-        <div>
-          <label htmlFor="test-trialsPerSession" className="label">Trials per session</label>
+        </Field>
+        <Field id="test-trialsPerSession" label="Trials per session" error={err("trialsPerSession")}>
           <input className="field num" inputMode="numeric" {...field("trialsPerSession")} {...register("trialsPerSession", num)} />
-          <FieldError id="test-trialsPerSession-error" message={err("trialsPerSession")} />
-        </div>
+        </Field>
       </div>
 
       <div className="grid gap-4 sm:grid-cols-[1.6fr_1fr_1fr]">
-        <div>
-          <label htmlFor="test-swcMethod" className="label">Smallest worthwhile change</label>
+        <Field id="test-swcMethod" label="Smallest worthwhile change">
           <select className="field" {...field("swcMethod")} {...register("swcMethod")}>
             <option value="sd-factor">Factor × between-athlete SD</option>
             <option value="fixed">Fixed value in the unit</option>
             <option value="cv-factor">Factor × CV%</option>
           </select>
-        </div>
-        <div>
-          <label htmlFor="test-swcValue" className="label">{method === "fixed" ? `SWC${inUnit}` : "Factor"}</label>
+        </Field>
+        <Field id="test-swcValue" label={method === "fixed" ? `SWC${inUnit}` : "Factor"} error={err("swcValue")}>
           <input className="field num" inputMode="decimal" {...field("swcValue")} {...register("swcValue", num)} />
-          <FieldError id="test-swcValue-error" message={err("swcValue")} />
-        </div>
-        <div>
-          <label htmlFor="test-cvPercent" className="label">CV% {method === "cv-factor" ? "" : "(optional)"}</label>
+        </Field>
+        <Field id="test-cvPercent" label={`CV% ${method === "cv-factor" ? "" : "(optional)"}`} error={err("cvPercent")}>
           <input className="field num" inputMode="decimal" {...field("cvPercent")} {...register("cvPercent", optionalNum)} />
-          <FieldError id="test-cvPercent-error" message={err("cvPercent")} />
-        </div>
+        </Field>
       </div>
 
       <div className="grid gap-4 sm:grid-cols-[1fr_1fr_2fr]">
-        <div>
-          <label htmlFor="test-typicalError" className="label">Typical error{inUnit}</label>
+        <Field id="test-typicalError" label={`Typical error${inUnit}`} error={err("typicalError")}>
           <input className="field num" inputMode="decimal" {...field("typicalError")} {...register("typicalError", optionalNum)} />
-          <FieldError id="test-typicalError-error" message={err("typicalError")} />
-        </div>
-        <div>
-          <label htmlFor="test-typicalErrorDf" className="label">Its df</label>
+        </Field>
+        <Field id="test-typicalErrorDf" label="Its df" error={err("typicalErrorDf")}>
           <input className="field num" inputMode="numeric" {...field("typicalErrorDf")} {...register("typicalErrorDf", optionalNum)} />
-          <FieldError id="test-typicalErrorDf-error" message={err("typicalErrorDf")} />
-        </div>
-        <div>
-          <label htmlFor="test-typicalErrorSource" className="label">Source of the typical error</label>
+        </Field>
+        <Field id="test-typicalErrorSource" label="Source of the typical error" error={err("typicalErrorSource")}>
           <input className="field" placeholder="e.g. club test–retest, August" {...field("typicalErrorSource")} {...register("typicalErrorSource")} />
-          <FieldError id="test-typicalErrorSource-error" message={err("typicalErrorSource")} />
-        </div>
+        </Field>
       </div>
 
       <div className="grid gap-4 sm:grid-cols-2">
-        <div>
-          <label htmlFor="test-plausibleMin" className="label">Lowest plausible score{inUnit}</label>
+        <Field id="test-plausibleMin" label={`Lowest plausible score${inUnit}`} error={err("plausibleMin")}>
           <input className="field num" inputMode="decimal" {...field("plausibleMin")} {...register("plausibleMin", optionalNum)} />
-          <FieldError id="test-plausibleMin-error" message={err("plausibleMin")} />
-        </div>
-        <div>
-          <label htmlFor="test-plausibleMax" className="label">Highest plausible score{inUnit}</label>
+        </Field>
+        <Field id="test-plausibleMax" label={`Highest plausible score${inUnit}`} error={err("plausibleMax")}>
           <input className="field num" inputMode="decimal" {...field("plausibleMax")} {...register("plausibleMax", optionalNum)} />
-          <FieldError id="test-plausibleMax-error" message={err("plausibleMax")} />
-        </div>
+        </Field>
       </div>
       <p className="text-xs text-ink-faint">
         Scores outside the plausible range are still accepted on the Session sheet, but they are marked for a second look.
       </p>
 
-      <FormAlert message={failure} />
-      <div className="flex justify-end gap-2">
-        <button type="submit" className="btn-primary" disabled={isSubmitting}>
-          {isSubmitting ? "Saving…" : test ? "Save changes" : "Add test"}
-        </button>
-      </div>
+      <SubmitRow failure={failure} submitting={isSubmitting} label={test ? "Save changes" : "Add test"} busyLabel="Saving…" />
     </form>
   );
 }

@@ -2,12 +2,25 @@
 
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
-import type { TestItem } from "@/hooks/api-types";
+import { QueryStatus } from "@/components/query-status";
+import { TableCard, type Column } from "@/components/table-card";
+import type { TestItem, TestRow } from "@/hooks/api-types";
 import { useApi } from "@/hooks/use-api";
 import { useInvalidate } from "@/hooks/use-invalidate";
 import { TestForm } from "./test-form";
 import { TestRowActions } from "./test-row-actions";
 import { directionWords, rangeWords, swcWords, typicalErrorWords } from "./test-words";
+
+const COLUMNS: Column[] = [
+  { label: "Test" },
+  { label: "Unit" },
+  { label: "Direction" },
+  { label: "Trials" },
+  { label: "SWC" },
+  { label: "Typical error" },
+  { label: "Plausible range" },
+  { label: "Results", align: "right" },
+];
 
 /** The Test library: every test of the organisation; owner and scientist may change it. */
 export function TestLibrary({ canEdit }: { canEdit: boolean }) {
@@ -15,10 +28,10 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
   const [editing, setEditing] = useState<TestItem | "new" | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const url = showArchived ? "/api/tests?archived=include" : "/api/tests";
-  const { data, error, isPending, refetch } = useApi<{ tests: TestItem[] }>(url);
+  const tests = useApi<{ tests: TestItem[] }>(url);
   const invalidate = useInvalidate();
 
-  function saved(test: TestItem) {
+  function saved(test: TestRow) {
     setNotice(editing === "new" ? `${test.name} was added to the Test library.` : `${test.name} was saved.`);
     setEditing(null);
     void invalidate("/api/tests");
@@ -52,72 +65,49 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
           {notice}
         </p>
       )}
-      {isPending && <p role="status" className="text-ink-soft">Loading the Test library…</p>}
-      {error && (
-        <div role="alert" className="card p-4">
-          <p className="font-semibold">The Test library could not load: {error.message}</p>
-          <button className="btn-quiet mt-2" onClick={() => refetch()}>Try again</button>
-        </div>
-      )}
-      {data && data.tests.length === 0 && (
-        <p className="card p-6 text-ink-soft">
-          No tests yet.{canEdit ? " Add the first one with “New test”." : ""}
-        </p>
-      )}
-      {data && data.tests.length > 0 && (
-        <div className="card overflow-x-auto">
-          <table className="w-full text-left text-sm">
-            <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">
-              <tr>
-                <th className="px-3 py-2">Test</th>
-                <th className="px-3 py-2">Unit</th>
-                <th className="px-3 py-2">Direction</th>
-                <th className="px-3 py-2">Trials</th>
-                <th className="px-3 py-2">SWC</th>
-                <th className="px-3 py-2">Typical error</th>
-                <th className="px-3 py-2">Plausible range</th>
-                <th className="px-3 py-2 text-right">Results</th>
-                {canEdit && <th className="px-3 py-2"><span className="sr-only">Actions</span></th>}
+      <QueryStatus
+        query={tests}
+        loading="Loading the Test library…"
+        failure="The Test library could not load"
+        empty={tests.data?.tests.length === 0 && `No tests yet.${canEdit ? " Add the first one with “New test”." : ""}`}
+      />
+      {tests.data && tests.data.tests.length > 0 && (
+        <TableCard columns={canEdit ? [...COLUMNS, { label: "Actions", srOnly: true }] : COLUMNS}>
+          {tests.data.tests.map((test) => {
+            const dir = directionWords(test.direction);
+            const te = typicalErrorWords(test);
+            const range = rangeWords(test);
+            return (
+              <tr key={test.id} className={`border-b border-line align-top last:border-0 ${test.archived ? "bg-paper text-ink-faint" : ""}`}>
+                <td className="px-3 py-2.5">
+                  <span className="font-semibold">{test.name}</span>
+                  {test.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
+                  <div className="text-xs text-ink-faint">{test.decimals} decimal{test.decimals === 1 ? "" : "s"}</div>
+                </td>
+                <td className="px-3 py-2.5">{test.unit}</td>
+                <td className="whitespace-nowrap px-3 py-2.5">
+                  <span aria-hidden className="mr-1 font-bold">{dir.arrow}</span>
+                  {dir.words}
+                </td>
+                <td className="whitespace-nowrap px-3 py-2.5">
+                  {test.trialRule === "best" ? "Best" : "Mean"} of <span className="num">{test.trialsPerSession}</span>
+                </td>
+                <td className="whitespace-nowrap px-3 py-2.5">{swcWords(test)}</td>
+                <td className="px-3 py-2.5">
+                  {te ? <span className="num">{te}</span> : <span className="text-ink-faint">Not set</span>}
+                  {test.typicalErrorSource && <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>}
+                </td>
+                <td className="num whitespace-nowrap px-3 py-2.5">{range ?? <span className="text-ink-faint">Any</span>}</td>
+                <td className="num px-3 py-2.5 text-right">{test.resultCount}</td>
+                {canEdit && (
+                  <td className="px-3 py-2.5">
+                    <TestRowActions test={test} onEdit={() => setEditing(test)} onNotice={setNotice} />
+                  </td>
+                )}
               </tr>
-            </thead>
-            <tbody>
-              {data.tests.map((test) => {
-                const dir = directionWords(test.direction);
-                const te = typicalErrorWords(test);
-                const range = rangeWords(test);
-                return (
-                  <tr key={test.id} className={`border-b border-line align-top last:border-0 ${test.archived ? "bg-paper text-ink-faint" : ""}`}>
-                    <td className="px-3 py-2.5">
-                      <span className="font-semibold">{test.name}</span>
-                      {test.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
-                      <div className="text-xs text-ink-faint">{test.decimals} decimal{test.decimals === 1 ? "" : "s"}</div>
-                    </td>
-                    <td className="px-3 py-2.5">{test.unit}</td>
-                    <td className="whitespace-nowrap px-3 py-2.5">
-                      <span aria-hidden className="mr-1 font-bold">{dir.arrow}</span>
-                      {dir.words}
-                    </td>
-                    <td className="whitespace-nowrap px-3 py-2.5">
-                      {test.trialRule === "best" ? "Best" : "Mean"} of <span className="num">{test.trialsPerSession}</span>
-                    </td>
-                    <td className="whitespace-nowrap px-3 py-2.5">{swcWords(test)}</td>
-                    <td className="px-3 py-2.5">
-                      {te ? <span className="num">{te}</span> : <span className="text-ink-faint">Not set</span>}
-                      {test.typicalErrorSource && <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>}
-                    </td>
-                    <td className="num whitespace-nowrap px-3 py-2.5">{range ?? <span className="text-ink-faint">Any</span>}</td>
-                    <td className="num px-3 py-2.5 text-right">{test.resultCount}</td>
-                    {canEdit && (
-                      <td className="px-3 py-2.5">
-                        <TestRowActions test={test} onEdit={() => setEditing(test)} onNotice={setNotice} />
-                      </td>
-                    )}
-                  </tr>
-                );
-              })}
-            </tbody>
-          </table>
-        </div>
+            );
+          })}
+        </TableCard>
       )}
 
       <Dialog

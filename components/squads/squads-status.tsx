@@ -1,0 +1,18 @@
+"use client";
+
+import { QueryStatus, type QueryState } from "@/components/query-status";
+import type { Role } from "@/db/schema";
+
+/** Loading, failure and empty state of the caller's squads (the Squads overview and the Roster list). */
+export function SquadsStatus({
+  query,
+  role,
+}: {
+  query: QueryState & { data?: { squads: unknown[] } };
+  role: Role;
+}) {
+  const none = role === "coach" ? "You are not assigned to a squad yet. Ask your head of performance to add you." : "No squads yet.";
+  return (
+    <QueryStatus query={query} loading="Loading squads…" failure="Squads could not load" empty={query.data?.squads.length === 0 && none} />
+  );
+}
