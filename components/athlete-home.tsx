@@ -1,10 +1,10 @@
 "use client";
 
 import { TableCard, type Column } from "@/components/table-card";
-import type { Phase } from "@/db/schema";
+import type { Phase, ResultFlag } from "@/db/schema";
 import type { AthleteResult } from "@/hooks/api-types";
 import { useApi } from "@/hooks/use-api";
-import { PHASE_LABELS, formatDate, formatValue } from "@/lib/labels";
+import { FLAG_LABELS, PHASE_LABELS, formatDate, formatValue } from "@/lib/labels";
 
 const COLUMNS: Column[] = [{ label: "Date" }, { label: "Session" }, { label: "Test" }, { label: "Result", align: "right" }];
 
@@ -36,7 +36,7 @@ export function AthleteHome({ athleteId, name }: { athleteId: number | null; nam
               <td className="px-4 py-2">{PHASE_LABELS[r.phase as Phase]}</td>
               <td className="px-4 py-2">{r.testName}</td>
               <td className="num px-4 py-2 text-right">
-                {r.flag ? r.flag : `${formatValue(r.value, 2)} ${r.unit}`}
+                {r.flag ? FLAG_LABELS[r.flag as ResultFlag] : `${formatValue(r.value, r.decimals)} ${r.unit}`}
               </td>
             </tr>
           ))}
