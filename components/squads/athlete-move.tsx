@@ -1,6 +1,5 @@
 "use client";
 
-import { useQueries } from "@tanstack/react-query";
 import { useState } from "react";
 import { Field, FormAlert } from "@/components/form-bits";
 import type { RosterAthlete, SquadSummary } from "@/hooks/api-types";
@@ -20,21 +19,17 @@ export function AthleteMove({
   onDone: (message: string) => void;
 }) {
   const squads = useApi<{ squads: SquadSummary[] }>("/api/squads?archived=include");
+  const membership = useApi<{ athlete: RosterAthlete & { squadIds: number[] } }>(`/api/athletes/${athlete.id}`);
   const list = squads.data?.squads ?? [];
-  const rosters = useQueries({
-    queries: list.map((s) => {
-      const url = `/api/squads/${s.id}/athletes?archived=include`;
-      return { queryKey: [url], queryFn: () => fetchJson<{ athletes: RosterAthlete[] }>(url) };
-    }),
-  });
   const [target, setTarget] = useState("");
   const [keep, setKeep] = useState(false);
   const [failure, setFailure] = useState<string | null>(null);
   const [busy, setBusy] = useState(false);
 
-  const loading = squads.isPending || rosters.some((r) => r.isPending);
-  const failed = squads.error ?? rosters.find((r) => r.error)?.error;
-  const current = list.filter((s, i) => s.id === fromSquadId || rosters[i]?.data?.athletes.some((a) => a.id === athlete.id));
+  const loading = squads.isPending || membership.isPending;
+  const failed = squads.error ?? membership.error;
+  const memberOf = new Set([fromSquadId, ...(membership.data?.athlete.squadIds ?? [])]);
+  const current = list.filter((s) => memberOf.has(s.id));
   const targets = list.filter((s) => !s.archived && !current.some((c) => c.id === s.id));
 
   async function move() {

@@ -106,3 +106,10 @@ export async function athleteSquadIds(actor: Actor, athleteId: number) {
     .where(and(eq(squadAthletes.athleteId, athleteId), squadScope(actor)));
   return rows.map((r) => r.id);
 }
+
+/** One athlete with the squads (in the caller's reach) they belong to. */
+export async function getAthlete(actor: Actor, athleteId: number) {
+  const [row] = await getDb().select(rosterColumns).from(athletes).where(and(eq(athletes.id, athleteId), athleteScope(actor)));
+  if (!row) throw notFound("Athlete");
+  return { ...row, squadIds: await athleteSquadIds(actor, athleteId) };
+}
