@@ -283,7 +283,8 @@ export const uploads = sqliteTable(
     organizationId: integer("organization_id")
       .notNull()
       .references(() => organizations.id, { onDelete: "cascade" }),
-    sessionId: integer("session_id").references(() => testingSessions.id, { onDelete: "set null" }),
+    // Raw files hold personal data: they go when their session goes.
+    sessionId: integer("session_id").references(() => testingSessions.id, { onDelete: "cascade" }),
     filename: text("filename").notNull(),
     sizeBytes: integer("size_bytes").notNull(),
     contentType: text("content_type"),

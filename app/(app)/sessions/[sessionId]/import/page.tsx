@@ -73,7 +73,8 @@ export default async function ImportPage({ params }: { params: Promise<{ session
               <li>Athletes are matched on the {session.squadName} roster by external id, then by name (capitals and spaces do not matter). Nobody is added.</li>
               <li>Tests are matched by name within this session's battery. “Countermovement jump #2” and “Countermovement jump (trial 2)” also work; a plain test name is trial 1.</li>
               <li>, ; tab or | between columns; in files separated by ; or tab a comma is a decimal comma. Empty cells are empty trials.</li>
-              <li>Scores already stored are never replaced unless you say so. The file is kept with the session.</li>
+              <li>Scores already stored are never replaced unless you say so.</li>
+              <li>The file holds personal data. It is kept with this session as the record of where the scores came from, and is deleted with the session; upload only what your consent and data-protection rules allow.</li>
             </ul>
           </details>
           <ImportFlow sessionId={session.id} />
