@@ -64,8 +64,8 @@ export function PublishControl({
           {publishing ? (
             <>
               <p>
-                The athletes of <strong>{squadName}</strong> will see their own results from this session on My progress,
-                and may be told by e-mail. Each athlete sees only their own scores.
+                The athletes of <strong>{squadName}</strong> will see their own results from this session on My progress.
+                Each athlete sees only their own scores.
               </p>
               <p>Check the Session sheet first: flagged and out-of-range scores will be visible to them as they are.</p>
             </>

@@ -3,7 +3,9 @@
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { LoadFailure } from "@/components/query-status";
+import { Dialog } from "@/components/dialog";
 import { PublishControl } from "@/components/sessions/publish-control";
+import { SessionEditForm } from "@/components/sessions/session-edit-form";
 import { ApiClientError } from "@/hooks/use-api";
 import { useInvalidate } from "@/hooks/use-invalidate";
 import { useSessionSheet } from "@/hooks/use-session-sheet";
@@ -19,6 +21,7 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
   const { data, error, isPending, refetch } = sheet.query;
   const [testFilter, setTestFilter] = useState<number | "all">("all");
   const [announcement, setAnnouncement] = useState("");
+  const [editing, setEditing] = useState(false);
   const tests = useMemo(
     () => (data ? (testFilter === "all" ? data.tests : data.tests.filter((t) => t.id === testFilter)) : []),
     [data, testFilter],
@@ -67,6 +70,7 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
           {data.canEdit && (
             <>
               <UndoButton sheet={sheet} onMessage={setAnnouncement} />
+              <button type="button" className="btn-quiet" onClick={() => setEditing(true)}>Edit session</button>
               <Link href={`/sessions/${session.id}/import`} className="btn-quiet">Import CSV</Link>
             </>
           )}
@@ -129,6 +133,21 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
       <SheetGrid data={data} tests={tests} sheet={sheet} canEdit={data.canEdit} onAnnounce={setAnnouncement} />
 
       <RecentChanges url={sheet.auditUrl} />
+
+      {data.canEdit && (
+        <Dialog open={editing} title="Edit session" onClose={() => setEditing(false)} wide>
+          {editing && (
+            <SessionEditForm
+              data={data}
+              onDone={() => {
+                setEditing(false);
+                setAnnouncement("The session was saved.");
+                void invalidate(`/api/sessions`, "/api/squads");
+              }}
+            />
+          )}
+        </Dialog>
+      )}
     </section>
   );
 }
