@@ -1,5 +1,5 @@
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
-import { existsSync, mkdtempSync, rmSync } from "node:fs";
+import { existsSync, mkdtempSync, readdirSync, rmSync, statSync } from "node:fs";
 import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
@@ -40,9 +40,29 @@ async function waitFor(url: string, child: ChildProcess, timeoutMs = 60_000) {
   throw new Error(`Server did not answer ${url} within ${timeoutMs} ms`);
 }
 
+const SOURCE_DIRS = ["app", "components", "hooks", "lib", "db", "types"];
+const SOURCE_FILES = ["proxy.ts", "next.config.ts", "tailwind.config.ts", "postcss.config.mjs", "package-lock.json"];
+
+function newestSourceChange(): number {
+  let newest = 0;
+  const visit = (path: string) => {
+    const stat = statSync(path, { throwIfNoEntry: false });
+    if (!stat) return;
+    if (stat.isDirectory()) for (const entry of readdirSync(path)) visit(join(path, entry));
+    else newest = Math.max(newest, stat.mtimeMs);
+  };
+  [...SOURCE_DIRS, ...SOURCE_FILES].forEach(visit);
+  return newest;
+}
+
+/** A build older than any source file would test yesterday's app. */
+function buildIsCurrent(): boolean {
+  return existsSync(".next/BUILD_ID") && statSync(".next/BUILD_ID").mtimeMs >= newestSourceChange();
+}
+
 /** Builds once if needed, then serves the production build on a fresh seeded database. */
 export default async function setup(project: TestProject) {
-  if (!existsSync(".next/BUILD_ID") || process.env.E2E_BUILD === "1") {
+  if (!buildIsCurrent() || process.env.E2E_BUILD === "1") {
     const build = spawnSync("npx", ["next", "build"], { stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } });
     if (build.status !== 0) throw new Error("next build failed");
   }
