@@ -2,6 +2,8 @@ import { describe, expect, it } from "vitest";
 import { individualChange, minimalDetectableChange, StatsInputError } from "@/lib/stats";
 import { expectDp } from "./close";
 
+// Interval for true change = change ± q·√2·TE with q = t(ν) for a TE from a small study: from memory
+// (METHODS.md §4.1 [M]), consistent with Swinton et al. 2018 (Front Nutr 5:41).
 // METHODS.md §4.4 CMJ example (constructed numbers, computed [C]):
 // pre 40.0 cm, post 42.5 cm, TE 1.0 cm on ν = 19, SWC 0.8 cm.
 const CMJ = { pre: 40, post: 42.5, typicalError: 1, swc: 0.8 };

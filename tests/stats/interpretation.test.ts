@@ -1,6 +1,8 @@
 import { describe, expect, it } from "vitest";
 import { sensitivity, magnitudeOfEffect, trialsToDetect, StatsInputError } from "@/lib/stats";
 
+// Comparing TE with the SWC is common practice, usually credited to Hopkins 2004 (Sportscience 8:1–7;
+// exact wording not confirmed, METHODS.md §4.3). The 0.8 and 1.2 cut-offs are our own convention.
 describe("sensitivity (our own TE/SWC rating; cut-offs 0.8 and 1.2 are our convention)", () => {
   it("rates a 10 m sprint with TE twice the SWC as blind", () => {
     // Duthie et al. 2006, JSCR 20:246–251 (METHODS.md §4.3/§7): TE ≈ 0.02 s, SWC ≈ 0.01 s
@@ -66,6 +68,8 @@ describe("trialsToDetect", () => {
   });
 });
 
+// Hopkins, Marshall, Batterham & Hanin 2009 (MSSE 41:3–12); the exact thresholds are from memory
+// (METHODS.md §5 marks them [M]), matching PRODUCT.md §4.
 describe("magnitudeOfEffect (Hopkins et al. 2009 scale, METHODS.md §5)", () => {
   it("bands on 0.2/0.6/1.2/2.0/4.0 using |value|", () => {
     expect(magnitudeOfEffect(0)).toBe("trivial");

@@ -204,6 +204,8 @@ describe("testRetest: properties and edge cases", () => {
   });
 });
 
+// 0.2 × between-athlete SD is common practice for team sports (Hopkins 2004, Sportscience 8:1–7);
+// 0.3 × CV for solo sports is Hopkins 2004, about half the CV Hopkins, Hawley & Burke 1999 (METHODS.md §2).
 describe("smallestWorthwhileChange and swcFromCv", () => {
   it("uses the sample SD (n − 1)", () => {
     // Sample SD of 2,4,4,4,5,5,7,9 is √(32/7) = 2.13809 (population SD would be 2)
