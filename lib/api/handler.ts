@@ -42,15 +42,41 @@ export function withApi<P = Record<string, string>>(
   };
 }
 
-/** Reads a JSON body and validates it; malformed JSON is a 400, not a 500. */
+/** The largest JSON body any route takes (a 5000-cell sheet save is well under 1 MB). */
+export const MAX_JSON_BYTES = 2 * 1024 * 1024;
+
+const tooLarge = () => new ApiError(413, "payload_too_large", "The request is larger than 2 MB. Send fewer results at once.");
+
+/** Reads the body as text, stopping as soon as it passes `max` bytes, whatever Content-Length claims. */
+async function readCappedText(request: Request, max: number): Promise<string> {
+  if (Number(request.headers.get("content-length") ?? 0) > max) throw tooLarge();
+  if (!request.body) return "";
+  const reader = request.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let total = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    total += value.byteLength;
+    if (total > max) {
+      await reader.cancel();
+      throw tooLarge();
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks).toString("utf8");
+}
+
+/** Reads a JSON body and validates it; malformed JSON is a 400 and an oversized one a 413, never a 500. */
 export async function readJson<T>(request: Request, schema: ZodType<T>): Promise<T> {
   const type = request.headers.get("content-type") ?? "";
   if (!type.includes("application/json")) {
     throw new ApiError(415, "unsupported_media_type", "Send the body as JSON (Content-Type: application/json).");
   }
+  const text = await readCappedText(request, MAX_JSON_BYTES);
   let body: unknown;
   try {
-    body = await request.json();
+    body = JSON.parse(text);
   } catch {
     throw new ApiError(400, "bad_request", "The body is not valid JSON.");
   }

@@ -79,6 +79,9 @@ describe("Test library", () => {
     expect(notJson.status).toBe(400);
     const wrongType = await call(testsRoute.POST, { method: "POST", body: "name=x" });
     expect(wrongType.status).toBe(415);
+    const huge = await call(testsRoute.POST, { method: "POST", body: JSON.stringify({ name: "x".repeat(3 * 1024 * 1024) }), headers: { "content-type": "application/json" } });
+    expect(huge.status).toBe(413);
+    expect(huge.json.error.code).toBe("payload_too_large");
   });
 });
 
