@@ -29,12 +29,35 @@ export function errorResponse(error: unknown): NextResponse<ErrorBody> {
 
 type RouteContext<P> = { params: Promise<P> };
 
+function hostOf(url: string | undefined | null): string | null {
+  try {
+    return url ? new URL(url).host : null;
+  } catch {
+    return null;
+  }
+}
+
+/**
+ * Session cookies are SameSite=Lax already; as a second line, a change sent by a browser
+ * from another site (its Origin names another host) is refused.
+ */
+function assertSameOrigin(request: Request) {
+  if (request.method === "GET" || request.method === "HEAD") return;
+  const origin = request.headers.get("origin");
+  if (!origin) return;
+  // Behind a proxy the Host header may name the proxy's upstream, so the public URL counts too.
+  const ours = [request.headers.get("host"), request.headers.get("x-forwarded-host"), new URL(request.url).host, hostOf(process.env.NEXTAUTH_URL)];
+  const from = hostOf(origin);
+  if (!from || !ours.includes(from)) throw new ApiError(403, "forbidden", "Changes must come from Changewise itself.");
+}
+
 /** Wraps a route handler so every failure leaves as the one error shape. */
 export function withApi<P = Record<string, string>>(
   handler: (request: Request, context: RouteContext<P>) => Promise<Response>,
 ) {
   return async (request: Request, context: RouteContext<P>): Promise<Response> => {
     try {
+      assertSameOrigin(request);
       return await handler(request, context);
     } catch (error) {
       return errorResponse(error);

@@ -134,3 +134,16 @@ describe("GET /api/squads", () => {
     expectErrorShape(athlete.json, "forbidden");
   });
 });
+
+describe("cross-site requests", () => {
+  it("refuses a change whose Origin is another site, and accepts our own", async () => {
+    await signInAs("owner@example.com");
+    const squadsApi = await import("@/app/api/squads/route");
+    const foreign = await call(squadsApi.POST, { method: "POST", url: "http://changewise.test/api/squads", body: { name: "Phished" }, headers: { origin: "https://evil.example", host: "changewise.test" } });
+    expect(foreign.status).toBe(403);
+    const opaque = await call(squadsApi.POST, { method: "POST", url: "http://changewise.test/api/squads", body: { name: "Sandboxed" }, headers: { origin: "null", host: "changewise.test" } });
+    expect(opaque.status).toBe(403);
+    const own = await call(squadsApi.POST, { method: "POST", url: "http://changewise.test/api/squads", body: { name: "Track Masters" }, headers: { origin: "http://changewise.test", host: "changewise.test" } });
+    expect(own.status).toBe(201);
+  });
+});
