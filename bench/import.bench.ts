@@ -19,7 +19,7 @@ import { migrateDatabase } from "../db/migrate";
 import * as s from "../db/schema";
 import { loadActor } from "../lib/data/actors";
 import { runImport } from "../lib/data/import";
-import { importOptionsSchema } from "../lib/import/options";
+import { importOptionsSchema } from "../lib/validation/import";
 import { reduceTrials } from "../lib/trials";
 import { seededRandom, type BenchResult } from "./harness";
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { importOptionsSchema, mappingRequestOf } from "@/lib/import/options";
+import { mappingRequestOf } from "@/lib/import/options";
+import { importOptionsSchema } from "@/lib/validation/import";
 
 describe("importOptionsSchema (the multipart fields besides the file)", () => {
   it("defaults to a preview and never replaces unless told", () => {

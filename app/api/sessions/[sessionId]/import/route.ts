@@ -8,7 +8,7 @@ import { json, parseId, withApi } from "@/lib/api/handler";
 import { guard, STAFF } from "@/lib/auth/guard";
 import { runImport } from "@/lib/data/import";
 import { MAX_IMPORT_BYTES, MULTIPART_ALLOWANCE_BYTES, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
-import { importOptionsSchema } from "@/lib/import/options";
+import { importOptionsSchema } from "@/lib/validation/import";
 
 const tooLarge = () => new ApiError(413, "payload_too_large", TOO_LARGE_MESSAGE);
 

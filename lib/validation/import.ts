@@ -1,0 +1,51 @@
+/**
+ * The multipart fields of POST /api/sessions/[sessionId]/import besides `file`:
+ * format, athleteColumn, testColumn, trialColumn, valueColumn, mapping (JSON), replace.
+ * One schema for the route; the Import page sends exactly these field names.
+ */
+import { z } from "zod";
+import { IMPORT_FORMATS } from "@/lib/import/types";
+
+const column = z.string().max(200, "Column names are limited to 200 characters.");
+
+const wideTarget = z
+  .object({ testId: z.number().int().positive(), trial: z.number().int().positive().max(99) })
+  .nullable();
+
+export const wideMappingSchema = z.record(column, wideTarget).refine((m) => Object.keys(m).length <= 500, "At most 500 columns.");
+
+export const importOptionsSchema = z.object({
+  mode: z.enum(["preview", "commit"], { message: "mode is preview or commit." }).default("preview"),
+  format: z.enum(IMPORT_FORMATS, { message: "format is long or wide." }).optional(),
+  athleteColumn: column.optional(),
+  testColumn: column.optional(),
+  /** An empty string says "no trial column": every row is trial 1. */
+  trialColumn: column.optional(),
+  valueColumn: column.optional(),
+  mapping: z
+    .string()
+    .max(200_000)
+    .optional()
+    .transform((text, ctx) => {
+      if (text === undefined || text === "") return undefined;
+      let parsed: unknown;
+      try {
+        parsed = JSON.parse(text);
+      } catch {
+        ctx.addIssue({ code: "custom", message: "mapping is not valid JSON." });
+        return z.NEVER;
+      }
+      const result = wideMappingSchema.safeParse(parsed);
+      if (!result.success) {
+        ctx.addIssue({ code: "custom", message: "mapping maps each column to { testId, trial } or null." });
+        return z.NEVER;
+      }
+      return result.data;
+    }),
+  replace: z
+    .string()
+    .optional()
+    .transform((v) => v !== undefined && ["yes", "true", "1", "on"].includes(v.trim().toLowerCase())),
+});
+
+export type ImportOptions = z.infer<typeof importOptionsSchema>;
