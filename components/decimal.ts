@@ -1,19 +1,16 @@
+import { parseScore } from "@/lib/import/numbers";
+
 /**
- * Reads a typed score. Accepts a decimal point or a decimal comma ("2,31" → 2.31), as
- * spreadsheets and timing-gate exports in many countries write them. Empty text is an
- * empty slot; anything else that is not a plain number is refused, never guessed.
+ * Reads a typed score with the same rules as an imported cell of a `;` file: a decimal point
+ * or a decimal comma ("2,31" → 2.31), as spreadsheets and timing-gate exports in many
+ * countries write them (one value per cell, so a comma cannot be a thousands separator).
+ * Empty text is an empty slot; anything else that is not a plain number is refused, never guessed.
  */
 export type ParsedDecimal = { ok: true; value: number | null } | { ok: false; message: string };
 
-const PLAIN_NUMBER = /^[+-]?(\d+([.,]\d*)?|[.,]\d+)$/;
-
 export function parseDecimal(text: string): ParsedDecimal {
-  const trimmed = text.trim();
-  if (trimmed === "") return { ok: true, value: null };
-  if (!PLAIN_NUMBER.test(trimmed)) return { ok: false, message: `“${trimmed}” is not a number.` };
-  const value = Number(trimmed.replace(",", "."));
-  if (!Number.isFinite(value)) return { ok: false, message: `“${trimmed}” is not a number.` };
-  return { ok: true, value };
+  const parsed = parseScore(text, ";");
+  return typeof parsed === "string" ? { ok: false, message: parsed } : { ok: true, value: parsed };
 }
 
 /** For react-hook-form `setValueAs`: empty → null, a number → number, anything else → NaN (zod refuses it). */
