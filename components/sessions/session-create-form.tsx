@@ -5,6 +5,7 @@ import { useState } from "react";
 import { Controller, useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
+import { BatteryPicker } from "./battery-picker";
 import { PHASES } from "@/db/schema";
 import type { SquadSummary, TestItem } from "@/hooks/api-types";
 import { fetchJson } from "@/hooks/use-api";
@@ -84,36 +85,17 @@ export function SessionCreateForm({
         <Controller
           control={control}
           name="testIds"
-          render={({ field }) => {
-            const chosen = field.value ?? [];
-            return (
-              <div className="grid gap-1 rounded-md border border-line p-3 sm:grid-cols-2">
-                {tests.map((t) => (
-                  <label key={t.id} className="flex items-center gap-2 py-1 text-sm">
-                    <input
-                      type="checkbox"
-                      checked={chosen.includes(t.id)}
-                      onBlur={field.onBlur}
-                      onChange={(e) =>
-                        field.onChange(
-                          e.target.checked
-                            ? tests.filter((x) => x.id === t.id || chosen.includes(x.id)).map((x) => x.id)
-                            : chosen.filter((id) => id !== t.id),
-                        )
-                      }
-                    />
-                    <span className="font-semibold">{t.name}</span>
-                    <span className="text-ink-faint">
-                      {t.unit} · {t.trialRule === "best" ? "best" : "mean"} of {t.trialsPerSession}
-                    </span>
-                  </label>
-                ))}
-                {tests.length === 0 && (
-                  <p className="text-sm text-ink-soft">The Test library is empty. Ask your sport scientist to add tests.</p>
-                )}
-              </div>
-            );
-          }}
+          render={({ field }) => (
+            <BatteryPicker
+              tests={tests}
+              chosen={field.value ?? []}
+              onChange={field.onChange}
+              onBlur={field.onBlur}
+              empty={tests.length === 0 && (
+                <p className="text-sm text-ink-soft">The Test library is empty. Ask your sport scientist to add tests.</p>
+              )}
+            />
+          )}
         />
         <FieldError message={errors.testIds?.message} />
       </fieldset>

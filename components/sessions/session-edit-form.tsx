@@ -5,6 +5,7 @@ import { useState } from "react";
 import { Controller, useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
+import { BatteryPicker } from "./battery-picker";
 import { PHASES } from "@/db/schema";
 import type { SheetData, TestItem } from "@/hooks/api-types";
 import { fetchJson, useApi } from "@/hooks/use-api";
@@ -74,29 +75,16 @@ export function SessionEditForm({ data, onDone }: { data: SheetData; onDone: () 
         <Controller
           control={control}
           name="testIds"
-          render={({ field }) => {
-            const chosen = field.value ?? [];
-            return (
-              <div className="grid gap-1 rounded-md border border-line p-3 sm:grid-cols-2">
-                {choices.map((t) => (
-                  <label key={t.id} className="flex items-center gap-2 py-1 text-sm">
-                    <input
-                      type="checkbox"
-                      checked={chosen.includes(t.id)}
-                      disabled={scored.has(t.id)}
-                      onBlur={field.onBlur}
-                      onChange={(e) =>
-                        field.onChange(e.target.checked ? [...chosen, t.id] : chosen.filter((id) => id !== t.id))
-                      }
-                    />
-                    <span className="font-semibold">{t.name}</span>
-                    {scored.has(t.id) && <span className="text-ink-faint">has scores</span>}
-                  </label>
-                ))}
-                {library.isPending && <p role="status" className="text-sm text-ink-soft">Loading the Test library…</p>}
-              </div>
-            );
-          }}
+          render={({ field }) => (
+            <BatteryPicker
+              tests={choices}
+              chosen={field.value ?? []}
+              onChange={field.onChange}
+              onBlur={field.onBlur}
+              locked={scored}
+              empty={library.isPending && <p role="status" className="text-sm text-ink-soft">Loading the Test library…</p>}
+            />
+          )}
         />
         <FieldError message={errors.testIds?.message} />
       </fieldset>
