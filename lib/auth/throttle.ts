@@ -1,6 +1,12 @@
 import { countRecentFailures, recordFailure } from "@/lib/data/sign-in";
 
-export const MAX_FAILURES_PER_WINDOW = 5;
+/** Failures a minute before one account is held. */
+export const MAX_FAILURES_PER_EMAIL = 5;
+/**
+ * Failures a minute before one address is held: higher, because a whole club often signs in
+ * from one address (one NAT), and a few typos by different staff must not lock everyone out.
+ */
+export const MAX_FAILURES_PER_ADDRESS = 20;
 export const WINDOW_MS = 60_000;
 
 export const THROTTLED_MESSAGE = "Too many failed sign-ins. Wait a minute, then try again.";
@@ -8,7 +14,7 @@ export const THROTTLED_MESSAGE = "Too many failed sign-ins. Wait a minute, then 
 /** True when this e-mail or this address has failed too often in the last minute. */
 export async function isThrottled(email: string, address: string, now = Date.now()): Promise<boolean> {
   const { byEmail, byAddress } = await countRecentFailures(email, address, now - WINDOW_MS);
-  return byEmail >= MAX_FAILURES_PER_WINDOW || byAddress >= MAX_FAILURES_PER_WINDOW;
+  return byEmail >= MAX_FAILURES_PER_EMAIL || byAddress >= MAX_FAILURES_PER_ADDRESS;
 }
 
 export function noteFailure(email: string, address: string, now = Date.now()) {

@@ -60,4 +60,23 @@ describe("sign-in in the browser", () => {
     await page.getByText("do not match an account").waitFor();
     await page.close();
   });
+
+  it("after five failures in a minute the form says to wait", async () => {
+    const page = await browser.context.newPage();
+    // An address of its own, so the rest of the suite (all from 127.0.0.1) is not held back.
+    await page.setExtraHTTPHeaders({ "x-forwarded-for": "203.0.113.77" });
+    await page.goto(`${baseUrl}/sign-in`);
+    await page.getByLabel("E-mail").fill("former.coach@example.com");
+    for (let i = 0; i < 5; i++) {
+      await page.getByLabel("Password").fill(`guess-${i}`);
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await page.getByText("do not match an account").waitFor();
+      await page.getByRole("button", { name: "Sign in" }).and(page.locator(":enabled")).waitFor();
+    }
+    await page.getByLabel("Password").fill("guess-5");
+    await page.getByRole("button", { name: "Sign in" }).click();
+    await page.getByText("Too many failed sign-ins. Wait a minute, then try again.").waitFor();
+    await screenshot(page, "sign-in-throttled");
+    await page.close();
+  });
 });
