@@ -14,7 +14,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Client } from "@libsql/client";
 import { getClient } from "../db/client";
-import { openDatabase, tuneFileDatabase } from "../db/client";
+import { openDatabase, enableWriteAheadLog } from "../db/client";
 import { migrateDatabase } from "../db/migrate";
 import * as s from "../db/schema";
 import { loadActor } from "../lib/data/actors";
@@ -105,7 +105,7 @@ async function timeImport(fixture: Fixture, bytes: Uint8Array): Promise<number> 
 /** The least work that stores the same result rows: multi-row INSERTs in one transaction. */
 async function timeBareInsert(fixture: Fixture, scores: Float64Array): Promise<number> {
   const { client } = openDatabase(fixture.url);
-  await tuneFileDatabase(client, fixture.url);
+  await enableWriteAheadLog(client, fixture.url);
   const rules = Array.from({ length: TESTS }, (_, t) => ({ rule: t % 3 ? ("best" as const) : ("mean" as const), direction: t % 2 ? ("lower" as const) : ("higher" as const) }));
   const started = process.hrtime.bigint();
   const now = Date.now();

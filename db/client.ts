@@ -31,13 +31,13 @@ export function openDatabase(url: string, authToken?: string): { client: Client;
   return { client, db: drizzle(client, { schema }) };
 }
 
-/** Embedded-file tuning; a libSQL server manages these itself. */
-export async function tuneFileDatabase(client: Client, url: string): Promise<void> {
-  if (!url.startsWith("file:")) return;
-  await client.execute("PRAGMA journal_mode = WAL");
-  await client.execute("PRAGMA foreign_keys = ON");
-  await client.execute("PRAGMA busy_timeout = 5000");
-  await client.execute("PRAGMA synchronous = NORMAL");
+/**
+ * Switches an embedded file to write-ahead logging, which is stored in the file itself.
+ * Per-connection settings do not belong here: the pool opens connections lazily, and
+ * libSQL already opens each with foreign keys on and `timeout` as its busy timeout.
+ */
+export async function enableWriteAheadLog(client: Client, url: string): Promise<void> {
+  if (url.startsWith("file:")) await client.execute("PRAGMA journal_mode = WAL");
 }
 
 function cached(): Cached {

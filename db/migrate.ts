@@ -2,7 +2,7 @@ import { mkdirSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 import { migrate } from "drizzle-orm/libsql/migrator";
-import { databaseUrl, openDatabase, tuneFileDatabase } from "./client";
+import { databaseUrl, openDatabase, enableWriteAheadLog } from "./client";
 
 const migrationsFolder = resolve(dirname(fileURLToPath(import.meta.url)), "../drizzle");
 
@@ -17,7 +17,7 @@ export async function migrateDatabase(url = databaseUrl(), authToken = process.e
   ensureFileFolder(url);
   const { client, db } = openDatabase(url, authToken);
   try {
-    await tuneFileDatabase(client, url);
+    await enableWriteAheadLog(client, url);
     await migrate(db, { migrationsFolder });
   } finally {
     client.close();

@@ -9,7 +9,7 @@ import {
   swcFromCv,
   StatsInputError,
 } from "@/lib/stats";
-import { expectDp, expectRelClose } from "./close";
+import { expectDp } from "./close";
 
 // Shrout & Fleiss (1979) Table 2, 6 targets × 4 judges, METHODS.md §3.4
 const SHROUT_FLEISS = [
