@@ -1,7 +1,11 @@
 import { defineConfig } from "vitest/config";
 import { fileURLToPath } from "node:url";
 
-const alias = { "@": fileURLToPath(new URL("./", import.meta.url)) };
+const alias = {
+  "@": fileURLToPath(new URL("./", import.meta.url)),
+  // Tests run the server modules directly; the marker only guards the browser bundle.
+  "server-only": fileURLToPath(new URL("./node_modules/server-only/empty.js", import.meta.url)),
+};
 
 export default defineConfig({
   resolve: { alias },

@@ -14,7 +14,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Client } from "@libsql/client";
 import { getClient } from "../db/client";
-import { openDatabase, enableWriteAheadLog } from "../db/client";
+import { openDatabase, enableWriteAheadLog } from "../db/connection";
 import { migrateDatabase } from "../db/migrate";
 import * as s from "../db/schema";
 import { loadActor } from "../lib/data/actors";

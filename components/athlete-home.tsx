@@ -1,8 +1,8 @@
 "use client";
 
 import { TableCard, type Column } from "@/components/table-card";
-import type { Phase, ResultFlag } from "@/db/schema";
-import type { AthleteResult } from "@/hooks/api-types";
+import type { Phase, ResultFlag } from "@/lib/domain";
+import type { AthleteResult } from "@/lib/client/api-types";
 import { useApi } from "@/hooks/use-api";
 import { FLAG_LABELS, PHASE_LABELS, formatDate, formatValue } from "@/lib/labels";
 

@@ -2,7 +2,7 @@
 
 import type { ReactNode } from "react";
 import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
-import { ApiClientError } from "@/hooks/fetch-json";
+import { ApiClientError } from "@/lib/client/fetch-json";
 
 export function FieldError({ id, message }: { id?: string; message?: string }) {
   if (!message) return null;

@@ -3,8 +3,8 @@
 import Link from "next/link";
 import { SquadsStatus } from "@/components/squads/squads-status";
 import { TableCard, type Column } from "@/components/table-card";
-import type { Phase, Role, SessionStatus } from "@/db/schema";
-import type { SquadSummary } from "@/hooks/api-types";
+import type { Phase, Role, SessionStatus } from "@/lib/domain";
+import type { SquadSummary } from "@/lib/client/api-types";
 import { useApi } from "@/hooks/use-api";
 import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
 

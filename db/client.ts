@@ -1,44 +1,14 @@
-import { createClient, type Client } from "@libsql/client";
-import { drizzle, type LibSQLDatabase } from "drizzle-orm/libsql";
-import * as schema from "./schema";
+import "server-only";
+import type { Client } from "@libsql/client";
+import { type Database, databaseUrl, openDatabase, type Transaction } from "./connection";
 
-export type Database = LibSQLDatabase<typeof schema>;
-
-export const DEFAULT_DATABASE_URL = "file:./data/changewise.db";
+export type { Database, Transaction } from "./connection";
 
 type Cached = { url: string; client: Client; db: Database; writes: Promise<unknown> };
-
-export type Transaction = Parameters<Parameters<Database["transaction"]>[0]>[0];
 
 // Hot reload in development re-evaluates modules; keeping the client on globalThis
 // stops every reload from opening another connection to the same file.
 const globalCache = globalThis as typeof globalThis & { __changewiseDb?: Cached };
-
-export function databaseUrl(): string {
-  return process.env.DATABASE_URL || DEFAULT_DATABASE_URL;
-}
-
-export function openDatabase(url: string, authToken?: string): { client: Client; db: Database } {
-  const isFile = url.startsWith("file:");
-  const client = createClient({
-    url,
-    authToken: isFile ? undefined : authToken,
-    // Several connections, so reads go on (WAL) while a write transaction is open;
-    // libSQL opens each with foreign keys on, and `timeout` is its busy timeout.
-    concurrency: isFile ? 4 : undefined,
-    timeout: isFile ? 5000 : undefined,
-  });
-  return { client, db: drizzle(client, { schema }) };
-}
-
-/**
- * Switches an embedded file to write-ahead logging, which is stored in the file itself.
- * Per-connection settings do not belong here: the pool opens connections lazily, and
- * libSQL already opens each with foreign keys on and `timeout` as its busy timeout.
- */
-export async function enableWriteAheadLog(client: Client, url: string): Promise<void> {
-  if (url.startsWith("file:")) await client.execute("PRAGMA journal_mode = WAL");
-}
 
 function cached(): Cached {
   const url = databaseUrl();

@@ -14,29 +14,9 @@ import {
   uniqueIndex,
 } from "drizzle-orm/sqlite-core";
 
-export const ROLES = ["owner", "scientist", "coach", "athlete"] as const;
-export type Role = (typeof ROLES)[number];
+import { DIRECTIONS, PHASES, RESULT_FLAGS, ROLES, SESSION_STATUSES, SEXES, SWC_METHODS, TRIAL_RULES } from "../lib/domain";
 
-export const DIRECTIONS = ["higher", "lower"] as const;
-export type Direction = (typeof DIRECTIONS)[number];
-
-export const TRIAL_RULES = ["best", "mean"] as const;
-export type TrialRule = (typeof TRIAL_RULES)[number];
-
-/** sd-factor: factor × baseline between-athlete SD; fixed: a value in the test's unit; cv-factor: factor × CV% of the mean. */
-export const SWC_METHODS = ["sd-factor", "fixed", "cv-factor"] as const;
-export type SwcMethod = (typeof SWC_METHODS)[number];
-
-export const PHASES = ["baseline", "pre-block", "post-block", "retest", "in-season"] as const;
-export type Phase = (typeof PHASES)[number];
-
-export const SESSION_STATUSES = ["draft", "published"] as const;
-export type SessionStatus = (typeof SESSION_STATUSES)[number];
-
-export const RESULT_FLAGS = ["absent", "injured", "invalid"] as const;
-export type ResultFlag = (typeof RESULT_FLAGS)[number];
-
-export const SEXES = ["female", "male", "other"] as const;
+export type { Direction, Phase, ResultFlag, Role, SessionStatus, Sex, SwcMethod, TrialRule } from "../lib/domain";
 
 const createdAt = () =>
   integer("created_at", { mode: "timestamp_ms" })

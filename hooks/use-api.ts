@@ -1,9 +1,9 @@
 "use client";
 
 import { useQuery, type UseQueryOptions } from "@tanstack/react-query";
-import { fetchJson } from "./fetch-json";
+import { fetchJson } from "@/lib/client/fetch-json";
 
-export { ApiClientError, fetchJson } from "./fetch-json";
+export { ApiClientError, fetchJson } from "@/lib/client/fetch-json";
 
 export function useApi<T>(url: string | null, options?: Omit<UseQueryOptions<T>, "queryKey" | "queryFn">) {
   return useQuery<T>({

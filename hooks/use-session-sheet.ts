@@ -2,12 +2,12 @@
 
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useCallback, useMemo, useRef, useState } from "react";
-import { parseDecimal } from "@/components/decimal";
+import { parseDecimal } from "@/lib/decimal";
 import {
   cellKey, padTrials, sameWanted, trialKey, trimTrials, wantedOf, withRow, type Wanted,
-} from "@/components/sheet/sheet-model";
-import type { ResultFlag } from "@/db/schema";
-import type { ResultConflict, ResultRow, SheetData } from "@/hooks/api-types";
+} from "@/lib/sheet/model";
+import type { ResultFlag } from "@/lib/domain";
+import type { ResultConflict, ResultRow, SheetData } from "@/lib/client/api-types";
 import { reduceTrials } from "@/lib/trials";
 import { ApiClientError, fetchJson, useApi } from "./use-api";
 

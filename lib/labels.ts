@@ -1,4 +1,4 @@
-import type { Phase, ResultFlag, SessionStatus } from "@/db/schema";
+import type { Phase, ResultFlag, SessionStatus } from "@/lib/domain";
 
 export const PHASE_LABELS: Record<Phase, string> = {
   baseline: "Baseline",

@@ -1,4 +1,4 @@
-import type { Role } from "@/db/schema";
+import type { Role } from "@/lib/domain";
 
 export type NavItem = { href: string; label: string; roles: readonly Role[] };
 

@@ -1,4 +1,4 @@
-import type { Direction, TrialRule } from "@/db/schema";
+import type { Direction, TrialRule } from "@/lib/domain";
 
 /**
  * Reduces a set of trials to the athlete's score for the session.

@@ -34,7 +34,7 @@ function run(label, command, args) {
   }
 }
 
-run("Preparing the database (migrate, seed the demo club if empty)", "npx", ["tsx", "db/seed.ts"]);
+run("Preparing the database (migrate, seed the demo club if empty)", "npx", ["tsx", "scripts/seed.ts"]);
 if (process.env.SKIP_BUILD !== "1") run("Building Changewise", "npx", ["next", "build"]);
 
 console.log(`\n▸ Starting Changewise on ${env.NEXTAUTH_URL}`);

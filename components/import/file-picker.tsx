@@ -2,7 +2,7 @@
 
 import { useId, useState } from "react";
 import { MAX_IMPORT_BYTES, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
-import { formatBytes } from "./upload";
+import { formatBytes } from "@/lib/client/upload";
 
 /** Choose or drop one CSV file; files over the limit are refused here, before any upload. */
 export function FilePicker({ onFile, disabled, current }: { onFile: (file: File) => void; disabled?: boolean; current: File | null }) {

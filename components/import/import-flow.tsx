@@ -8,12 +8,12 @@ import type { ImportCommitted, ImportPreview, ReplacementRow } from "@/lib/impor
 import type { ImportRowError } from "@/lib/import/types";
 import { FilePicker } from "./file-picker";
 import { ImportDone, PreviewFacts } from "./import-summary";
-import { draftFromPreview, fieldsOf, type MappingDraft } from "./mapping";
+import { draftFromPreview, fieldsOf, type MappingDraft } from "@/lib/import/mapping-draft";
 import { MappingStep } from "./mapping-step";
 import { ParsedValues, PreviewTable } from "./preview-table";
 import { ProblemList, ReplacementList, WarningList } from "./problem-list";
 import { ProgressBar } from "./progress-bar";
-import { uploadImport, type UploadProgress } from "./upload";
+import { uploadImport, type UploadProgress } from "@/lib/client/upload";
 
 type ErrorBody = { error?: { rows?: ImportRowError[]; details?: { replacements?: ReplacementRow[]; errorCount?: number } } };
 

@@ -3,7 +3,7 @@
 import { useId } from "react";
 import type { ImportPreview } from "@/lib/import/summary";
 import type { WideColumnStatus } from "@/lib/import/types";
-import { defaultDraft, withAthleteColumn, type MappingDraft } from "./mapping";
+import { defaultDraft, withAthleteColumn, type MappingDraft } from "@/lib/import/mapping-draft";
 
 const STATUS_WORDS: Record<WideColumnStatus, { text: string; className: string }> = {
   athlete: { text: "athlete", className: "bg-ink text-white" },

@@ -1,6 +1,6 @@
 "use client";
 
-import { formatBytes, type UploadProgress } from "./upload";
+import { formatBytes, type UploadProgress } from "@/lib/client/upload";
 
 /** Upload progress; once the bytes are sent, the server is still reading the file. */
 export function ProgressBar({ progress, label }: { progress: UploadProgress | null; label: string }) {

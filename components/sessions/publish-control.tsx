@@ -3,8 +3,8 @@
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { FormAlert } from "@/components/form-bits";
-import type { SessionStatus } from "@/db/schema";
-import type { SheetData } from "@/hooks/api-types";
+import type { SessionStatus } from "@/lib/domain";
+import type { SheetData } from "@/lib/client/api-types";
 import { fetchJson } from "@/hooks/use-api";
 
 /**

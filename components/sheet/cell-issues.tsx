@@ -1,7 +1,7 @@
 "use client";
 
 import type { CellState } from "@/hooks/use-session-sheet";
-import { describeEntry, timeWords } from "./sheet-model";
+import { describeEntry, timeWords } from "@/lib/sheet/model";
 
 export type Issue = { testId: number; testName: string; state: Extract<CellState, { status: "failed" | "conflict" }> };
 

@@ -1,8 +1,8 @@
 "use client";
 
-import type { AuditEvent } from "@/hooks/api-types";
+import type { AuditEvent } from "@/lib/client/api-types";
 import { useApi } from "@/hooks/use-api";
-import { describeEntry, timeWords } from "./sheet-model";
+import { describeEntry, timeWords } from "@/lib/sheet/model";
 
 const ACTION_WORDS: Record<string, string> = {
   "result.create": "entered",

@@ -1,9 +1,9 @@
 "use client";
 
 import { useMemo, useRef } from "react";
-import type { SheetData, SheetTest } from "@/hooks/api-types";
+import type { SheetData, SheetTest } from "@/lib/client/api-types";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
-import { isBlock, parseBlock, sheetColumns } from "./columns";
+import { isBlock, parseBlock, sheetColumns } from "@/lib/sheet/columns";
 import { SheetHead } from "./sheet-head";
 import { SheetRow } from "./sheet-row";
 

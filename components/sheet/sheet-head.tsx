@@ -1,5 +1,5 @@
-import type { SheetTest } from "@/hooks/api-types";
-import { plausibleWords } from "./sheet-model";
+import type { SheetTest } from "@/lib/client/api-types";
+import { plausibleWords } from "@/lib/sheet/model";
 
 export function SheetHead({ tests }: { tests: SheetTest[] }) {
   return (

@@ -1,16 +1,16 @@
 "use client";
 
 import { Fragment } from "react";
-import { paddedNumber } from "@/components/decimal";
-import { RESULT_FLAGS, type ResultFlag } from "@/db/schema";
-import type { SheetTest } from "@/hooks/api-types";
+import { paddedNumber } from "@/lib/decimal";
+import { RESULT_FLAGS, type ResultFlag } from "@/lib/domain";
+import type { SheetTest } from "@/lib/client/api-types";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
 import { FLAG_LABELS, formatValue } from "@/lib/labels";
 import { reduceTrials, trialSpread } from "@/lib/trials";
 import { CellIssues, type Issue } from "./cell-issues";
 import { CellStatus } from "./cell-status";
 import { TrialInput } from "./trial-input";
-import { cellKey, outsidePlausible, padTrials, plausibleWords, trialKey } from "./sheet-model";
+import { cellKey, outsidePlausible, padTrials, plausibleWords, trialKey } from "@/lib/sheet/model";
 
 type Athlete = { id: number; name: string; position: string | null };
 

@@ -1,7 +1,7 @@
 "use client";
 
 import { memo, useState } from "react";
-import { paddedNumber } from "@/components/decimal";
+import { paddedNumber } from "@/lib/decimal";
 
 /**
  * One trial slot. Keeps what is typed locally and hands it over on blur; navigation keys

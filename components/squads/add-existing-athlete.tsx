@@ -2,7 +2,7 @@
 
 import { useMemo, useState } from "react";
 import { Field, FormAlert } from "@/components/form-bits";
-import type { AthleteListItem, RosterAthlete } from "@/hooks/api-types";
+import type { AthleteListItem, RosterAthlete } from "@/lib/client/api-types";
 import { fetchJson, useApi } from "@/hooks/use-api";
 
 /** Adds an athlete who is already in the organisation (e.g. moving up from the academy) to this squad. */

@@ -5,7 +5,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Field, SubmitRow, applyServerErrors } from "@/components/form-bits";
-import type { RosterAthlete } from "@/hooks/api-types";
+import type { RosterAthlete } from "@/lib/client/api-types";
 import { fetchJson } from "@/hooks/use-api";
 import { athleteCreateSchema, type AthleteCreateInput } from "@/lib/validation/roster";
 

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { Field, FormAlert } from "@/components/form-bits";
-import type { RosterAthlete, SquadSummary } from "@/hooks/api-types";
+import type { RosterAthlete, SquadSummary } from "@/lib/client/api-types";
 import { fetchJson, useApi } from "@/hooks/use-api";
 
 /**

@@ -4,7 +4,7 @@ import Link from "next/link";
 import { useMemo, useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { LoadFailure } from "@/components/query-status";
-import type { RosterAthlete, SquadDetail } from "@/hooks/api-types";
+import type { RosterAthlete, SquadDetail } from "@/lib/client/api-types";
 import { ApiClientError, fetchJson, useApi } from "@/hooks/use-api";
 import { useInvalidate } from "@/hooks/use-invalidate";
 import { AddExistingAthlete } from "./add-existing-athlete";

@@ -5,7 +5,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { Field, FormAlert, applyServerErrors } from "@/components/form-bits";
-import type { Person, SquadDetail } from "@/hooks/api-types";
+import type { Person, SquadDetail } from "@/lib/client/api-types";
 import { fetchJson, useApi } from "@/hooks/use-api";
 import { squadCreateSchema } from "@/lib/validation/roster";
 

@@ -1,7 +1,7 @@
 "use client";
 
 import { QueryStatus, type QueryState } from "@/components/query-status";
-import type { Role } from "@/db/schema";
+import type { Role } from "@/lib/domain";
 
 /** Loading, failure and empty state of the caller's squads (the Squads overview and the Roster list). */
 export function SquadsStatus({

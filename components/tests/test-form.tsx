@@ -4,9 +4,9 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { numberOrNull, numberRequired } from "@/components/decimal";
+import { numberOrNull, numberRequired } from "@/lib/decimal";
 import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
-import type { TestItem, TestRow } from "@/hooks/api-types";
+import type { TestItem, TestRow } from "@/lib/client/api-types";
 import { fetchJson } from "@/hooks/use-api";
 import { testCreateSchema, type TestCreateInput, type TestUpdateInput } from "@/lib/validation/tests";
 

@@ -4,12 +4,12 @@ import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
 import { TableCard, type Column } from "@/components/table-card";
-import type { TestItem, TestRow } from "@/hooks/api-types";
+import type { TestItem, TestRow } from "@/lib/client/api-types";
 import { useApi } from "@/hooks/use-api";
 import { useInvalidate } from "@/hooks/use-invalidate";
 import { TestForm } from "./test-form";
 import { TestRowActions } from "./test-row-actions";
-import { directionWords, rangeWords, swcWords, typicalErrorWords } from "./test-words";
+import { directionWords, rangeWords, swcWords, typicalErrorWords } from "@/lib/words/tests";
 
 const COLUMNS: Column[] = [
   { label: "Test" },

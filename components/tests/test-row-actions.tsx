@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { TestItem } from "@/hooks/api-types";
+import type { TestItem } from "@/lib/client/api-types";
 import { fetchJson } from "@/hooks/use-api";
 import { useInvalidate } from "@/hooks/use-invalidate";
 

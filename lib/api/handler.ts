@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
-import { ApiError, invalidInput, type ErrorBody, type FieldErrors } from "./errors";
+import { ApiError, invalidInput, type ErrorBody, type FieldErrors } from "@/lib/errors";
 
 export function zodFieldErrors(error: ZodError): FieldErrors {
   const fields: FieldErrors = {};
@@ -15,10 +15,6 @@ export function errorResponse(error: unknown): NextResponse<ErrorBody> {
   if (error instanceof ApiError) return NextResponse.json(error.toBody(), { status: error.status });
   if (error instanceof ZodError) {
     return NextResponse.json(invalidInput("Some fields need attention.", zodFieldErrors(error)).toBody(), { status: 422 });
-  }
-  // Checked by name so the API layer does not pull the statistics core into every route.
-  if (error instanceof Error && error.name === "StatsInputError") {
-    return NextResponse.json(invalidInput(error.message).toBody(), { status: 422 });
   }
   console.error("Unhandled API error", error);
   return NextResponse.json(

@@ -1,3 +1,4 @@
+import "server-only";
 import { clearFailures, findUserCredentials } from "@/lib/data/sign-in";
 import { signInSchema } from "@/lib/validation/auth";
 import { hashPassword, verifyPassword } from "./password";

@@ -2,8 +2,9 @@
  * The one authorisation gate. Every route handler and server action starts with
  * `guard(...)`: signed in? role allowed? each named record inside the caller's reach?
  */
-import type { Role } from "@/db/schema";
-import { forbidden, notFound, unauthenticated, ApiError } from "@/lib/api/errors";
+import "server-only";
+import type { Role } from "@/lib/domain";
+import { forbidden, notFound, unauthenticated, ApiError } from "@/lib/errors";
 import { loadActor, type Actor } from "@/lib/data/actors";
 import { athleteInReach, sessionInReach, squadInReach, testInReach } from "@/lib/data/reach";
 import { currentUserId } from "./session";

@@ -1,5 +1,6 @@
+import "server-only";
 import { notFound, redirect } from "next/navigation";
-import { ApiError } from "@/lib/api/errors";
+import { ApiError } from "@/lib/errors";
 import { guard, type GuardOptions } from "./guard";
 
 /**

@@ -1,3 +1,4 @@
+import "server-only";
 import { countRecentFailures, recordFailure } from "@/lib/data/sign-in";
 
 /** Failures a minute before one account is held. */

@@ -1,6 +1,8 @@
+import "server-only";
 import { asc, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { athletes, memberships, organizations, users, type Role } from "@/db/schema";
+import { athletes, memberships, organizations, users } from "@/db/schema";
+import { type Role } from "@/lib/domain";
 
 export type Actor = {
   userId: number;

@@ -3,16 +3,17 @@
  * and commits a checked file in ONE transaction (results, the raw upload, one audit event),
  * so a failure anywhere leaves the session exactly as it was.
  */
+import "server-only";
 import { and, asc, eq, notInArray, sql } from "drizzle-orm";
 import { getDb, type Database, type Transaction as Tx, writeTransaction } from "@/db/client";
-import { athletes, auditEvents, results, squadAthletes, squads, testingSessions, tests, uploads, type Phase, type SessionStatus } from "@/db/schema";
-import { ApiError, forbidden, notFound } from "@/lib/api/errors";
+import { athletes, auditEvents, results, squadAthletes, squads, testingSessions, tests, uploads } from "@/db/schema";
+import { type Phase, type SessionStatus } from "@/lib/domain";
+import { ApiError, forbidden, notFound } from "@/lib/errors";
 import { analyseCsv, type Analysis } from "@/lib/import/analyse";
 import { ImportFileError, decodeCsvBytes } from "@/lib/import/decode";
 import { MAX_IMPORT_BYTES, MAX_LISTED_REPLACEMENTS, PREVIEW_ROWS, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
 import { planWrites, resultKey, type ResultWrite } from "@/lib/import/merge";
-import { mappingRequestOf } from "@/lib/import/options";
-import type { ImportOptions } from "@/lib/validation/import";
+import { type ImportOptions, mappingRequestOf } from "@/lib/validation/import";
 import { describeReplacements, type ImportCommitted, type ImportPreview } from "@/lib/import/summary";
 import type { ExistingResult, ImportContext } from "@/lib/import/types";
 import type { Actor } from "./actors";

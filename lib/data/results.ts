@@ -1,7 +1,8 @@
+import "server-only";
 import { and, desc, eq, inArray, isNull } from "drizzle-orm";
 import { getDb, writeTransaction, type Transaction as Tx } from "@/db/client";
 import { athletes, auditEvents, results, sessionTests, squadAthletes, testingSessions, tests, users } from "@/db/schema";
-import { conflict, forbidden, invalidInput, notFound, type RowError } from "@/lib/api/errors";
+import { conflict, forbidden, invalidInput, notFound, type RowError } from "@/lib/errors";
 import { reduceTrials } from "@/lib/trials";
 import type { ResultWriteInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";

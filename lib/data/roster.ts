@@ -1,7 +1,8 @@
+import "server-only";
 import { and, asc, eq, inArray, notInArray } from "drizzle-orm";
 import { getDb, writeTransaction } from "@/db/client";
 import { athletes, auditEvents, squadAthletes, squads } from "@/db/schema";
-import { conflict, invalidInput, notFound } from "@/lib/api/errors";
+import { conflict, invalidInput, notFound } from "@/lib/errors";
 import type { AthleteCreateInput, AthleteUpdateInput, SquadAthleteAddInput } from "@/lib/validation/roster";
 import type { Actor } from "./actors";
 import { isUniqueViolation } from "./errors";

@@ -2,6 +2,7 @@
  * WHERE-clause builders that keep every query inside the caller's reach:
  * the organisation always, a coach's own squads, an athlete's own record.
  */
+import "server-only";
 import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { squadAthletes, squadCoaches, squads, testingSessions, athletes } from "@/db/schema";

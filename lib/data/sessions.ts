@@ -1,7 +1,8 @@
+import "server-only";
 import { and, asc, count, desc, eq, inArray, notInArray, or } from "drizzle-orm";
 import { getDb, writeTransaction } from "@/db/client";
 import { athletes, auditEvents, results, sessionTests, squadAthletes, squads, testingSessions, tests } from "@/db/schema";
-import { conflict, forbidden, invalidInput, notFound } from "@/lib/api/errors";
+import { conflict, forbidden, invalidInput, notFound } from "@/lib/errors";
 import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
 import { listResultRows } from "./results";

@@ -1,3 +1,4 @@
+import "server-only";
 import { and, eq, gt, or, sql } from "drizzle-orm";
 import { getDb, writeTransaction } from "@/db/client";
 import { signInAttempts, users } from "@/db/schema";

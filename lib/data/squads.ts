@@ -1,3 +1,4 @@
+import "server-only";
 import { and, asc, count, desc, eq, inArray, max } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { squadAthletes, squads, testingSessions, athletes } from "@/db/schema";

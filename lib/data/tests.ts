@@ -1,7 +1,8 @@
+import "server-only";
 import { and, asc, count, eq } from "drizzle-orm";
 import { getDb, writeTransaction } from "@/db/client";
 import { auditEvents, results, sessionTests, tests } from "@/db/schema";
-import { conflict, notFound } from "@/lib/api/errors";
+import { conflict, notFound } from "@/lib/errors";
 import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
 import type { Actor } from "./actors";
 import { isUniqueViolation } from "./errors";

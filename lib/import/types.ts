@@ -1,4 +1,4 @@
-import type { Direction, ResultFlag, TrialRule } from "@/db/schema";
+import type { Direction, ResultFlag, TrialRule } from "@/lib/domain";
 
 export type ImportFormat = "long" | "wide";
 export const IMPORT_FORMATS = ["long", "wide"] as const;

@@ -4,6 +4,7 @@
  * One schema for the route; the Import page sends exactly these field names.
  */
 import { z } from "zod";
+import type { MappingRequest } from "@/lib/import/mapping";
 import { IMPORT_FORMATS } from "@/lib/import/types";
 
 const column = z.string().max(200, "Column names are limited to 200 characters.");
@@ -49,3 +50,15 @@ export const importOptionsSchema = z.object({
 });
 
 export type ImportOptions = z.infer<typeof importOptionsSchema>;
+
+/** The mapping the analysis uses, from the validated form fields (empty strings mean "not chosen"). */
+export function mappingRequestOf(options: ImportOptions): MappingRequest {
+  return {
+    format: options.format,
+    athleteColumn: options.athleteColumn || undefined,
+    testColumn: options.testColumn || undefined,
+    trialColumn: options.trialColumn,
+    valueColumn: options.valueColumn || undefined,
+    columns: options.mapping,
+  };
+}

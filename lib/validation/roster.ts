@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { SEXES } from "@/db/schema";
+import { SEXES } from "@/lib/domain";
 import { idSchema, optionalIsoDate, optionalText, requiredText } from "./common";
 
 export const squadCreateSchema = z.object({

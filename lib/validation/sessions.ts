@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { PHASES, RESULT_FLAGS, SESSION_STATUSES } from "@/db/schema";
+import { PHASES, RESULT_FLAGS, SESSION_STATUSES } from "@/lib/domain";
 import { idSchema, isoDate, optionalText } from "./common";
 
 export const sessionCreateSchema = z.object({

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { DIRECTIONS, SWC_METHODS, TRIAL_RULES } from "@/db/schema";
+import { DIRECTIONS, SWC_METHODS, TRIAL_RULES } from "@/lib/domain";
 import { optionalText, requiredText } from "./common";
 
 const fields = {

@@ -4,9 +4,9 @@ import { createServer } from "node:net";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { TestProject } from "vitest/node";
-import { openDatabase } from "../../db/client";
+import { openDatabase } from "../../db/connection";
 import { migrateDatabase } from "../../db/migrate";
-import { seedDemo } from "../../db/seed";
+import { seedDemo } from "../../scripts/seed";
 
 declare module "vitest" {
   export interface ProvidedContext {

@@ -5,7 +5,7 @@ import { eq } from "drizzle-orm";
 import { getClient, getDb } from "@/db/client";
 import { migrateDatabase } from "@/db/migrate";
 import { users } from "@/db/schema";
-import { seedDemo } from "@/db/seed";
+import { seedDemo } from "@/scripts/seed";
 
 /**
  * A real SQLite file with every migration applied and the demo club seeded.

@@ -7,7 +7,7 @@ import { setupTestDatabase } from "../helpers/db";
 vi.mock("@/lib/auth/session", () => sessionMock);
 
 const { guard, MANAGERS, STAFF } = await import("@/lib/auth/guard");
-const { ApiError } = await import("@/lib/api/errors");
+const { ApiError } = await import("@/lib/errors");
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
 const ids = { senior: 0, academy: 0, rowing: 0, seniorAthlete: 0, academyAthlete: 0, tessa: 0, rower: 0, seniorPublished: 0, seniorDraft: 0, rowingSession: 0, clubTest: 0, otherTest: 0 };

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { mappingRequestOf } from "@/lib/import/options";
+import { mappingRequestOf } from "@/lib/validation/import";
 import { importOptionsSchema } from "@/lib/validation/import";
 
 describe("importOptionsSchema (the multipart fields besides the file)", () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { numberOrNull, paddedNumber, parseDecimal } from "@/components/decimal";
-import { parseBlock, isBlock } from "@/components/sheet/columns";
+import { numberOrNull, paddedNumber, parseDecimal } from "@/lib/decimal";
+import { parseBlock, isBlock } from "@/lib/sheet/columns";
 
 describe("parseDecimal: what a coach types into a Session sheet cell", () => {
   it("reads decimal points and decimal commas, and empty as an empty trial", () => {

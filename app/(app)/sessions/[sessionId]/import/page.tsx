@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { ImportFlow } from "@/components/import/import-flow";
-import { ApiError } from "@/lib/api/errors";
+import { ApiError } from "@/lib/errors";
 import { STAFF } from "@/lib/auth/guard";
 import { pageGuard } from "@/lib/auth/page-guard";
 import { getImportSession, loadImportContext } from "@/lib/data/import";

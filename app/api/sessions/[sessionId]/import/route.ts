@@ -3,7 +3,7 @@
  * (plus format, athleteColumn, testColumn, trialColumn, valueColumn, mapping, replace).
  * Preview checks the file and writes nothing; commit writes all of it or nothing.
  */
-import { ApiError, invalidInput } from "@/lib/api/errors";
+import { ApiError, invalidInput } from "@/lib/errors";
 import { json, parseId, withApi } from "@/lib/api/handler";
 import { guard, STAFF } from "@/lib/auth/guard";
 import { runImport } from "@/lib/data/import";

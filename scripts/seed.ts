@@ -3,13 +3,13 @@ import { fileURLToPath } from "node:url";
 import { count } from "drizzle-orm";
 import { hashPassword } from "@/lib/auth/password";
 import { reduceTrials } from "@/lib/trials";
-import { databaseUrl, openDatabase, type Database } from "./client";
+import { databaseUrl, openDatabase, type Database } from "../db/connection";
 import {
   ACADEMY_SQUAD, DEMO_ORG, DEMO_PASSWORD, DEMO_TESTS, OTHER_ORG, OTHER_SQUAD, SENIOR_SQUAD, roundTo, seededRandom,
   type DemoTest,
 } from "./demo-data";
-import { migrateDatabase } from "./migrate";
-import * as s from "./schema";
+import { migrateDatabase } from "../db/migrate";
+import * as s from "../db/schema";
 
 type SessionPlan = { squad: "senior" | "academy"; date: string; phase: s.Phase; status: s.SessionStatus; tests: string[]; notes?: string };
 

@@ -3,7 +3,7 @@
  * Where a query in lib/data already names a shape, it is re-exported from there: type-only
  * imports are erased, so no server module reaches the client bundle.
  */
-import type { Phase, ResultFlag, SessionStatus } from "@/db/schema";
+import type { Phase, ResultFlag, SessionStatus } from "@/lib/domain";
 import type { ResultRow } from "@/lib/data/results";
 import type { TestRow } from "@/lib/data/tests";
 

@@ -1,4 +1,4 @@
-import type { TestItem } from "@/hooks/api-types";
+import type { TestItem } from "@/lib/client/api-types";
 
 const num = (value: number) => String(Number(value.toPrecision(6)));
 

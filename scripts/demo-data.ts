@@ -3,7 +3,7 @@
  * the noise levels only echo the published ranges in METHODS.md §7
  * (CMJ CV about 3 %, short sprints about 1–1.5 %, intermittent run about 5 %, 1RM about 3 %).
  */
-import type { Direction, TrialRule } from "./schema";
+import type { Direction, TrialRule } from "../lib/domain";
 
 export const DEMO_PASSWORD = "changewise-demo";
 

@@ -1,6 +1,6 @@
 "use client";
 
-import { ApiClientError } from "@/hooks/use-api";
+import { ApiClientError } from "@/lib/client/fetch-json";
 
 export type UploadProgress = { loaded: number; total: number; done: boolean };
 
