@@ -6,7 +6,7 @@ import "server-only";
 import type { Role } from "@/lib/domain";
 import { forbidden, notFound, unauthenticated, ApiError } from "@/lib/errors";
 import { loadActor, type Actor } from "@/lib/data/actors";
-import { athleteInReach, sessionInReach, squadInReach, testInReach } from "@/lib/data/reach";
+import { athleteInReach, sessionInReach, squadInReach, testInReach } from "@/lib/data/scope";
 import { currentUserId } from "./session";
 
 export type { Actor };

@@ -1,10 +1,119 @@
 import "server-only";
-import { and, asc, eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
-import { athletes } from "@/db/schema";
+import { and, asc, eq, inArray, notInArray } from "drizzle-orm";
+import { getDb, writeTransaction } from "@/db/client";
+import { athletes, auditEvents, squadAthletes, squads } from "@/db/schema";
+import { conflict, invalidInput, notFound } from "@/lib/errors";
+import type { AthleteCreateInput, AthleteUpdateInput, SquadAthleteAddInput } from "@/lib/validation/roster";
 import type { Actor } from "./actors";
-import { rosterColumns } from "./roster";
-import { athleteScope } from "./scope";
+import { isUniqueViolation } from "./errors";
+import { athleteScope, squadScope } from "./scope";
+
+export const rosterColumns = {
+  id: athletes.id,
+  name: athletes.name,
+  position: athletes.position,
+  sex: athletes.sex,
+  dateOfBirth: athletes.dateOfBirth,
+  externalId: athletes.externalId,
+  notes: athletes.notes,
+  archived: athletes.archived,
+};
+
+const externalIdTaken = (id: string | null | undefined) => conflict(`Another athlete already has the external id "${id}".`);
+
+/** The squad's athletes; the caller has the squad in reach (guard). */
+export async function listSquadAthletes(actor: Actor, squadId: number, { includeArchived = false } = {}) {
+  const conditions = [eq(squadAthletes.squadId, squadId), eq(athletes.organizationId, actor.organizationId)];
+  if (!includeArchived) conditions.push(eq(athletes.archived, false));
+  return getDb()
+    .select(rosterColumns)
+    .from(squadAthletes)
+    .innerJoin(athletes, eq(athletes.id, squadAthletes.athleteId))
+    .where(and(...conditions))
+    .orderBy(asc(athletes.name));
+}
+
+export async function addAthleteToSquad(actor: Actor, squadId: number, input: SquadAthleteAddInput) {
+  try {
+    return await writeTransaction(async (tx) => {
+      let athleteId: number;
+      if ("athleteId" in input) {
+        const [existing] = await tx
+          .select({ id: athletes.id })
+          .from(athletes)
+          .where(and(eq(athletes.id, input.athleteId), athleteScope(actor)));
+        if (!existing) throw notFound("Athlete");
+        athleteId = existing.id;
+      } else {
+        const [created] = await tx
+          .insert(athletes)
+          .values({ ...(input as AthleteCreateInput), organizationId: actor.organizationId })
+          .returning({ id: athletes.id });
+        athleteId = created.id;
+      }
+      await tx.insert(squadAthletes).values({ squadId, athleteId }).onConflictDoNothing();
+      const [row] = await tx.select(rosterColumns).from(athletes).where(eq(athletes.id, athleteId));
+      await tx.insert(auditEvents).values({
+        organizationId: actor.organizationId, actorUserId: actor.userId, action: "roster.add", entityType: "athlete", entityId: athleteId, after: { ...row, squadId },
+      });
+      return row;
+    });
+  } catch (error) {
+    if (isUniqueViolation(error)) throw externalIdTaken((input as AthleteCreateInput).externalId);
+    throw error;
+  }
+}
+
+/**
+ * Edits an athlete. `squadIds` replaces the athlete's squads within the caller's reach:
+ * a coach moves athletes between their own squads and never touches other squads' lists.
+ */
+export async function updateAthlete(actor: Actor, athleteId: number, input: AthleteUpdateInput) {
+  const { squadIds, ...changes } = input;
+  try {
+    return await writeTransaction(async (tx) => {
+      const [before] = await tx.select(rosterColumns).from(athletes).where(and(eq(athletes.id, athleteId), athleteScope(actor)));
+      if (!before) throw notFound("Athlete");
+      if (Object.keys(changes).length > 0) await tx.update(athletes).set(changes).where(eq(athletes.id, athleteId));
+      if (squadIds) {
+        const reachable = (await tx.select({ id: squads.id }).from(squads).where(squadScope(actor))).map((s) => s.id);
+        const wanted = [...new Set(squadIds)];
+        if (wanted.some((id) => !reachable.includes(id))) {
+          throw invalidInput("One of those squads is not yours to change.", { squadIds: "Unknown squad." });
+        }
+        const untouchable = reachable.length
+          ? and(eq(squadAthletes.athleteId, athleteId), inArray(squadAthletes.squadId, reachable), notInArray(squadAthletes.squadId, wanted.length ? wanted : [0]))
+          : undefined;
+        if (untouchable) await tx.delete(squadAthletes).where(untouchable);
+        if (wanted.length) await tx.insert(squadAthletes).values(wanted.map((squadId) => ({ squadId, athleteId }))).onConflictDoNothing();
+      }
+      const [row] = await tx.select(rosterColumns).from(athletes).where(eq(athletes.id, athleteId));
+      await tx.insert(auditEvents).values({
+        organizationId: actor.organizationId, actorUserId: actor.userId, action: "athlete.update", entityType: "athlete", entityId: athleteId, before, after: { ...row, squadIds },
+      });
+      return row;
+    });
+  } catch (error) {
+    if (isUniqueViolation(error)) throw externalIdTaken(changes.externalId);
+    throw error;
+  }
+}
+
+export async function athleteSquadIds(actor: Actor, athleteId: number) {
+  const rows = await getDb()
+    .select({ id: squadAthletes.squadId })
+    .from(squadAthletes)
+    .innerJoin(squads, eq(squads.id, squadAthletes.squadId))
+    .where(and(eq(squadAthletes.athleteId, athleteId), squadScope(actor)));
+  return rows.map((r) => r.id);
+}
+
+/** One athlete with the squads (in the caller's reach) they belong to. */
+export async function getAthlete(actor: Actor, athleteId: number) {
+  const [row] = await getDb().select(rosterColumns).from(athletes).where(and(eq(athletes.id, athleteId), athleteScope(actor)));
+  if (!row) throw notFound("Athlete");
+  return { ...row, squadIds: await athleteSquadIds(actor, athleteId) };
+}
 
 // Staff notes stay on the Roster: this list also answers athletes about themselves.
 const { notes: _staffNotes, ...listColumns } = rosterColumns;

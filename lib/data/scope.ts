@@ -5,7 +5,7 @@
 import "server-only";
 import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { squadAthletes, squadCoaches, squads, testingSessions, athletes } from "@/db/schema";
+import { squadAthletes, squadCoaches, squads, testingSessions, athletes, tests } from "@/db/schema";
 import type { Actor } from "./actors";
 
 export const isManager = (actor: Actor) => actor.role === "owner" || actor.role === "scientist";
@@ -59,4 +59,41 @@ export function sessionScope(actor: Actor): SQL {
     .from(squadAthletes)
     .where(eq(squadAthletes.athleteId, actor.athleteId));
   return and(inOrg, eq(testingSessions.status, "published"), inArray(testingSessions.squadId, ownSquads))!;
+}
+
+export async function squadInReach(actor: Actor, squadId: number): Promise<boolean> {
+  const rows = await getDb()
+    .select({ id: squads.id })
+    .from(squads)
+    .where(and(eq(squads.id, squadId), squadScope(actor)))
+    .limit(1);
+  return rows.length > 0;
+}
+
+export async function athleteInReach(actor: Actor, athleteId: number): Promise<boolean> {
+  const rows = await getDb()
+    .select({ id: athletes.id })
+    .from(athletes)
+    .where(and(eq(athletes.id, athleteId), athleteScope(actor)))
+    .limit(1);
+  return rows.length > 0;
+}
+
+export async function sessionInReach(actor: Actor, sessionId: number): Promise<boolean> {
+  const rows = await getDb()
+    .select({ id: testingSessions.id })
+    .from(testingSessions)
+    .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)))
+    .limit(1);
+  return rows.length > 0;
+}
+
+/** Every member of the organisation may read its test library. */
+export async function testInReach(actor: Actor, testId: number): Promise<boolean> {
+  const rows = await getDb()
+    .select({ id: tests.id })
+    .from(tests)
+    .where(and(eq(tests.id, testId), eq(tests.organizationId, actor.organizationId)))
+    .limit(1);
+  return rows.length > 0;
 }

@@ -1,6 +1,6 @@
 import { guard, MANAGERS } from "@/lib/auth/guard";
 import { json, withApi } from "@/lib/api/handler";
-import { listCoaches } from "@/lib/data/squad-admin";
+import { listCoaches } from "@/lib/data/squads";
 
 export const GET = withApi(async () => {
   const actor = await guard({ roles: MANAGERS });

@@ -1,7 +1,6 @@
 import { guard, OWNERS, STAFF } from "@/lib/auth/guard";
 import { json, readJson, withApi } from "@/lib/api/handler";
-import { createSquad } from "@/lib/data/squad-admin";
-import { listSquads } from "@/lib/data/squads";
+import { createSquad, listSquads } from "@/lib/data/squads";
 import { squadCreateSchema } from "@/lib/validation/roster";
 
 export const GET = withApi(async (request) => {

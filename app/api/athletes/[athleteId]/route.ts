@@ -1,6 +1,6 @@
 import { guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
-import { getAthlete, updateAthlete } from "@/lib/data/roster";
+import { getAthlete, updateAthlete } from "@/lib/data/athletes";
 import { athleteUpdateSchema } from "@/lib/validation/roster";
 
 type Params = { athleteId: string };

@@ -1,6 +1,6 @@
 import { guard, OWNERS, STAFF } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
-import { getSquad, updateSquad } from "@/lib/data/squad-admin";
+import { getSquad, updateSquad } from "@/lib/data/squads";
 import { squadUpdateSchema } from "@/lib/validation/roster";
 
 type Params = { squadId: string };

@@ -1,6 +1,6 @@
 import { guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
-import { addAthleteToSquad, listSquadAthletes } from "@/lib/data/roster";
+import { addAthleteToSquad, listSquadAthletes } from "@/lib/data/athletes";
 import { squadAthleteAddSchema } from "@/lib/validation/roster";
 
 type Params = { squadId: string };
