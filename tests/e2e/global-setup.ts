@@ -1,12 +1,5 @@
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
-import { existsSync, mkdtempSync, readdirSync, rmSync, statSync } from "node:fs";
-import { createServer } from "node:net";
-import { tmpdir } from "node:os";
-import { join } from "node:path";
 import type { TestProject } from "vitest/node";
-import { openDatabase } from "../../db/connection";
-import { migrateDatabase } from "../../db/migrate";
-import { seedDemo } from "../../scripts/seed";
+import { startProductionServer } from "../helpers/server";
 
 declare module "vitest" {
   export interface ProvidedContext {
@@ -15,85 +8,10 @@ declare module "vitest" {
   }
 }
 
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.listen(0, "127.0.0.1", () => {
-      const address = server.address();
-      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
-    });
-  });
-}
-
-async function waitFor(url: string, child: ChildProcess, timeoutMs = 60_000) {
-  const started = Date.now();
-  while (Date.now() - started < timeoutMs) {
-    if (child.exitCode !== null) throw new Error(`next start exited with ${child.exitCode}`);
-    try {
-      const response = await fetch(url);
-      if (response.ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 250));
-  }
-  throw new Error(`Server did not answer ${url} within ${timeoutMs} ms`);
-}
-
-const SOURCE_DIRS = ["app", "components", "hooks", "lib", "db", "types"];
-const SOURCE_FILES = ["proxy.ts", "next.config.ts", "tailwind.config.ts", "postcss.config.mjs", "package-lock.json"];
-
-function newestSourceChange(): number {
-  let newest = 0;
-  const visit = (path: string) => {
-    const stat = statSync(path, { throwIfNoEntry: false });
-    if (!stat) return;
-    if (stat.isDirectory()) for (const entry of readdirSync(path)) visit(join(path, entry));
-    else newest = Math.max(newest, stat.mtimeMs);
-  };
-  [...SOURCE_DIRS, ...SOURCE_FILES].forEach(visit);
-  return newest;
-}
-
-/** A build older than any source file would test yesterday's app. */
-function buildIsCurrent(): boolean {
-  return existsSync(".next/BUILD_ID") && statSync(".next/BUILD_ID").mtimeMs >= newestSourceChange();
-}
-
-/** Builds once if needed, then serves the production build on a fresh seeded database. */
+/** Serves the production build (rebuilt when older than the code) on a fresh seeded database. */
 export default async function setup(project: TestProject) {
-  if (!buildIsCurrent() || process.env.E2E_BUILD === "1") {
-    const build = spawnSync("npx", ["next", "build"], { stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } });
-    if (build.status !== 0) throw new Error("next build failed");
-  }
-  const dir = mkdtempSync(join(tmpdir(), "changewise-e2e-"));
-  const databaseUrl = `file:${join(dir, "e2e.db")}`;
-  await migrateDatabase(databaseUrl);
-  const { client, db } = openDatabase(databaseUrl);
-  await seedDemo(db, { passwordCost: 4 });
-  client.close();
-
-  const port = await freePort();
-  const baseUrl = `http://127.0.0.1:${port}`;
-  const child = spawn("node_modules/.bin/next", ["start", "-p", String(port), "-H", "127.0.0.1"], {
-    env: {
-      ...process.env,
-      DATABASE_URL: databaseUrl,
-      NEXTAUTH_SECRET: "e2e-only-secret-not-for-production-0123456789",
-      NEXTAUTH_URL: baseUrl,
-      NEXT_TELEMETRY_DISABLED: "1",
-      NODE_ENV: "production",
-    },
-    stdio: ["ignore", "ignore", "inherit"],
-  });
-  await waitFor(`${baseUrl}/sign-in`, child);
-  project.provide("baseUrl", baseUrl);
-  project.provide("databaseUrl", databaseUrl);
-
-  return async () => {
-    child.kill("SIGTERM");
-    await new Promise((r) => setTimeout(r, 300));
-    if (child.exitCode === null) child.kill("SIGKILL");
-    rmSync(dir, { recursive: true, force: true });
-  };
+  const server = await startProductionServer();
+  project.provide("baseUrl", server.baseUrl);
+  project.provide("databaseUrl", server.databaseUrl);
+  return server.stop;
 }

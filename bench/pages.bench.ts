@@ -1,0 +1,90 @@
+/**
+ * Page benchmarks in Debian's Chromium against the production build on the demo club.
+ *
+ * - sheet-rows-visible-ms: median time from navigating to a Session sheet (page.goto, warm
+ *   server, signed in as the scientist) until its first athlete row is on screen.
+ * - sheet-first-load-js-kb: gzipped JavaScript the Session sheet loads on a cold cache.
+ */
+import { chromium, type Page } from "playwright-core";
+import { startProductionServer } from "../tests/helpers/server";
+import type { BenchResult } from "./harness";
+
+const ROUNDS = 12;
+const ROW = "table tbody tr.group";
+
+async function signIn(page: Page, baseUrl: string) {
+  await page.goto(`${baseUrl}/sign-in`);
+  await page.getByLabel("E-mail").fill("scientist@example.com");
+  await page.getByLabel("Password").fill("changewise-demo");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await page.waitForURL((url) => !url.pathname.startsWith("/sign-in"));
+}
+
+/** Bytes of JavaScript as sent over the wire (gzip or brotli), for one page load on an empty cache. */
+async function firstLoadJsBytes(page: Page, url: string): Promise<number> {
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send("Network.enable");
+  await cdp.send("Network.clearBrowserCache");
+  const scripts = new Set<string>();
+  let bytes = 0;
+  cdp.on("Network.responseReceived", (e) => {
+    if (e.type === "Script") scripts.add(e.requestId);
+  });
+  cdp.on("Network.loadingFinished", (e) => {
+    if (scripts.has(e.requestId)) bytes += e.encodedDataLength;
+  });
+  await page.goto(url, { waitUntil: "networkidle" });
+  await cdp.detach();
+  return bytes;
+}
+
+const median = (values: number[]) => {
+  const sorted = [...values].sort((a, b) => a - b);
+  const mid = sorted.length >> 1;
+  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
+};
+
+export default async function pages(): Promise<BenchResult[]> {
+  const server = await startProductionServer();
+  const browser = await chromium.launch({
+    executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
+    args: ["--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"],
+  });
+  try {
+    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    await signIn(page, server.baseUrl);
+    const { sessions } = (await (await page.request.get(`${server.baseUrl}/api/sessions`)).json()) as {
+      sessions: { id: number; resultCount: number }[];
+    };
+    const busiest = sessions.reduce((a, b) => (b.resultCount > a.resultCount ? b : a));
+    const url = `${server.baseUrl}/sessions/${busiest.id}`;
+    const jsBytes = await firstLoadJsBytes(page, url);
+    // Warm the server's caches and the browser's before timing.
+    for (let i = 0; i < 3; i++) await page.goto(url).then(() => page.waitForSelector(ROW));
+    const times: number[] = [];
+    for (let i = 0; i < ROUNDS; i++) {
+      await page.goto("about:blank");
+      const started = performance.now();
+      await page.goto(url, { waitUntil: "commit" });
+      await page.waitForSelector(ROW, { state: "visible" });
+      times.push(performance.now() - started);
+    }
+    return [
+      {
+        name: "sheet-rows-visible-ms",
+        value: Number(median(times).toFixed(1)),
+        unit: "ms",
+        detail: `median of ${ROUNDS} navigations to the busiest demo Session sheet (${busiest.resultCount} results), warm server`,
+      },
+      {
+        name: "sheet-first-load-js-kb",
+        value: Number((jsBytes / 1024).toFixed(1)),
+        unit: "kB",
+        detail: "compressed JavaScript the Session sheet loads on an empty cache",
+      },
+    ];
+  } finally {
+    await browser.close();
+    await server.stop();
+  }
+}
