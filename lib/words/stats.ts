@@ -4,8 +4,8 @@
  *
  * Kept out of the statistics so that wording can change (or be translated)
  * without touching checked numbers, and so that no statistic depends on how it
- * is phrased. No magnitude-based-inference wording ("likely", "possibly",
- * "beneficial"…) anywhere: verdicts are the interval reading of PRODUCT.md §5.
+ * is phrased. No magnitude-based-inference wording anywhere (METHODS.md §4.5):
+ * verdicts are the interval reading of PRODUCT.md §5.
  */
 import type { Magnitude, Sensitivity, SensitivityRating, Verdict } from "@/lib/stats";
 
