@@ -13,10 +13,17 @@
 import { assertSample } from "./validate";
 
 /**
- * Arithmetic mean, x̄ = Σxᵢ / n.
+ * Arithmetic mean of a list of scores.
  *
+ * x̄ = Σxᵢ / n (any statistics handbook, e.g. NIST/SEMATECH e-Handbook
+ * §1.3.5.1).
+ *
+ * @param values one or more finite scores
+ * @returns the mean
+ * @throws {StatsInputError} when `values` is not a list, is empty, or holds a
+ * score that is not a finite number
  * @example
- * mean([1, 2, 3, 4]); // 2.5
+ * mean([1, 2, 3, 4]); // => 2.5
  */
 export function mean(values: ArrayLike<number>): number {
   assertSample(values, "", 1);
@@ -24,10 +31,16 @@ export function mean(values: ArrayLike<number>): number {
 }
 
 /**
- * Sample variance s² = Σ(xᵢ − x̄)² / (n − 1).
+ * Sample variance, with Bessel's n − 1 divisor.
  *
+ * s² = Σ(xᵢ − x̄)² / (n − 1) (NIST/SEMATECH e-Handbook §1.3.5.6).
+ *
+ * @param values two or more finite scores
+ * @returns the sample variance
+ * @throws {StatsInputError} when `values` is not a list, holds fewer than 2
+ * scores, or holds a score that is not a finite number
  * @example
- * sampleVariance([2, 4, 4, 4, 5, 5, 7, 9]); // 4.571428571428571
+ * sampleVariance([2, 4, 4, 4, 5, 5, 7, 9]); // => 4.571428571428571
  */
 export function sampleVariance(values: ArrayLike<number>): number {
   assertSample(values, "", 2);
@@ -35,23 +48,50 @@ export function sampleVariance(values: ArrayLike<number>): number {
 }
 
 /**
- * Sample standard deviation s = √(Σ(xᵢ − x̄)² / (n − 1)).
+ * Sample standard deviation, with Bessel's n − 1 divisor.
  *
+ * s = √(Σ(xᵢ − x̄)² / (n − 1)) (NIST/SEMATECH e-Handbook §1.3.5.6).
+ *
+ * @param values two or more finite scores
+ * @returns the sample SD
+ * @throws {StatsInputError} when `values` is not a list, holds fewer than 2
+ * scores, or holds a score that is not a finite number
  * @example
- * sampleSd([2, 4, 4, 4, 5, 5, 7, 9]); // 2.138089935299395
+ * sampleSd([2, 4, 4, 4, 5, 5, 7, 9]); // => 2.138089935299395
  */
 export function sampleSd(values: ArrayLike<number>): number {
   return Math.sqrt(sampleVariance(values));
 }
 
-/** Mean without input checks, for callers that have already validated. */
+/**
+ * Arithmetic mean x̄ = Σxᵢ / n without input checks, for callers that have
+ * already validated (checking again would double the cost of a hot loop).
+ *
+ * Does not throw: an empty list gives NaN.
+ *
+ * @param values finite scores, at least one
+ * @returns the mean
+ * @example
+ * meanUnchecked([1, 2, 3, 4]); // => 2.5
+ */
 export function meanUnchecked(values: ArrayLike<number>): number {
   let sum = 0;
   for (let i = 0; i < values.length; i++) sum += values[i];
   return sum / values.length;
 }
 
-/** Σ(xᵢ − centre)² / (n − 1) without input checks. */
+/**
+ * Σ(xᵢ − centre)² / (n − 1) without input checks; with centre = x̄ it is the
+ * sample variance (NIST/SEMATECH e-Handbook §1.3.5.6).
+ *
+ * Does not throw: one score gives NaN (0/0).
+ *
+ * @param values finite scores, at least two
+ * @param centre the point deviations are taken from, normally the mean
+ * @returns the sum of squared deviations over n − 1
+ * @example
+ * varianceAbout([2, 4, 4, 4, 5, 5, 7, 9], 5); // => 4.571428571428571
+ */
 export function varianceAbout(values: ArrayLike<number>, centre: number): number {
   let ss = 0;
   for (let i = 0; i < values.length; i++) {

@@ -1,25 +1,3 @@
-/**
- * Intraclass correlations ICC(3,1) (consistency) and ICC(2,1) (absolute
- * agreement) with their confidence limits, from two-way mean squares.
- *
- * Shrout & Fleiss (1979, Psychol Bull 86:420–428); McGraw & Wong (1996,
- * Psychol Methods 1:30–46), where they are ICC(C,1) and ICC(A,1):
- *   ICC(3,1) = (MSR − MSE)/(MSR + (k − 1)MSE)
- *   ICC(2,1) = (MSR − MSE)/(MSR + (k − 1)MSE + k(MSC − MSE)/n)
- * Limits for ICC(3,1) from F0 = MSR/MSE:
- *   FL = F0/F_{1−α/2}(n − 1, (n − 1)(k − 1)),  FU = F0·F_{1−α/2}((n − 1)(k − 1), n − 1),
- *   [(FL − 1)/(FL + k − 1), (FU − 1)/(FU + k − 1)].
- * Limits for ICC(2,1) use the Satterthwaite df v of METHODS.md §3.3 (as in
- * McGraw & Wong 1996 and the R `psych` documentation).
- * Read the limits with Koo & Li (2016, J Chiropr Med 15:155–163).
- *
- * A value is null where the data cannot support it (e.g. every score equal,
- * or no residual variation for an F ratio).
- *
- * @example
- * // Shrout & Fleiss (1979) Table 2: 6 targets × 4 judges
- * iccFromMeanSquares(twoWayMeanSquares(table)).icc21; // 0.2898
- */
 import { fQuantile } from "./distributions";
 import type { TwoWayMeanSquares } from "./two-way-anova";
 import { assertConfidence } from "./validate";
@@ -36,6 +14,33 @@ export interface IccResult {
   icc21Df: number | null;
 }
 
+/**
+ * Intraclass correlations ICC(3,1) (consistency) and ICC(2,1) (absolute
+ * agreement), with confidence limits, from two-way mean squares.
+ *
+ * Shrout & Fleiss (1979, Psychol Bull 86:420–428); McGraw & Wong (1996,
+ * Psychol Methods 1:30–46), where they are ICC(C,1) and ICC(A,1):
+ *   ICC(3,1) = (MSR − MSE)/(MSR + (k − 1)MSE)
+ *   ICC(2,1) = (MSR − MSE)/(MSR + (k − 1)MSE + k(MSC − MSE)/n)
+ * Limits for ICC(3,1) from F0 = MSR/MSE:
+ *   FL = F0/F_{1−α/2}(n − 1, (n − 1)(k − 1)),  FU = F0·F_{1−α/2}((n − 1)(k − 1), n − 1),
+ *   [(FL − 1)/(FL + k − 1), (FU − 1)/(FU + k − 1)].
+ * Limits for ICC(2,1) use the Satterthwaite df v of METHODS.md §3.3 (as in
+ * McGraw & Wong 1996 and the R `psych` documentation). Read the limits, not
+ * the point value, against Koo & Li (2016, J Chiropr Med 15:155–163).
+ *
+ * A value is null where the data cannot support it (e.g. every score equal,
+ * or no residual variation for an F ratio), rather than NaN or ±Infinity.
+ *
+ * @param ms mean squares from `twoWayMeanSquares`
+ * @param options `confidence` of the limits (default 0.95)
+ * @returns both ICCs, their limits, and the Satterthwaite df
+ * @throws {StatsInputError} when `confidence` is not strictly between 0 and 1
+ * @example
+ * // Shrout & Fleiss (1979) Table 2: 6 targets × 4 judges (METHODS.md §3.4)
+ * const table = [[9, 2, 5, 8], [6, 1, 3, 2], [8, 4, 6, 8], [7, 1, 2, 6], [10, 5, 6, 9], [6, 2, 4, 7]];
+ * iccFromMeanSquares(twoWayMeanSquares(table)).icc21; // => 0.289763… (published: 0.29)
+ */
 export function iccFromMeanSquares(
   ms: TwoWayMeanSquares,
   options: { confidence?: number } = {},

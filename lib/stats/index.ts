@@ -1,5 +1,6 @@
 /**
  * Changewise statistics core: pure functions for judging pre/post test changes.
+ * They return numbers and codes only; words for people are in `lib/words/stats.ts`.
  * Formulas, sources and check values: ../../../shared/design/METHODS.md.
  */
 export { StatsInputError } from "./errors";
@@ -25,24 +26,9 @@ export {
   type IndividualChange,
   type IndividualChangeInput,
 } from "./individual-change";
-export {
-  classifyChange,
-  orientInterval,
-  verdictLabel,
-  VERDICTS,
-  type Verdict,
-  type Interval,
-} from "./verdict";
-export {
-  pairedPower,
-  pairedSampleSize,
-  precisionSampleSize,
-  trialsToDetect,
-  tTestPower,
-  tTestSampleSize,
-  type SampleSizeResult,
-  type TTestDesign,
-  type TTestPowerOptions,
-} from "./planning";
+export { classifyChange, orientInterval, VERDICTS, type Verdict, type Interval } from "./verdict";
+export { pairedPower, tTestPower, type TTestDesign, type TTestPowerOptions } from "./power";
+export { pairedSampleSize, precisionSampleSize, tTestSampleSize, type SampleSizeResult } from "./sample-size";
+export { trialsToDetect } from "./trials";
 export { sensitivity, SENSITIVITY_CUTOFFS, type Sensitivity, type SensitivityRating } from "./sensitivity";
 export { magnitudeOfEffect, MAGNITUDE_THRESHOLDS, type Magnitude } from "./magnitude";

@@ -1,16 +1,3 @@
-/**
- * One athlete's change between two single tests, with an interval for the true
- * change and a verdict against the SWC.
- *
- * Each test carries independent error TE, so the observed change has
- * SE = √2·TE and the interval is change ± q·√2·TE (Swinton et al. 2018,
- * Front Nutr 5:41). q is t_{1−α/2}(ν) when the TE's degrees of freedom ν are
- * known from its reliability study, else z_{1−α/2}: z understates the
- * uncertainty when the TE comes from a small study (METHODS.md §4.4).
- *
- * Do not pass the SD of change scores of a control group as `typicalError`:
- * that SD already equals √2·TE.
- */
 import { classifyChange, orientInterval, type Verdict } from "./verdict";
 import { tCritical } from "./t-critical";
 import { assertConfidence, assertDegreesOfFreedom, assertFinite, assertNonNegative } from "./validate";
@@ -46,10 +33,31 @@ export interface IndividualChange {
 }
 
 /**
+ * One athlete's change between two single tests, with an interval for the true
+ * change and a verdict against the SWC.
+ *
+ * Each test carries independent error TE, so the observed change has
+ * SE = √2·TE and the interval is change ± q·√2·TE (Swinton et al. 2018,
+ * Front Nutr 5:41). q is t_{1−α/2}(ν) when the TE's degrees of freedom ν are
+ * known from its reliability study, else z_{1−α/2}, because z understates the
+ * uncertainty when the TE comes from a small study (METHODS.md §4.4). The
+ * verdict is {@link classifyChange} on the interval oriented so that positive
+ * means better.
+ *
+ * Do not pass the SD of change scores of a control group as `typicalError`:
+ * that SD already equals √2·TE.
+ *
+ * @param input scores, typical error (and its df), SWC, confidence (default
+ * 0.90) and direction (default higher is better)
+ * @returns the change, its interval raw and oriented, and the verdict code
+ * @throws {StatsInputError} when a score is not a finite number, the typical
+ * error or SWC is negative or not a number, the confidence is not strictly
+ * between 0 and 1, or `typicalErrorDf` is given but not above zero
  * @example
- * // CMJ: 40.0 → 42.5 cm, TE 1.0 cm on 19 df, SWC 0.8 cm
- * individualChange({ pre: 40, post: 42.5, typicalError: 1, typicalErrorDf: 19, swc: 0.8 });
- * // → change 2.5, interval (0.055, 4.945), verdict "gain"
+ * // CMJ: 40.0 → 42.5 cm, TE 1.0 cm on 19 df, SWC 0.8 cm (METHODS.md §4.4)
+ * const r = individualChange({ pre: 40, post: 42.5, typicalError: 1, typicalErrorDf: 19, swc: 0.8 });
+ * [r.ciLower, r.ciUpper]; // => [0.054636…, 4.945363…] (METHODS.md: 0.055 to 4.945)
+ * r.verdict; // => "gain"
  */
 export function individualChange(input: IndividualChangeInput): IndividualChange {
   const { pre, post, typicalError, typicalErrorDf, swc } = input;
@@ -79,14 +87,20 @@ export function individualChange(input: IndividualChangeInput): IndividualChange
 }
 
 /**
- * Minimal detectable change MDC = z_{1−α/2}·√2·TE (Weir 2005, JSCR
- * 19:231–240, "minimal difference"); equals the half-width of the limits of
- * agreement. Uses the exact z (1.959964 at 95%), so it sits 0.002% below the
- * textbook 1.96·√2·TE.
+ * Minimal detectable change: the smallest change one athlete's two tests can
+ * show beyond their measurement error.
  *
+ * MDC = z_{1−α/2}·√2·TE (Weir 2005, JSCR 19:231–240, "minimal difference");
+ * it equals the half-width of the limits of agreement. Uses the exact z
+ * (1.959964 at 95%), so it sits 0.002% below the textbook 1.96·√2·TE.
+ *
+ * @param typicalError the test's typical error, zero or more
+ * @param confidence confidence level in (0, 1), default 0.95
+ * @returns the MDC in score units
+ * @throws {StatsInputError} when the typical error is negative or not a
+ * number, or the confidence is not strictly between 0 and 1
  * @example
- * minimalDetectableChange(1.0); // 2.771808
- * minimalDetectableChange(1.0, 0.9); // 2.326174
+ * minimalDetectableChange(1.0); // => 2.7718076… (METHODS.md §4.4: 2.77186 is 1.96·√2)
  */
 export function minimalDetectableChange(typicalError: number, confidence = 0.95): number {
   assertNonNegative(typicalError, "The typical error");

@@ -1,17 +1,27 @@
 /**
- * Cumulative distribution function of the noncentral t distribution,
- * P(T ≤ t) for T ~ t'(df, δ).
+ * Noncentral t distribution, our own rather than `jStat.noncentralt.cdf`.
  *
- * Why our own: `jStat.noncentralt.cdf` sums the Poisson-mixture series from
- * term 0 for at least 200 terms, calling jStat's incomplete beta twice per
- * term. Against a 40-digit mpmath evaluation of the same series (378 points,
- * df 1–1000, δ −2 to 40) it is accurate to 6e-9 for |δ| ≤ 20, enough for the
- * R check values, but it returns ~0 instead of 0.5–0.95 at δ = 30 and 40 (the
- * series starts at e^{−δ²/2} and stops before reaching its bulk), and each call
- * costs ~270 µs, while sample-size root finding calls it dozens of times. This
- * version agrees with mpmath to 2e-10 on all 378 points and takes ~3 µs.
+ * jStat sums the Poisson-mixture series from term 0 for at least 200 terms,
+ * calling its incomplete beta twice per term. Against a 40-digit mpmath
+ * evaluation of the same series (378 points, df 1–1000, δ −2 to 40) it is
+ * accurate to 6e-9 for |δ| ≤ 20, enough for the R check values, but it returns
+ * ~0 instead of 0.5–0.95 at δ = 30 and 40 (the series starts at e^{−δ²/2} and
+ * stops before reaching its bulk), and each call costs ~270 µs while
+ * sample-size root finding calls it dozens of times. This version agrees with
+ * mpmath to 2e-10 on all 378 points and takes ~3 µs.
+ */
+import { jStat } from "./jstat";
+import { betaRecurrenceTerm, regularizedBeta } from "./incomplete-beta";
+import { normalCdf } from "./distributions";
+
+const ERROR_BOUND = 1e-15;
+const MAX_STEPS = 100000;
+
+/**
+ * Cumulative distribution function of the noncentral t, P(T ≤ t) for
+ * T ~ t'(df, δ): the power of a t-test is one minus it at the critical value.
  *
- * Method: the series of Lenth (1989, Applied Statistics 38:185–189, algorithm
+ * Source: the series of Lenth (1989, Applied Statistics 38:185–189, algorithm
  * AS 243), summed outward from its largest term as in Benton & Krishnamoorthy
  * (2003, Computational Statistics & Data Analysis 43:249–267). For t ≥ 0, with
  * x = t²/(t² + df) and λ = δ²/2,
@@ -24,17 +34,16 @@
  * I_x(a + 1, b) = I_x(a, b) − x^a(1 − x)^b / (a·B(a, b)). Summation stops
  * when a geometric bound on the rest of the series falls below 1e-15.
  *
+ * Does not throw: a NaN argument gives NaN; df must be above zero.
+ *
+ * @param t point at which to evaluate the CDF
+ * @param df degrees of freedom, above zero
+ * @param ncp noncentrality δ, e.g. √n·Δ/σ_d for a paired test
+ * @returns P(T ≤ t), clamped to [0, 1]
  * @example
- * // Two-sample t, n = 20 per group, Δ = σ: t_crit = 2.024394 on 38 df, ncp = √10
- * noncentralTCdf(2.024394, 38, Math.sqrt(10)); // 0.1310472, so power ≈ 0.869
+ * // Two-sample t, n = 20 per group, Δ = σ: t_crit = 2.024394 on 38 df, δ = √10
+ * noncentralTCdf(2.024394164, 38, Math.sqrt(10)); // => 0.1310471983… (power ≈ 0.869)
  */
-import { jStat } from "./jstat";
-import { betaRecurrenceTerm, regularizedBeta } from "./incomplete-beta";
-import { normalCdf } from "./distributions";
-
-const ERROR_BOUND = 1e-15;
-const MAX_STEPS = 100000;
-
 export function noncentralTCdf(t: number, df: number, ncp: number): number {
   if (Number.isNaN(t) || Number.isNaN(df) || Number.isNaN(ncp)) return NaN;
   if (t < 0) return clampProbability(1 - upperHalfCdf(-t, df, -ncp));

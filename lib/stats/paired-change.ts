@@ -1,27 +1,3 @@
-/**
- * Mean change of a squad between two tests, with the paired t interval, test
- * and standardized effect sizes.
- *
- * With dᵢ = postᵢ − preᵢ (n pairs, df = n − 1):
- *   SE = SD_d/√n,  interval d̄ ± t_{1−α/2}(df)·SE,  t = d̄/SE,  p = 2·P(T_df ≥ |t|)
- * (Student 1908; any statistics handbook). Effect sizes after
- * Lakens (2013, Front Psychol 4:863): d_z = d̄/SD_d and Hedges' small-sample
- * correction g_z = d_z·(1 − 3/(4·df − 1)).
- *
- * The caller pairs the athletes; this function receives aligned arrays. It
- * runs in O(n) time with one pass over the scores and allocates nothing per
- * score.
- *
- * @example
- * // Student's sleep data (R datasets::sleep), group 2 − group 1
- * const r = pairedChange(
- *   [0.7, -1.6, -0.2, -1.2, -0.1, 3.4, 3.7, 0.8, 0.0, 2.0],
- *   [1.9, 0.8, 1.1, 0.1, -0.1, 4.4, 5.5, 1.6, 4.6, 3.4],
- *   { confidence: 0.95 },
- * );
- * r.t; // 4.062128
- * r.ciLower; // 0.7001142
- */
 import { StatsInputError } from "./errors";
 import { studentTUpperTail } from "./distributions";
 import { tCritical } from "./t-critical";
@@ -60,6 +36,38 @@ export interface PairedChange {
  */
 const ZERO_SPREAD_ULPS = 64;
 
+/**
+ * Mean change of a squad between two tests, with its paired t interval, t-test
+ * and standardized effect sizes.
+ *
+ * With dᵢ = postᵢ − preᵢ (n pairs, df = n − 1):
+ *   SE = SD_d/√n,  interval d̄ ± t_{1−α/2}(df)·SE,  t = d̄/SE,  p = 2·P(T_df ≥ |t|)
+ * (Student 1908, Biometrika 6:1–25; R `t.test(paired = TRUE)`). Effect sizes
+ * after Lakens (2013, Front Psychol 4:863): d_z = d̄/SD_d and Hedges'
+ * g_z = d_z·J(df), see {@link hedgesCorrection}.
+ *
+ * The caller pairs the athletes: this function receives aligned arrays. One
+ * pass over the scores, nothing allocated per score, so it stays O(n) for the
+ * change report's large squads.
+ *
+ * @param pre each athlete's first score
+ * @param post the same athletes' second scores, in the same order
+ * @param options `confidence` of the interval (default 0.90)
+ * @returns the summary; `t`, `p`, `effectSizeDz` and `hedgesGz` are null when
+ * every athlete changed by the same amount (SD_d = 0)
+ * @throws {StatsInputError} when the lists differ in length, hold fewer than 2
+ * pairs, hold a score that is not a finite number, or sum beyond the range of
+ * a double; or when `confidence` is not strictly between 0 and 1
+ * @example
+ * // Student's sleep data (R datasets::sleep), group 2 − group 1
+ * const r = pairedChange(
+ *   [0.7, -1.6, -0.2, -1.2, -0.1, 3.4, 3.7, 0.8, 0.0, 2.0],
+ *   [1.9, 0.8, 1.1, 0.1, -0.1, 4.4, 5.5, 1.6, 4.6, 3.4],
+ *   { confidence: 0.95 },
+ * );
+ * r.t; // => 4.062127683… (R: t = 4.0621)
+ * r.ciLower; // => 0.7001142… (R: 0.7001142)
+ */
 export function pairedChange(
   pre: ArrayLike<number>,
   post: ArrayLike<number>,
@@ -143,11 +151,21 @@ function summarisePairs(pre: ArrayLike<number>, post: ArrayLike<number>): PairSu
 const LABELS = ["Pre", "post"] as const;
 
 /**
- * Hedges' approximate small-sample correction J = 1 − 3/(4·df − 1)
- * (Lakens 2013, Front Psychol 4:863; exact Γ-ratio form differs by < 0.001 at df = 9).
+ * Hedges' small-sample correction factor J, by which d is multiplied to give g.
  *
+ * J = 1 − 3/(4·df − 1), the approximation in Lakens (2013, Front Psychol
+ * 4:863), who writes it as 1 − 3/(4(n1 + n2) − 9) for two groups
+ * (df = n1 + n2 − 2). The exact Γ-ratio form differs by less than 0.001 at
+ * df = 9 (METHODS.md §5), far below the precision an effect size is read to.
+ *
+ * Does not throw: df should be above 1 for a J in (0, 1) (J(1) = 0, as for
+ * the exact form); `pairedChange` passes n − 1 of a squad it has validated.
+ *
+ * @param df degrees of freedom: n − 1 for d_z, n1 + n2 − 2 for two groups
+ * @returns J
  * @example
- * hedgesCorrection(9); // 0.9142857
+ * // Lakens (2013): d_s 1.12588 on 18 df gives g_s 1.07831
+ * hedgesCorrection(18); // => 0.9577464788732395
  */
 export function hedgesCorrection(df: number): number {
   return 1 - 3 / (4 * df - 1);

@@ -1,23 +1,3 @@
-/**
- * Test–retest reliability from two trials (Hopkins 2000, "Measures of
- * reliability in sports medicine and science", Sports Med 30:1–15).
- *
- * - Change in the mean: mean(trial2 − trial1), kept apart from the typical
- *   error so learning or fatigue effects stay visible.
- * - Typical error TE = SD(trial2 − trial1)/√2 (= √MSE of the two-way ANOVA).
- * - Its limits treat TE² as a variance on ν = n − 1 df:
- *   [TE·√(ν/χ²_{1−α/2,ν}), TE·√(ν/χ²_{α/2,ν})].
- * - CV% from logs: s = SD(ln t2 − ln t1)/√2, CV = 100·(e^s − 1); only when
- *   every score is positive, else null.
- * - ICC(3,1) and ICC(2,1) with limits, via {@link twoWayMeanSquares} (k = 2).
- *
- * @example
- * // Weir (2005) dataset A
- * const r = testRetest([146, 148, 170, 90, 157, 156, 176, 205],
- *                      [140, 152, 152, 99, 145, 153, 167, 218]);
- * r.typicalError; // 7.55693
- * r.cvPercent; // 5.1616
- */
 import { chiSquareQuantile } from "./distributions";
 import { iccFromMeanSquares } from "./icc";
 import { twoWayMeanSquares, type TwoWayMeanSquares } from "./two-way-anova";
@@ -42,6 +22,35 @@ export interface TestRetest {
   meanSquares: TwoWayMeanSquares;
 }
 
+/**
+ * Test–retest reliability of a test from two trials of the same athletes.
+ *
+ * Source: Hopkins (2000), "Measures of reliability in sports medicine and
+ * science", Sports Med 30:1–15.
+ * - Change in the mean: mean(trial2 − trial1), kept apart from the typical
+ *   error so learning or fatigue effects stay visible.
+ * - Typical error TE = SD(trial2 − trial1)/√2 (= √MSE of the two-way ANOVA).
+ * - Its limits treat TE² as a variance on ν = n − 1 df, see
+ *   {@link typicalErrorLimits}.
+ * - CV% from logs: s = SD(ln t2 − ln t1)/√2, CV = 100·(e^s − 1); null unless
+ *   every score is positive, since a log needs it.
+ * - ICC(3,1) and ICC(2,1) with limits, via {@link twoWayMeanSquares} (k = 2)
+ *   and {@link iccFromMeanSquares}.
+ *
+ * @param trial1 each athlete's first trial
+ * @param trial2 the same athletes' second trial, in the same order
+ * @param options `confidence` of every interval (default 0.95)
+ * @returns change in mean, TE with limits, CV%, ICCs with limits, mean squares
+ * @throws {StatsInputError} when the trials differ in length, hold fewer than
+ * 2 athletes or a score that is not a finite number, or `confidence` is not
+ * strictly between 0 and 1
+ * @example
+ * // Weir (2005) dataset A (METHODS.md §3.6)
+ * const r = testRetest([146, 148, 170, 90, 157, 156, 176, 205],
+ *                      [140, 152, 152, 99, 145, 153, 167, 218]);
+ * r.typicalError; // => 7.556926… (Weir: SEM 7.6)
+ * r.cvPercent; // => 5.1616…
+ */
 export function testRetest(
   trial1: ArrayLike<number>,
   trial2: ArrayLike<number>,
@@ -74,11 +83,24 @@ export function testRetest(
 }
 
 /**
- * Chi-square confidence limits for a typical error on `df` degrees of freedom
- * ((n − 1)(k − 1) for k trials).
+ * Confidence limits for a typical error, from the chi-square distribution of a
+ * variance.
  *
+ * TE² is a variance on ν degrees of freedom, so the limits are
+ * [TE·√(ν/χ²_{1−α/2,ν}), TE·√(ν/χ²_{α/2,ν})] (Hopkins 2000, Sports Med
+ * 30:1–15; the standard variance interval). ν is n − 1 for two trials and
+ * (n − 1)(k − 1) for k trials. The limits are not symmetric about TE.
+ *
+ * @param typicalError the typical error, zero or more
+ * @param df its degrees of freedom, above zero
+ * @param confidence confidence level in (0, 1), default 0.95
+ * @returns lower and upper limit, in score units
+ * @throws {StatsInputError} when the typical error is negative or not a
+ * number, `df` is not above zero, or `confidence` is not strictly between 0
+ * and 1
  * @example
- * typicalErrorLimits(15.3612, 16, 0.95); // { lower: 11.4406, upper: 23.3787 }
+ * // Bland & Altman (1986) Wright meter retest, TE 15.3612 on 16 df (METHODS.md §3.5)
+ * typicalErrorLimits(15.3612, 16, 0.95); // => { lower: 11.440558…, upper: 23.378654… }
  */
 export function typicalErrorLimits(
   typicalError: number,

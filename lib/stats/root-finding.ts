@@ -1,14 +1,6 @@
 /**
- * Brent's method for a root of a continuous function on a bracketing interval
- * (Brent 1973, "Algorithms for Minimization without Derivatives", ch. 4, the
- * `zeroin` procedure; R's `uniroot` is the same algorithm).
- *
- * Bisection guarantees progress; inverse quadratic or secant steps are taken
- * only while they shrink the bracket fast enough, so convergence is
- * superlinear on smooth functions like power curves.
- *
- * @example
- * findRoot((x) => x * x - 2, 0, 2); // 1.4142135623730951
+ * Root finding for the sample-size solvers, which need power(n) = target to
+ * many digits from a function with no cheap derivative.
  */
 export interface RootOptions {
   /** Absolute tolerance on x (default 1e-10). */
@@ -17,6 +9,30 @@ export interface RootOptions {
   maxIterations?: number;
 }
 
+/**
+ * A root of a continuous function on an interval where it changes sign, by
+ * Brent's method.
+ *
+ * Source: Brent (1973), Algorithms for Minimization without Derivatives,
+ * ch. 4, the `zeroin` procedure; R's `uniroot` is the same algorithm.
+ * Bisection guarantees that the bracket [lower, upper] keeps shrinking;
+ * inverse quadratic or secant steps are taken only while they shrink it fast
+ * enough, so convergence is superlinear on smooth functions like power curves.
+ *
+ * Stops when the bracket is narrower than about `tolerance`; after
+ * `maxIterations` it returns its best estimate so far rather than throwing.
+ *
+ * @param f continuous function of one variable
+ * @param lower one end of the bracket
+ * @param upper the other end; f(lower) and f(upper) must differ in sign
+ * @param options `tolerance` on x (default 1e-10), `maxIterations` (default 200)
+ * @returns x with f(x) ≈ 0, within `tolerance`
+ * @throws {RangeError} when f(lower) and f(upper) have the same sign (no root
+ * is bracketed). Not a StatsInputError: only code inside lib/stats calls it,
+ * so this is a programming error, never a coach's input.
+ * @example
+ * findRoot((x) => x * x - 2, 0, 2); // => 1.4142135623731364 (√2 = 1.4142135623730951)
+ */
 export function findRoot(
   f: (x: number) => number,
   lower: number,

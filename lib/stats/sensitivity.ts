@@ -1,6 +1,26 @@
+import { trialsToDetect } from "./trials";
+import { assertNonNegative, assertPositive } from "./validate";
+
+/** Sensitivity codes; words for people live in `lib/words/stats.ts`. */
+export type SensitivityRating = "detects" | "borderline" | "blind";
+
+export interface Sensitivity {
+  rating: SensitivityRating;
+  /** TE / SWC. */
+  ratio: number;
+  /** Trials to average per test day so that TE/√k < SWC. */
+  trialsNeeded: number;
+}
+
 /**
- * Can a test see the smallest worthwhile change? Compares the noise (typical
- * error, TE) with the signal (SWC).
+ * Upper end of "detects" and lower end of "blind" (our convention): the band
+ * around 1 stands for "about equal", where averaging repeated trials decides.
+ */
+export const SENSITIVITY_CUTOFFS = { detects: 0.8, blind: 1.2 } as const;
+
+/**
+ * Whether a test can see the smallest worthwhile change: its noise (typical
+ * error, TE) against the signal (SWC).
  *
  * Comparing TE with the SWC is common practice in sport science, usually
  * credited to Hopkins (2004, "How to interpret changes in an athletic
@@ -9,43 +29,23 @@
  * sprint whose TE (≈ 0.02 s) is twice its SWC (≈ 0.01 s).
  *
  * The ratings and their cut-offs are our own convention: TE/SWC below 0.8
- * "detects", 0.8 to 1.2 "borderline", above 1.2 "blind". The band around 1
- * stands for "about equal", where averaging repeated trials decides it.
+ * "detects", 0.8 to 1.2 "borderline", above 1.2 "blind". `trialsNeeded` is
+ * {@link trialsToDetect}.
  *
+ * @param typicalError the test's typical error, zero or more
+ * @param swc the smallest worthwhile change, above zero
+ * @returns rating code, TE/SWC ratio and trials needed
+ * @throws {StatsInputError} when the typical error is negative or not a
+ * number, or the SWC is not above zero
  * @example
- * sensitivity(0.02, 0.01).rating; // "blind"
+ * // 10 m sprint, Duthie et al. (2006): TE 0.02 s, SWC 0.01 s
+ * sensitivity(0.02, 0.01); // => { rating: "blind", ratio: 2, trialsNeeded: 5 }
  */
-import { trialsToDetect } from "./planning";
-import { assertNonNegative, assertPositive } from "./validate";
-
-export type SensitivityRating = "detects" | "borderline" | "blind";
-
-export interface Sensitivity {
-  rating: SensitivityRating;
-  /** TE / SWC. */
-  ratio: number;
-  label: string;
-  explanation: string;
-  /** Trials to average per test day so that TE/√k < SWC. */
-  trialsNeeded: number;
-}
-
-/** Upper end of "detects" and lower end of "blind" (our convention). */
-export const SENSITIVITY_CUTOFFS = { detects: 0.8, blind: 1.2 } as const;
-
-const LABELS: Record<SensitivityRating, string> = {
-  detects: "Sees the SWC",
-  borderline: "Needs repeated trials",
-  blind: "Noise hides the SWC",
-};
-
 export function sensitivity(typicalError: number, swc: number): Sensitivity {
   assertNonNegative(typicalError, "The typical error");
   assertPositive(swc, "The smallest worthwhile change");
   const ratio = typicalError / swc;
-  const rating = rate(ratio);
-  const trialsNeeded = trialsToDetect(typicalError, swc);
-  return { rating, ratio, label: LABELS[rating], explanation: explain(rating, ratio, trialsNeeded), trialsNeeded };
+  return { rating: rate(ratio), ratio, trialsNeeded: trialsToDetect(typicalError, swc) };
 }
 
 function rate(ratio: number): SensitivityRating {
@@ -53,17 +53,4 @@ function rate(ratio: number): SensitivityRating {
   if (ratio < SENSITIVITY_CUTOFFS.detects * (1 - 1e-12)) return "detects";
   if (ratio <= SENSITIVITY_CUTOFFS.blind * (1 + 1e-12)) return "borderline";
   return "blind";
-}
-
-function explain(rating: SensitivityRating, ratio: number, trials: number): string {
-  const r = ratio.toFixed(2);
-  const average = `Averaging ${trials} trials per test day brings the noise below the SWC.`;
-  switch (rating) {
-    case "detects":
-      return `The typical error is ${r} times the smallest worthwhile change, so a single retest can show a worthwhile change.`;
-    case "borderline":
-      return `The typical error (${r} × SWC) is about as large as the smallest worthwhile change, so one trial per test day is not enough to tell them apart. ${average}`;
-    case "blind":
-      return `The typical error is ${r} times the smallest worthwhile change, so test noise can hide or fake a worthwhile change. ${average}`;
-  }
 }

@@ -1,21 +1,3 @@
-/**
- * Mean squares of the two-way (subjects × trials) ANOVA without replication,
- * the raw material of ICCs and of the typical error for k ≥ 2 trials
- * (Shrout & Fleiss 1979, Psychol Bull 86:420–428; McGraw & Wong 1996,
- * Psychol Methods 1:30–46).
- *
- * For an n × k matrix x (rows = athletes, columns = trials), grand mean x̄:
- *   MSR = k·Σᵢ(x̄ᵢ. − x̄)²/(n − 1)           between athletes
- *   MSC = n·Σⱼ(x̄.ⱼ − x̄)²/(k − 1)           between trials
- *   MSE = ΣΣ(xᵢⱼ − x̄ᵢ. − x̄.ⱼ + x̄)²/((n − 1)(k − 1))   residual
- *   MSW = (SSC + SSE)/(n(k − 1))              within athletes (one-way)
- * The typical error for k trials is √MSE; for k = 2 it equals SD_d/√2.
- *
- * @example
- * // Weir (2005) dataset A (trials in columns)
- * twoWayMeanSquares([[146, 140], [148, 152], [170, 152], [90, 99],
- *                    [157, 145], [156, 153], [176, 167], [205, 218]]).mse; // 57.107
- */
 import { StatsInputError } from "./errors";
 import { assertFiniteScores } from "./validate";
 
@@ -31,6 +13,29 @@ export interface TwoWayMeanSquares {
   dfError: number;
 }
 
+/**
+ * Mean squares of the two-way (athletes × trials) ANOVA without replication,
+ * the raw material of ICCs and of the typical error for k ≥ 2 trials.
+ *
+ * Shrout & Fleiss (1979, Psychol Bull 86:420–428); McGraw & Wong (1996,
+ * Psychol Methods 1:30–46). For an n × k matrix x (rows = athletes,
+ * columns = trials) with grand mean x̄:
+ *   MSR = k·Σᵢ(x̄ᵢ. − x̄)²/(n − 1)           between athletes
+ *   MSC = n·Σⱼ(x̄.ⱼ − x̄)²/(k − 1)           between trials
+ *   MSE = ΣΣ(xᵢⱼ − x̄ᵢ. − x̄.ⱼ + x̄)²/((n − 1)(k − 1))   residual
+ *   MSW = (SSC + SSE)/(n(k − 1))              within athletes (one-way)
+ * The typical error for k trials is √MSE; for k = 2 it equals SD_d/√2.
+ *
+ * @param rows one row per athlete, one column per trial
+ * @returns the four mean squares with n, k and their degrees of freedom
+ * @throws {StatsInputError} when `rows` is not a table, has fewer than 2
+ * athletes or 2 trials, has rows of unequal length, or holds a score that is
+ * not a finite number
+ * @example
+ * // Weir (2005) dataset A, trials in columns (METHODS.md §3.6)
+ * twoWayMeanSquares([[146, 140], [148, 152], [170, 152], [90, 99],
+ *                    [157, 145], [156, 153], [176, 167], [205, 218]]).mse; // => 57.107…
+ */
 export function twoWayMeanSquares(rows: ArrayLike<ArrayLike<number>>): TwoWayMeanSquares {
   const { n, k } = checkShape(rows);
   const rowMeans = new Float64Array(n);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { classifyChange, orientInterval, verdictLabel, VERDICTS, StatsInputError, type Verdict } from "@/lib/stats";
+import { classifyChange, orientInterval, VERDICTS, StatsInputError, type Verdict } from "@/lib/stats";
 
 // Rules: PRODUCT.md §5 (our own scheme), applied in order.
 describe("classifyChange", () => {
@@ -74,13 +74,9 @@ describe("orientInterval", () => {
   });
 });
 
-describe("verdict labels", () => {
-  it("lists every verdict with a plain label", () => {
+// The words shown for each verdict are checked in tests/unit/stats-words.test.ts.
+describe("verdict codes", () => {
+  it("lists every verdict code, best to worst, then the undecided one", () => {
     expect(VERDICTS).toEqual(["clear-gain", "gain", "steady", "decline", "clear-decline", "inconclusive"]);
-    expect(VERDICTS.map(verdictLabel)).toEqual(["Clear gain", "Gain", "Steady", "Decline", "Clear decline", "Inconclusive"]);
-  });
-
-  it("uses no probabilistic magnitude-based-inference wording", () => {
-    for (const v of VERDICTS) expect(verdictLabel(v)).not.toMatch(/likely|possibly|probabl|almost certain|beneficial|harmful/i);
   });
 });
