@@ -2,7 +2,7 @@
 
 import type { ReactNode } from "react";
 
-/** What a `useApi` result offers that the status lines need. */
+/** What a React Query result offers that the status lines need. */
 export type QueryState = { isPending: boolean; error: Error | null; refetch: () => unknown };
 
 /** A failed read, with a button to read again. */
@@ -16,7 +16,8 @@ export function LoadFailure({ failure, error, onRetry }: { failure: string; erro
 }
 
 /**
- * Loading line, failure with retry, and the empty state of a list read through `useApi`.
+ * Failure with retry, and the empty state of a list query. The loading line shows only before the
+ * first data arrives, which on a prefetched page never happens: the segment's skeleton covers it.
  * `failure` reads "… could not load"; pass `empty` only when the loaded list is empty.
  */
 export function QueryStatus({

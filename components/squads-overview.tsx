@@ -3,15 +3,15 @@
 import Link from "next/link";
 import { SquadsStatus } from "@/components/squads/squads-status";
 import { TableCard, type Column } from "@/components/table-card";
-import type { Phase, Role, SessionStatus } from "@/lib/domain";
-import type { SquadSummary } from "@/lib/client/api-types";
-import { useApi } from "@/hooks/use-api";
+import type { Role } from "@/lib/domain";
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { squadQueries } from "@/lib/client/queries";
 import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
 
 const COLUMNS: Column[] = [{ label: "Squad" }, { label: "Athletes", align: "right" }, { label: "Latest session" }, { label: "Status" }];
 
 export function SquadsOverview({ role }: { role: Role }) {
-  const squads = useApi<{ squads: SquadSummary[] }>("/api/squads");
+  const squads = useSuspenseQuery(squadQueries.list());
 
   return (
     <section aria-labelledby="squads-heading">
@@ -22,9 +22,9 @@ export function SquadsOverview({ role }: { role: Role }) {
         </p>
       </div>
       <SquadsStatus query={squads} role={role} />
-      {squads.data && squads.data.squads.length > 0 && (
+      {squads.data.length > 0 && (
         <TableCard columns={COLUMNS} headCellClass="px-4 py-2 font-semibold">
-          {squads.data.squads.map((squad) => (
+          {squads.data.map((squad) => (
             <tr key={squad.id} className="border-b border-line last:border-0">
               <td className="px-4 py-3">
                 <Link href={`/squads/${squad.id}`} className="font-semibold underline-offset-2 hover:underline">
@@ -36,14 +36,14 @@ export function SquadsOverview({ role }: { role: Role }) {
               <td className="px-4 py-3">
                 {squad.latestSession ? (
                   <Link href={`/sessions/${squad.latestSession.id}`} className="underline-offset-2 hover:underline">
-                    {formatDate(squad.latestSession.date)} · {PHASE_LABELS[squad.latestSession.phase as Phase]}
+                    {formatDate(squad.latestSession.date)} · {PHASE_LABELS[squad.latestSession.phase]}
                   </Link>
                 ) : (
                   <span className="text-ink-faint">No sessions yet</span>
                 )}
               </td>
               <td className="px-4 py-3">
-                {squad.latestSession ? STATUS_LABELS[squad.latestSession.status as SessionStatus] : "–"}
+                {squad.latestSession ? STATUS_LABELS[squad.latestSession.status] : "–"}
               </td>
             </tr>
           ))}

@@ -1,157 +1,37 @@
 "use client";
 
-import { useMutation, useQueryClient } from "@tanstack/react-query";
-import { useCallback, useMemo, useRef, useState } from "react";
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { useCallback, useMemo } from "react";
+import { type ResultRow, sessionQueries } from "@/lib/client/queries";
 import { parseDecimal } from "@/lib/decimal";
-import {
-  cellKey, padTrials, sameWanted, trialKey, trimTrials, wantedOf, withRow, type Wanted,
-} from "@/lib/sheet/model";
 import type { ResultFlag } from "@/lib/domain";
-import type { ResultConflict, ResultRow, SheetData } from "@/lib/client/api-types";
-import { reduceTrials } from "@/lib/trials";
-import { ApiClientError, fetchJson, useApi } from "./use-api";
+import { MAX_TRIALS } from "@/lib/validation/sessions";
+import { cellKey, padTrials, sameWanted, trialKey, type Wanted, wantedOf } from "@/lib/sheet/model";
+import { type InvalidEntry, useInvalidEntries } from "./sheet/use-invalid-entries";
+import { useResultSaver } from "./sheet/use-result-saver";
+import { useSheetCache } from "./sheet/use-sheet-cache";
+import { useSheetUndo } from "./sheet/use-sheet-undo";
 
-export type CellState =
-  | { status: "saving"; wanted: Wanted }
-  | { status: "saved" }
-  | { status: "failed"; wanted: Wanted; message: string }
-  | { status: "conflict"; wanted: Wanted; current: ResultRow | null };
+export type { CellState } from "./sheet/use-result-saver";
+export type { InvalidEntry } from "./sheet/use-invalid-entries";
 
-export type InvalidEntry = { text: string; message: string };
-
-type SaveVars = { key: string; athleteId: number; testId: number; wanted: Wanted; version: number | null; note: string | null };
-type SaveContext = { previous: ResultRow | undefined };
-
-/** A write that was never stored has no version; provisional (optimistic) rows use negative ids. */
-const versionOf = (row: ResultRow | undefined) => (row && row.id > 0 ? row.version : null);
+type TrialEntry = { athleteId: number; testId: number; index: number; text: string };
 
 /**
- * State and writes of the Session sheet. Each result (athlete × test) saves on its own with
- * the version it read; writes to the same result are queued so we never conflict with ourselves.
+ * The Session sheet: its data (prefetched by the page), what each cell shows, and the entry
+ * commands the grid calls. Saving, refused texts and undo live in the hooks under ./sheet.
  */
 export function useSessionSheet(sessionId: number) {
-  const url = `/api/sessions/${sessionId}`;
-  const auditUrl = `${url}/audit`;
-  const client = useQueryClient();
-  const query = useApi<SheetData>(url);
-  const [cells, setCells] = useState<Record<string, CellState>>({});
-  // The same map for `send`, which also runs from mutation callbacks outside render.
-  const cellsRef = useRef(cells);
-  const [invalid, setInvalid] = useState<Record<string, InvalidEntry>>({});
-  const inFlight = useRef(new Set<string>());
-  const queued = useRef(new Map<string, Wanted>());
-
-  const setCell = useCallback((key: string, state: CellState | null) => {
-    const next = { ...cellsRef.current };
-    if (state) next[key] = state;
-    else delete next[key];
-    cellsRef.current = next;
-    setCells(next);
-  }, []);
-
-  const readRow = useCallback(
-    (athleteId: number, testId: number) =>
-      client.getQueryData<SheetData>([url])?.results.find((r) => r.athleteId === athleteId && r.testId === testId),
-    [client, url],
-  );
-  const writeRow = useCallback(
-    (athleteId: number, testId: number, row: ResultRow | null) =>
-      client.setQueryData<SheetData>([url], (data) => (data ? withRow(data, athleteId, testId, row) : data)),
-    [client, url],
-  );
-
-  const refreshAudit = useCallback(() => {
-    if (inFlight.current.size === 0) void client.invalidateQueries({ queryKey: [auditUrl] });
-  }, [client, auditUrl]);
-
-  const mutation = useMutation<{ results: ResultRow[] }, Error, SaveVars, SaveContext>({
-    mutationFn: (v) =>
-      fetchJson(`${url}/results`, {
-        method: "PUT",
-        body: JSON.stringify({
-          results: [{ athleteId: v.athleteId, testId: v.testId, trials: v.wanted.trials, flag: v.wanted.flag, note: v.note, version: v.version }],
-        }),
-      }),
-    onMutate: async (v) => {
-      await client.cancelQueries({ queryKey: [url] });
-      const previous = readRow(v.athleteId, v.testId);
-      const test = client.getQueryData<SheetData>([url])?.tests.find((t) => t.id === v.testId);
-      const value = test ? reduceTrials(v.wanted.trials, test.trialRule, test.direction) : null;
-      writeRow(v.athleteId, v.testId, {
-        id: previous?.id ?? -1,
-        athleteId: v.athleteId,
-        testId: v.testId,
-        trials: v.wanted.trials,
-        value: v.wanted.flag === "invalid" || v.wanted.flag === "absent" ? null : value,
-        flag: v.wanted.flag,
-        note: v.note,
-        version: previous?.version ?? 0,
-        updatedAt: Date.now(),
-        updatedByName: previous?.updatedByName ?? null,
-      });
-      return { previous };
-    },
-    onSuccess: (data, v) => {
-      const saved = data.results.find((r) => r.athleteId === v.athleteId && r.testId === v.testId);
-      if (saved) writeRow(v.athleteId, v.testId, saved);
-      if (!queued.current.has(v.key)) setCell(v.key, { status: "saved" });
-    },
-    onError: (error, v, context) => {
-      const wanted = queued.current.get(v.key) ?? v.wanted;
-      queued.current.delete(v.key);
-      if (error instanceof ApiClientError && error.status === 409) {
-        const details = (error.body as { error?: { details?: { conflicts?: ResultConflict[] } } } | null)?.error?.details;
-        const hit = details?.conflicts?.find((c) => c.athleteId === v.athleteId && c.testId === v.testId);
-        if (hit) {
-          // The sheet now holds their version; ours waits in the cell until the person chooses.
-          writeRow(v.athleteId, v.testId, hit.current);
-          setCell(v.key, { status: "conflict", wanted, current: hit.current });
-          return;
-        }
-        writeRow(v.athleteId, v.testId, context?.previous ?? null);
-        setCell(v.key, { status: "failed", wanted, message: `${error.message} Reload the sheet to see the latest scores.` });
-        return;
-      }
-      writeRow(v.athleteId, v.testId, context?.previous ?? null);
-      const message = error instanceof ApiClientError ? error.message : "No connection to the server.";
-      setCell(v.key, { status: "failed", wanted, message });
-    },
-    onSettled: (_data, error, v) => {
-      inFlight.current.delete(v.key);
-      const next = queued.current.get(v.key);
-      if (next && !error) {
-        queued.current.delete(v.key);
-        send(v.athleteId, v.testId, next);
-      }
-      refreshAudit();
-    },
-  });
-
-  // `send` is used inside the mutation callbacks above, which run after render; a function
-  // declaration keeps the two mutually reachable.
-  function send(athleteId: number, testId: number, wanted: Wanted, { overwrite = false } = {}) {
-    const key = cellKey(athleteId, testId);
-    const clean = { trials: trimTrials(wanted.trials), flag: wanted.flag };
-    const held = cellsRef.current[key];
-    if (held?.status === "conflict" && !overwrite) {
-      // Someone else's value is waiting for a decision: keep typing into ours, send nothing yet.
-      setCell(key, { ...held, wanted: clean });
-      return;
-    }
-    if (inFlight.current.has(key)) {
-      queued.current.set(key, clean);
-      setCell(key, { status: "saving", wanted: clean });
-      return;
-    }
-    const row = readRow(athleteId, testId);
-    inFlight.current.add(key);
-    setCell(key, { status: "saving", wanted: clean });
-    mutation.mutate({ key, athleteId, testId, wanted: clean, version: versionOf(row), note: row?.note ?? null });
-  }
+  const query = useSuspenseQuery(sessionQueries.sheet(sessionId));
+  const cache = useSheetCache(sessionId);
+  const saver = useResultSaver(sessionId, cache);
+  const entries = useInvalidEntries();
+  const undo = useSheetUndo(sessionId, cache, saver.forget);
+  const { cells } = saver;
 
   const results = useMemo(() => {
     const map = new Map<string, ResultRow>();
-    for (const r of query.data?.results ?? []) map.set(cellKey(r.athleteId, r.testId), r);
+    for (const r of query.data.results) map.set(cellKey(r.athleteId, r.testId), r);
     return map;
   }, [query.data]);
 
@@ -165,29 +45,17 @@ export function useSessionSheet(sessionId: number) {
     [cells, results],
   );
 
-  const slotsOf = useCallback(
-    (testId: number) => query.data?.tests.find((t) => t.id === testId)?.trialsPerSession ?? 1,
-    [query.data],
-  );
-
-  const clearInvalid = useCallback((keys: string[]) => {
-    setInvalid((prev) => {
-      if (!keys.some((k) => k in prev)) return prev;
-      const next = { ...prev };
-      for (const k of keys) delete next[k];
-      return next;
-    });
-  }, []);
+  const slotsOf = (testId: number) => query.data.tests.find((t) => t.id === testId)?.trialsPerSession ?? 1;
 
   /**
    * Applies typed or pasted trial texts. Non-numbers are refused on their cell and never sent;
    * the rest are grouped per result so each result is written once.
    */
-  function enterTrials(entries: { athleteId: number; testId: number; index: number; text: string }[]) {
+  function enterTrials(typed: TrialEntry[]) {
     const refused: Record<string, InvalidEntry> = {};
     const accepted: string[] = [];
     const changes = new Map<string, { athleteId: number; testId: number; wanted: Wanted }>();
-    for (const e of entries) {
+    for (const e of typed) {
       const tk = trialKey(e.athleteId, e.testId, e.index);
       const parsed = parseDecimal(e.text);
       if (!parsed.ok) {
@@ -201,55 +69,37 @@ export function useSessionSheet(sessionId: number) {
       trials[e.index] = parsed.value;
       changes.set(key, { athleteId: e.athleteId, testId: e.testId, wanted: { ...base, trials } });
     }
-    clearInvalid(accepted);
-    if (Object.keys(refused).length > 0) setInvalid((prev) => ({ ...prev, ...refused }));
+    entries.clear(accepted);
+    entries.add(refused);
     for (const { athleteId, testId, wanted } of changes.values()) {
-      if (!sameWanted(wanted, shownFor(athleteId, testId))) send(athleteId, testId, wanted);
+      if (!sameWanted(wanted, shownFor(athleteId, testId))) saver.send(athleteId, testId, wanted);
     }
     return { refused: Object.keys(refused).length };
   }
 
   function setFlag(athleteId: number, testId: number, flag: ResultFlag | null) {
     const base = shownFor(athleteId, testId);
-    if (base.flag !== flag) send(athleteId, testId, { ...base, flag });
+    if (base.flag !== flag) saver.send(athleteId, testId, { ...base, flag });
   }
 
   /** Keep the server's value: drop ours. */
   function takeTheirs(athleteId: number, testId: number) {
-    setCell(cellKey(athleteId, testId), null);
-    clearInvalid(Array.from({ length: 10 }, (_, i) => trialKey(athleteId, testId, i)));
+    saver.forget(cellKey(athleteId, testId));
+    entries.clear(Array.from({ length: MAX_TRIALS }, (_, i) => trialKey(athleteId, testId, i)));
   }
-
-  /** Retry a failed write, or overwrite after a conflict: the version now comes from their row. */
-  function retry(athleteId: number, testId: number) {
-    const state = cells[cellKey(athleteId, testId)];
-    if (state && state.status !== "saved") send(athleteId, testId, state.wanted, { overwrite: true });
-  }
-
-  const undo = useMutation<{ undone: { athleteId: number; testId: number; result: ResultRow | null } }, Error, void>({
-    mutationFn: () => fetchJson(`${url}/undo`, { method: "POST" }),
-    onSuccess: ({ undone }) => {
-      writeRow(undone.athleteId, undone.testId, undone.result);
-      setCell(cellKey(undone.athleteId, undone.testId), null);
-    },
-    onSettled: () => {
-      void client.invalidateQueries({ queryKey: [url] });
-      void client.invalidateQueries({ queryKey: [auditUrl] });
-    },
-  });
 
   return {
-    query,
-    auditUrl,
+    data: query.data,
+    sessionId,
     results,
     cells,
-    invalid,
+    invalid: entries.invalid,
     shownFor,
     enterTrials,
     setFlag,
     takeTheirs,
-    retry,
-    revertTrial: (athleteId: number, testId: number, index: number) => clearInvalid([trialKey(athleteId, testId, index)]),
+    retry: saver.retry,
+    revertTrial: (athleteId: number, testId: number, index: number) => entries.clear([trialKey(athleteId, testId, index)]),
     undo,
     busy: Object.values(cells).some((c) => c.status === "saving"),
   };

@@ -1,12 +1,31 @@
+import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { AthleteHome } from "@/components/athlete-home";
 import { SquadsOverview } from "@/components/squads-overview";
 import { pageGuard } from "@/lib/auth/page-guard";
+import { listAthleteResults } from "@/lib/data/athlete-results";
+import { listSquads } from "@/lib/data/squads";
+import { athleteQueries, squadQueries } from "@/lib/client/queries";
+import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
 
 export const metadata: Metadata = { title: "Home" };
 
 export default async function HomePage() {
   const actor = await pageGuard();
-  if (actor.role === "athlete") return <AthleteHome athleteId={actor.athleteId} name={actor.name} />;
-  return <SquadsOverview role={actor.role} />;
+  const client = serverQueryClient();
+  if (actor.role === "athlete") {
+    const { athleteId } = actor;
+    if (athleteId) await prefetch(client, athleteQueries.results(athleteId), () => listAthleteResults(actor, athleteId));
+    return (
+      <HydrationBoundary state={dehydrate(client)}>
+        <AthleteHome athleteId={athleteId} name={actor.name} />
+      </HydrationBoundary>
+    );
+  }
+  await prefetch(client, squadQueries.list(), () => listSquads(actor));
+  return (
+    <HydrationBoundary state={dehydrate(client)}>
+      <SquadsOverview role={actor.role} />
+    </HydrationBoundary>
+  );
 }

@@ -1,9 +1,9 @@
 "use client";
 
-import { useMutation } from "@tanstack/react-query";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { ApiClientError } from "@/hooks/use-api";
-import { useInvalidate } from "@/hooks/use-invalidate";
+import { ApiClientError } from "@/lib/client/fetch-json";
+import { queryKeys } from "@/lib/client/queries";
 import type { ImportCommitted, ImportPreview, ReplacementRow } from "@/lib/import/summary";
 import type { ImportRowError } from "@/lib/import/types";
 import { FilePicker } from "./file-picker";
@@ -21,7 +21,7 @@ const bodyOf = (error: unknown): ErrorBody | null => (error instanceof ApiClient
 
 /** The Import screen: choose a file → preview and mapping → import, all or nothing. */
 export function ImportFlow({ sessionId }: { sessionId: number }) {
-  const invalidate = useInvalidate();
+  const client = useQueryClient();
   const [file, setFile] = useState<File | null>(null);
   const [draft, setDraft] = useState<MappingDraft | null>(null);
   const [sentFields, setSentFields] = useState<Record<string, string>>({});
@@ -48,7 +48,8 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
     onMutate: () => setProgress(null),
     onSuccess: (answer) => {
       setResult(answer);
-      void invalidate(`/api/sessions/${sessionId}`, "/api/sessions");
+      // Imported scores show on the sheet, in Recent changes and in the sessions' result counts.
+      void client.invalidateQueries({ queryKey: queryKeys.sessions });
     },
   });
 

@@ -1,7 +1,7 @@
 "use client";
 
 import type { ReactNode } from "react";
-import type { SheetTest } from "@/lib/client/api-types";
+import type { SheetTest } from "@/lib/client/queries";
 
 type Choice = Pick<SheetTest, "id" | "name" | "unit" | "trialRule" | "trialsPerSession">;
 

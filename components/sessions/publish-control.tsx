@@ -3,9 +3,8 @@
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { FormAlert } from "@/components/form-bits";
+import { useUpdateSession } from "@/hooks/use-writes";
 import type { SessionStatus } from "@/lib/domain";
-import type { SheetData } from "@/lib/client/api-types";
-import { fetchJson } from "@/hooks/use-api";
 
 /**
  * Owner and scientist: publish a session to its athletes, or take it back to draft.
@@ -16,38 +15,26 @@ export function PublishControl({
   status,
   version,
   squadName,
-  onDone,
   compact = false,
 }: {
   sessionId: number;
   status: SessionStatus;
-  /** The version read; when unknown (lists), the session is read first. */
-  version?: number;
+  /** The version the screen read: a change made since by someone else is refused, not overwritten. */
+  version: number;
   squadName: string;
-  onDone: () => void;
   compact?: boolean;
 }) {
   const [open, setOpen] = useState(false);
-  const [busy, setBusy] = useState(false);
-  const [failure, setFailure] = useState<string | null>(null);
+  const update = useUpdateSession();
   const publishing = status === "draft";
+  const busy = update.isPending;
+  const failure = update.error ? update.error.message : null;
 
-  async function confirm() {
-    setBusy(true);
-    setFailure(null);
-    try {
-      const current = version ?? (await fetchJson<SheetData>(`/api/sessions/${sessionId}`)).session.version;
-      await fetchJson(`/api/sessions/${sessionId}`, {
-        method: "PATCH",
-        body: JSON.stringify({ status: publishing ? "published" : "draft", version: current }),
-      });
-      setOpen(false);
-      onDone();
-    } catch (e) {
-      setFailure(e instanceof Error ? e.message : "The change failed.");
-    } finally {
-      setBusy(false);
-    }
+  function confirm() {
+    update.mutate(
+      { sessionId, input: { status: publishing ? "published" : "draft", version } },
+      { onSuccess: () => setOpen(false) },
+    );
   }
 
   return (
@@ -55,7 +42,10 @@ export function PublishControl({
       <button
         type="button"
         className={`${publishing && !compact ? "btn-primary" : "btn-quiet"} ${compact ? "px-2 py-1 text-xs" : ""}`}
-        onClick={() => setOpen(true)}
+        onClick={() => {
+          update.reset();
+          setOpen(true);
+        }}
       >
         {publishing ? "Publish…" : "Back to draft…"}
       </button>

@@ -7,8 +7,8 @@ import type { z } from "zod";
 import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
 import { BatteryPicker } from "./battery-picker";
 import { PHASES } from "@/lib/domain";
-import type { SquadSummary, TestItem } from "@/lib/client/api-types";
-import { fetchJson } from "@/hooks/use-api";
+import { useCreateSession } from "@/hooks/use-writes";
+import type { SquadSummary, TestItem } from "@/lib/client/queries";
 import { PHASE_LABELS } from "@/lib/labels";
 import { sessionCreateSchema, type SessionCreateInput } from "@/lib/validation/sessions";
 
@@ -32,6 +32,7 @@ export function SessionCreateForm({
   onDone: (session: { id: number }) => void;
 }) {
   const [failure, setFailure] = useState<string | null>(null);
+  const create = useCreateSession();
   const {
     register,
     control,
@@ -50,8 +51,7 @@ export function SessionCreateForm({
   async function onSubmit(values: SessionCreateInput) {
     setFailure(null);
     try {
-      const { session } = await fetchJson<{ session: { id: number } }>("/api/sessions", { method: "POST", body: JSON.stringify(values) });
-      onDone(session);
+      onDone(await create.mutateAsync(values));
     } catch (error) {
       setFailure(applyServerErrors(error, setError, FIELDS));
     }

@@ -7,8 +7,9 @@ import type { z } from "zod";
 import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
 import { BatteryPicker } from "./battery-picker";
 import { PHASES } from "@/lib/domain";
-import type { SheetData, TestItem } from "@/lib/client/api-types";
-import { fetchJson, useApi } from "@/hooks/use-api";
+import { useQuery } from "@tanstack/react-query";
+import { useUpdateSession } from "@/hooks/use-writes";
+import { type SheetData, testQueries } from "@/lib/client/queries";
 import { PHASE_LABELS } from "@/lib/labels";
 import { sessionUpdateSchema, type SessionUpdateInput } from "@/lib/validation/sessions";
 
@@ -19,7 +20,8 @@ const FIELDS = ["date", "phase", "testIds", "notes"] as const;
  * this session stays in the battery, so no score is ever orphaned.
  */
 export function SessionEditForm({ data, onDone }: { data: SheetData; onDone: () => void }) {
-  const library = useApi<{ tests: TestItem[] }>("/api/tests");
+  const library = useQuery(testQueries.list());
+  const update = useUpdateSession();
   const { session } = data;
   const scored = new Set(data.results.map((r) => r.testId));
   const [failure, setFailure] = useState<string | null>(null);
@@ -43,13 +45,13 @@ export function SessionEditForm({ data, onDone }: { data: SheetData; onDone: () 
   // Archived tests cannot join a battery, but one already in it stays listed.
   const choices = [
     ...data.tests,
-    ...(library.data?.tests ?? []).filter((t) => !data.tests.some((b) => b.id === t.id)),
+    ...(library.data ?? []).filter((t) => !data.tests.some((b) => b.id === t.id)),
   ];
 
   async function onSubmit(values: SessionUpdateInput) {
     setFailure(null);
     try {
-      await fetchJson(`/api/sessions/${session.id}`, { method: "PATCH", body: JSON.stringify(values) });
+      await update.mutateAsync({ sessionId: session.id, input: values });
       onDone();
     } catch (error) {
       setFailure(applyServerErrors(error, setError, FIELDS));

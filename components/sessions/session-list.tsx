@@ -6,10 +6,8 @@ import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
 import { TableCard, type Column } from "@/components/table-card";
-import type { Role } from "@/lib/domain";
-import type { SessionListItem, SquadSummary, TestItem } from "@/lib/client/api-types";
-import { useApi } from "@/hooks/use-api";
-import { useInvalidate } from "@/hooks/use-invalidate";
+import { keepPreviousData, useQuery, useSuspenseQuery } from "@tanstack/react-query";
+import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
 import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
 import { PublishControl } from "./publish-control";
 import { SessionCreateForm } from "./session-create-form";
@@ -25,16 +23,14 @@ const COLUMNS: Column[] = [
 ];
 
 /** Testing sessions of the caller's squads, newest first, with a squad filter and "New session". */
-export function SessionList({ role, initialSquadId }: { role: Role; initialSquadId: number | null }) {
+export function SessionList({ canPublish, initialSquadId }: { canPublish: boolean; initialSquadId: number | null }) {
   const router = useRouter();
-  const invalidate = useInvalidate();
   const [squadId, setSquadId] = useState<number | null>(initialSquadId);
   const [creating, setCreating] = useState(false);
-  const squads = useApi<{ squads: SquadSummary[] }>("/api/squads");
-  const tests = useApi<{ tests: TestItem[] }>("/api/tests?archived=include");
-  const sessions = useApi<{ sessions: SessionListItem[] }>(squadId ? `/api/sessions?squadId=${squadId}` : "/api/sessions");
-  const testName = new Map((tests.data?.tests ?? []).map((t) => [t.id, t.name]));
-  const canPublish = role === "owner" || role === "scientist";
+  const { data: squads } = useSuspenseQuery(squadQueries.list());
+  const { data: tests } = useSuspenseQuery(testQueries.list({ archived: true }));
+  const sessions = useQuery({ ...sessionQueries.list({ squadId }), placeholderData: keepPreviousData });
+  const testName = new Map(tests.map((t) => [t.id, t.name]));
 
   function chooseSquad(value: string) {
     const id = value ? Number(value) : null;
@@ -42,7 +38,7 @@ export function SessionList({ role, initialSquadId }: { role: Role; initialSquad
     router.replace(id ? `/sessions?squadId=${id}` : "/sessions", { scroll: false });
   }
 
-  const list = [...(sessions.data?.sessions ?? [])].sort((a, b) => b.date.localeCompare(a.date) || b.id - a.id);
+  const list = [...(sessions.data ?? [])].sort((a, b) => b.date.localeCompare(a.date) || b.id - a.id);
   return (
     <section aria-labelledby="sessions-heading" className="space-y-4">
       <div className="flex flex-wrap items-baseline justify-between gap-3">
@@ -54,11 +50,11 @@ export function SessionList({ role, initialSquadId }: { role: Role; initialSquad
           <label htmlFor="session-filter" className="text-sm font-semibold">Squad</label>
           <select id="session-filter" className="field w-auto" value={squadId ?? ""} onChange={(e) => chooseSquad(e.target.value)}>
             <option value="">All squads</option>
-            {(squads.data?.squads ?? []).map((s) => (
+            {squads.map((s) => (
               <option key={s.id} value={s.id}>{s.name}</option>
             ))}
           </select>
-          <button type="button" className="btn-primary" disabled={!squads.data || !tests.data} onClick={() => setCreating(true)}>
+          <button type="button" className="btn-primary" onClick={() => setCreating(true)}>
             New session
           </button>
         </div>
@@ -100,7 +96,7 @@ export function SessionList({ role, initialSquadId }: { role: Role; initialSquad
                       sessionId={s.id}
                       status={s.status}
                       squadName={s.squadName}
-                      onDone={() => void invalidate("/api/sessions", "/api/squads")}
+                      version={s.version}
                     />
                   )}
                 </div>
@@ -111,14 +107,13 @@ export function SessionList({ role, initialSquadId }: { role: Role; initialSquad
       )}
 
       <Dialog open={creating} wide title="New session" onClose={() => setCreating(false)}>
-        {creating && squads.data && tests.data && (
+        {creating && (
           <SessionCreateForm
-            squads={squads.data.squads.filter((s) => !s.archived)}
-            tests={tests.data.tests.filter((t) => !t.archived)}
+            squads={squads.filter((s) => !s.archived)}
+            tests={tests.filter((t) => !t.archived)}
             defaultSquadId={squadId}
             onDone={(session) => {
               setCreating(false);
-              void invalidate("/api/sessions", "/api/squads");
               router.push(`/sessions/${session.id}`);
             }}
           />

@@ -1,7 +1,7 @@
 "use client";
 
-import type { AuditEvent } from "@/lib/client/api-types";
-import { useApi } from "@/hooks/use-api";
+import { useSuspenseQuery } from "@tanstack/react-query";
+import { type AuditEvent, sessionQueries } from "@/lib/client/queries";
 import { describeEntry, timeWords } from "@/lib/sheet/model";
 
 const ACTION_WORDS: Record<string, string> = {
@@ -32,22 +32,25 @@ function EventText({ e }: { e: AuditEvent }) {
 }
 
 /** The latest changes to this session's scores, newest first: who, when, old → new. */
-export function RecentChanges({ url }: { url: string }) {
-  const { data, error, isPending, refetch } = useApi<{ events: AuditEvent[] }>(url);
+export function RecentChanges({ sessionId }: { sessionId: number }) {
+  const { data: events, refetch, isRefetching } = useSuspenseQuery(sessionQueries.audit(sessionId));
   return (
     <section aria-labelledby="changes-heading" className="card p-4">
       <div className="mb-2 flex items-baseline justify-between">
         <h2 id="changes-heading" className="font-bold">Recent changes</h2>
-        <button type="button" className="text-xs font-semibold text-ink-soft hover:text-ink" onClick={() => refetch()}>
-          Refresh
+        <button
+          type="button"
+          className="text-xs font-semibold text-ink-soft hover:text-ink"
+          disabled={isRefetching}
+          onClick={() => refetch()}
+        >
+          {isRefetching ? "Refreshing…" : "Refresh"}
         </button>
       </div>
-      {isPending && <p role="status" className="text-sm text-ink-soft">Loading changes…</p>}
-      {error && <p role="alert" className="text-sm">Changes could not load: {error.message}</p>}
-      {data && data.events.length === 0 && <p className="text-sm text-ink-soft">No changes recorded yet.</p>}
-      {data && data.events.length > 0 && (
+      {events.length === 0 && <p className="text-sm text-ink-soft">No changes recorded yet.</p>}
+      {events.length > 0 && (
         <ol className="max-h-80 divide-y divide-line overflow-y-auto text-sm">
-          {data.events.map((e) => (
+          {events.map((e) => (
             <li key={e.id} className={`grid grid-cols-[6.5rem_1fr] gap-x-3 py-1.5 ${e.undone ? "text-ink-faint" : ""}`}>
               <span className="num text-ink-faint">{timeWords(e.at)}</span>
               <span>

@@ -2,12 +2,10 @@
 
 import Link from "next/link";
 import { useMemo, useState } from "react";
-import { LoadFailure } from "@/components/query-status";
+import { Breadcrumbs } from "@/components/breadcrumbs";
 import { Dialog } from "@/components/dialog";
 import { PublishControl } from "@/components/sessions/publish-control";
 import { SessionEditForm } from "@/components/sessions/session-edit-form";
-import { ApiClientError } from "@/hooks/use-api";
-import { useInvalidate } from "@/hooks/use-invalidate";
 import { useSessionSheet } from "@/hooks/use-session-sheet";
 import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
 import { RecentChanges } from "./recent-changes";
@@ -17,29 +15,14 @@ import { UndoButton } from "./undo-button";
 /** The Session sheet: fast, keyboard-first score entry for one testing session. */
 export function SessionSheet({ sessionId }: { sessionId: number }) {
   const sheet = useSessionSheet(sessionId);
-  const invalidate = useInvalidate();
-  const { data, error, isPending, refetch } = sheet.query;
+  const { data } = sheet;
   const [testFilter, setTestFilter] = useState<number | "all">("all");
   const [announcement, setAnnouncement] = useState("");
   const [editing, setEditing] = useState(false);
   const tests = useMemo(
-    () => (data ? (testFilter === "all" ? data.tests : data.tests.filter((t) => t.id === testFilter)) : []),
+    () => (testFilter === "all" ? data.tests : data.tests.filter((t) => t.id === testFilter)),
     [data, testFilter],
   );
-
-  if (isPending) return <p role="status" className="text-ink-soft">Loading the Session sheet…</p>;
-  if (error) {
-    if (error instanceof ApiClientError && error.status === 404) {
-      return (
-        <div className="card mx-auto max-w-lg p-6 text-center">
-          <h1 className="text-lg font-bold">Session not found</h1>
-          <p className="mt-2 text-sm text-ink-soft">It does not exist, or it is outside what your account can see.</p>
-          <Link href="/sessions" className="btn-quiet mt-4">Back to Sessions</Link>
-        </div>
-      );
-    }
-    return <LoadFailure failure="The Session sheet could not load" error={error} onRetry={refetch} />;
-  }
 
   const { session } = data;
   const filled = data.results.filter((r) => r.value !== null || r.flag !== null).length;
@@ -49,10 +32,7 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
 
   return (
     <section aria-labelledby="sheet-heading" className="space-y-3">
-      <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">
-        <Link href="/sessions" className="hover:underline">Sessions</Link> <span aria-hidden>›</span>{" "}
-        <Link href={`/squads/${session.squadId}`} className="hover:underline">{session.squadName}</Link>
-      </nav>
+      <Breadcrumbs trail={[{ href: "/sessions", label: "Sessions" }, { href: `/squads/${session.squadId}`, label: session.squadName }]} />
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
           <h1 id="sheet-heading" className="text-2xl font-bold">Session sheet</h1>
@@ -80,7 +60,6 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
               status={session.status}
               version={session.version}
               squadName={session.squadName}
-              onDone={() => void invalidate(`/api/sessions`, "/api/squads")}
             />
           )}
         </div>
@@ -132,7 +111,7 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
 
       <SheetGrid data={data} tests={tests} sheet={sheet} canEdit={data.canEdit} onAnnounce={setAnnouncement} />
 
-      <RecentChanges url={sheet.auditUrl} />
+      <RecentChanges sessionId={session.id} />
 
       {data.canEdit && (
         <Dialog open={editing} title="Edit session" onClose={() => setEditing(false)} wide>
@@ -142,7 +121,6 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
               onDone={() => {
                 setEditing(false);
                 setAnnouncement("The session was saved.");
-                void invalidate(`/api/sessions`, "/api/squads");
               }}
             />
           )}

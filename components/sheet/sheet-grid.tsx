@@ -1,7 +1,7 @@
 "use client";
 
 import { useMemo, useRef } from "react";
-import type { SheetData, SheetTest } from "@/lib/client/api-types";
+import type { SheetData, SheetTest } from "@/lib/client/queries";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
 import { isBlock, parseBlock, sheetColumns } from "@/lib/sheet/columns";
 import { SheetHead } from "./sheet-head";

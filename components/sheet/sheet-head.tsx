@@ -1,4 +1,4 @@
-import type { SheetTest } from "@/lib/client/api-types";
+import type { SheetTest } from "@/lib/client/queries";
 import { plausibleWords } from "@/lib/sheet/model";
 
 export function SheetHead({ tests }: { tests: SheetTest[] }) {

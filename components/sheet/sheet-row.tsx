@@ -3,7 +3,7 @@
 import { Fragment } from "react";
 import { paddedNumber } from "@/lib/decimal";
 import { RESULT_FLAGS, type ResultFlag } from "@/lib/domain";
-import type { SheetTest } from "@/lib/client/api-types";
+import type { SheetTest } from "@/lib/client/queries";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
 import { FLAG_LABELS, formatValue } from "@/lib/labels";
 import { reduceTrials, trialSpread } from "@/lib/trials";

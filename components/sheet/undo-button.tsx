@@ -1,6 +1,6 @@
 "use client";
 
-import { ApiClientError } from "@/hooks/use-api";
+import { ApiClientError } from "@/lib/client/fetch-json";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
 
 /** Undoes the caller's latest change to this session's scores, then reloads the sheet. */
@@ -13,9 +13,9 @@ export function UndoButton({ sheet, onMessage }: { sheet: SessionSheetState; onM
       disabled={undo.isPending || sheet.busy}
       onClick={() =>
         undo.mutate(undefined, {
-          onSuccess: ({ undone }) => {
-            const athlete = sheet.query.data?.athletes.find((a) => a.id === undone.athleteId)?.name ?? "an athlete";
-            const test = sheet.query.data?.tests.find((t) => t.id === undone.testId)?.name ?? "a test";
+          onSuccess: (undone) => {
+            const athlete = sheet.data.athletes.find((a) => a.id === undone.athleteId)?.name ?? "an athlete";
+            const test = sheet.data.tests.find((t) => t.id === undone.testId)?.name ?? "a test";
             onMessage(`Undid the last change: ${athlete} · ${test}.`);
           },
           onError: (error) => {

@@ -1,9 +1,10 @@
 "use client";
 
+import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
 import { Field, FormAlert } from "@/components/form-bits";
-import type { AthleteListItem, RosterAthlete } from "@/lib/client/api-types";
-import { fetchJson, useApi } from "@/hooks/use-api";
+import { useAddAthlete } from "@/hooks/use-writes";
+import { athleteQueries, type RosterAthlete } from "@/lib/client/queries";
 
 /** Adds an athlete who is already in the organisation (e.g. moving up from the academy) to this squad. */
 export function AddExistingAthlete({
@@ -15,26 +16,14 @@ export function AddExistingAthlete({
   alreadyIn: ReadonlySet<number>;
   onDone: (athlete: RosterAthlete) => void;
 }) {
-  const { data, isPending, error } = useApi<{ athletes: AthleteListItem[] }>("/api/athletes");
+  const { data, isPending, error } = useQuery(athleteQueries.list());
   const [athleteId, setAthleteId] = useState("");
-  const [failure, setFailure] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
-  const candidates = useMemo(() => (data?.athletes ?? []).filter((a) => !alreadyIn.has(a.id)), [data, alreadyIn]);
+  const addAthlete = useAddAthlete(squadId);
+  const failure = addAthlete.error ? addAthlete.error.message : null;
+  const candidates = useMemo(() => (data ?? []).filter((a) => !alreadyIn.has(a.id)), [data, alreadyIn]);
 
-  async function add() {
-    setBusy(true);
-    setFailure(null);
-    try {
-      const { athlete } = await fetchJson<{ athlete: RosterAthlete }>(`/api/squads/${squadId}/athletes`, {
-        method: "POST",
-        body: JSON.stringify({ athleteId: Number(athleteId) }),
-      });
-      onDone(athlete);
-    } catch (e) {
-      setFailure(e instanceof Error ? e.message : "The athlete could not be added.");
-    } finally {
-      setBusy(false);
-    }
+  function add() {
+    addAthlete.mutate({ athleteId: Number(athleteId) }, { onSuccess: onDone });
   }
 
   if (isPending) return <p role="status" className="text-sm text-ink-soft">Loading athletes…</p>;
@@ -56,8 +45,8 @@ export function AddExistingAthlete({
       </Field>
       <FormAlert message={failure} />
       <div className="flex justify-end">
-        <button type="button" className="btn-primary" disabled={!athleteId || busy} onClick={add}>
-          {busy ? "Adding…" : "Add to squad"}
+        <button type="button" className="btn-primary" disabled={!athleteId || addAthlete.isPending} onClick={add}>
+          {addAthlete.isPending ? "Adding…" : "Add to squad"}
         </button>
       </div>
     </div>

@@ -5,8 +5,8 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Field, SubmitRow, applyServerErrors } from "@/components/form-bits";
-import type { RosterAthlete } from "@/lib/client/api-types";
-import { fetchJson } from "@/hooks/use-api";
+import { useAddAthlete, useUpdateAthlete } from "@/hooks/use-writes";
+import type { RosterAthlete } from "@/lib/client/queries";
 import { athleteCreateSchema, type AthleteCreateInput } from "@/lib/validation/roster";
 
 const FIELDS = ["name", "position", "sex", "dateOfBirth", "externalId", "notes"] as const;
@@ -23,6 +23,8 @@ export function AthleteForm({
   onDone: (saved: RosterAthlete) => void;
 }) {
   const [failure, setFailure] = useState<string | null>(null);
+  const add = useAddAthlete(squadId);
+  const update = useUpdateAthlete();
   const {
     register,
     handleSubmit,
@@ -45,10 +47,7 @@ export function AthleteForm({
   async function onSubmit(values: AthleteCreateInput) {
     setFailure(null);
     try {
-      const saved = athlete
-        ? await fetchJson<{ athlete: RosterAthlete }>(`/api/athletes/${athlete.id}`, { method: "PATCH", body: JSON.stringify(values) })
-        : await fetchJson<{ athlete: RosterAthlete }>(`/api/squads/${squadId}/athletes`, { method: "POST", body: JSON.stringify(values) });
-      onDone(saved.athlete);
+      onDone(athlete ? await update.mutateAsync({ athleteId: athlete.id, input: values }) : await add.mutateAsync(values));
     } catch (error) {
       setFailure(applyServerErrors(error, setError, FIELDS));
     }

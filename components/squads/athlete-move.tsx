@@ -1,9 +1,10 @@
 "use client";
 
+import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Field, FormAlert } from "@/components/form-bits";
-import type { RosterAthlete, SquadSummary } from "@/lib/client/api-types";
-import { fetchJson, useApi } from "@/hooks/use-api";
+import { useUpdateAthlete } from "@/hooks/use-writes";
+import { athleteQueries, type RosterAthlete, squadQueries } from "@/lib/client/queries";
 
 /**
  * Moves an athlete to another squad, or adds them to a second one. The API takes the full
@@ -18,36 +19,30 @@ export function AthleteMove({
   fromSquadId: number;
   onDone: (message: string) => void;
 }) {
-  const squads = useApi<{ squads: SquadSummary[] }>("/api/squads?archived=include");
-  const membership = useApi<{ athlete: RosterAthlete & { squadIds: number[] } }>(`/api/athletes/${athlete.id}`);
-  const list = squads.data?.squads ?? [];
+  const squads = useQuery(squadQueries.list({ archived: true }));
+  const membership = useQuery(athleteQueries.detail(athlete.id));
+  const update = useUpdateAthlete();
+  const list = squads.data ?? [];
   const [target, setTarget] = useState("");
   const [keep, setKeep] = useState(false);
-  const [failure, setFailure] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
+  const failure = update.error ? update.error.message : null;
 
   const loading = squads.isPending || membership.isPending;
   const failed = squads.error ?? membership.error;
-  const memberOf = new Set([fromSquadId, ...(membership.data?.athlete.squadIds ?? [])]);
+  const memberOf = new Set([fromSquadId, ...(membership.data?.squadIds ?? [])]);
   const current = list.filter((s) => memberOf.has(s.id));
   const targets = list.filter((s) => !s.archived && !current.some((c) => c.id === s.id));
 
-  async function move() {
+  function move() {
     const targetId = Number(target);
     const ids = new Set(current.map((s) => s.id));
     if (!keep) ids.delete(fromSquadId);
     ids.add(targetId);
-    setBusy(true);
-    setFailure(null);
-    try {
-      await fetchJson(`/api/athletes/${athlete.id}`, { method: "PATCH", body: JSON.stringify({ squadIds: [...ids] }) });
-      const name = list.find((s) => s.id === targetId)?.name ?? "the squad";
-      onDone(keep ? `${athlete.name} was added to ${name} as well.` : `${athlete.name} was moved to ${name}.`);
-    } catch (e) {
-      setFailure(e instanceof Error ? e.message : "The move failed.");
-    } finally {
-      setBusy(false);
-    }
+    const name = list.find((s) => s.id === targetId)?.name ?? "the squad";
+    update.mutate(
+      { athleteId: athlete.id, input: { squadIds: [...ids] } },
+      { onSuccess: () => onDone(keep ? `${athlete.name} was added to ${name} as well.` : `${athlete.name} was moved to ${name}.`) },
+    );
   }
 
   if (loading) return <p role="status" className="text-sm text-ink-soft">Reading {athlete.name}&apos;s squads…</p>;
@@ -78,8 +73,8 @@ export function AthleteMove({
       )}
       <FormAlert message={failure} />
       <div className="flex justify-end">
-        <button type="button" className="btn-primary" disabled={!target || busy} onClick={move}>
-          {busy ? "Saving…" : keep ? "Add to squad" : "Move"}
+        <button type="button" className="btn-primary" disabled={!target || update.isPending} onClick={move}>
+          {update.isPending ? "Saving…" : keep ? "Add to squad" : "Move"}
         </button>
       </div>
     </div>

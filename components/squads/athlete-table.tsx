@@ -2,7 +2,7 @@
 
 import { useMemo, useState } from "react";
 import { TableCard, type Column } from "@/components/table-card";
-import type { RosterAthlete } from "@/lib/client/api-types";
+import type { RosterAthlete } from "@/lib/client/queries";
 import { formatDate } from "@/lib/labels";
 
 type SortKey = "name" | "position" | "sex" | "dateOfBirth" | "externalId";

@@ -1,12 +1,13 @@
 "use client";
 
+import { keepPreviousData, useQuery, useSuspenseQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useMemo, useState } from "react";
+import { Breadcrumbs } from "@/components/breadcrumbs";
 import { Dialog } from "@/components/dialog";
 import { LoadFailure } from "@/components/query-status";
-import type { RosterAthlete, SquadDetail } from "@/lib/client/api-types";
-import { ApiClientError, fetchJson, useApi } from "@/hooks/use-api";
-import { useInvalidate } from "@/hooks/use-invalidate";
+import { useUpdateAthlete } from "@/hooks/use-writes";
+import { type RosterAthlete, squadQueries } from "@/lib/client/queries";
 import { AddExistingAthlete } from "./add-existing-athlete";
 import { AthleteForm } from "./athlete-form";
 import { AthleteMove } from "./athlete-move";
@@ -26,60 +27,44 @@ export function Roster({ squadId }: { squadId: number }) {
   const [panel, setPanel] = useState<Panel>(null);
   const [addMode, setAddMode] = useState<"new" | "existing">("new");
   const [notice, setNotice] = useState<string | null>(null);
-  const invalidate = useInvalidate();
-  const detail = useApi<SquadDetail>(`/api/squads/${squadId}`);
-  const athletesUrl = `/api/squads/${squadId}/athletes${showArchived ? "?archived=include" : ""}`;
-  const athletes = useApi<{ athletes: RosterAthlete[] }>(athletesUrl);
-  const memberIds = useMemo(() => new Set((athletes.data?.athletes ?? []).map((a) => a.id)), [athletes.data]);
+  const { data: detail } = useSuspenseQuery(squadQueries.detail(squadId));
+  const athletes = useQuery({ ...squadQueries.roster(squadId, { archived: showArchived }), placeholderData: keepPreviousData });
+  const update = useUpdateAthlete();
+  const memberIds = useMemo(() => new Set((athletes.data ?? []).map((a) => a.id)), [athletes.data]);
 
   function done(message: string) {
     setNotice(message);
     setPanel(null);
-    void invalidate("/api/squads", "/api/athletes");
   }
 
-  async function setArchived(athlete: RosterAthlete, archived: boolean) {
-    try {
-      await fetchJson(`/api/athletes/${athlete.id}`, { method: "PATCH", body: JSON.stringify({ archived }) });
-      done(archived ? `${athlete.name} was archived; their results are kept.` : `${athlete.name} was restored.`);
-    } catch (e) {
-      setNotice(`${athlete.name}: ${e instanceof Error ? e.message : "the change failed"}`);
-    }
-  }
-
-  if (detail.error instanceof ApiClientError && detail.error.status === 404) {
-    return (
-      <div className="card mx-auto max-w-lg p-6 text-center">
-        <h1 className="text-lg font-bold">Squad not found</h1>
-        <p className="mt-2 text-sm text-ink-soft">It does not exist, or it is outside what your account can see.</p>
-        <Link href="/squads" className="btn-quiet mt-4">Back to the Roster</Link>
-      </div>
+  function setArchived(athlete: RosterAthlete, archived: boolean) {
+    update.mutate(
+      { athleteId: athlete.id, input: { archived } },
+      {
+        onSuccess: () => done(archived ? `${athlete.name} was archived; their results are kept.` : `${athlete.name} was restored.`),
+        onError: (error) => setNotice(`${athlete.name}: ${error.message}`),
+      },
     );
   }
 
-  const squad = detail.data?.squad;
-  const failed = detail.error ?? athletes.error;
+  const { squad } = detail;
   return (
     <section aria-labelledby="squad-heading" className="space-y-4">
-      <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">
-        <Link href="/squads" className="hover:underline">Roster</Link> <span aria-hidden>›</span> {squad?.name ?? "…"}
-      </nav>
+      <Breadcrumbs trail={[{ href: "/squads", label: "Roster" }, { label: squad.name }]} />
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
           <h1 id="squad-heading" className="text-2xl font-bold">
-            {squad?.name ?? "Squad"}
-            {squad?.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 align-middle text-xs text-steady">Archived</span>}
+            {squad.name}
+            {squad.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 align-middle text-xs text-steady">Archived</span>}
           </h1>
-          {squad && (
-            <p className="text-sm text-ink-soft">
-              {squad.sport ?? "No sport given"} · Coaches:{" "}
-              {squad.coaches.length > 0 ? squad.coaches.map((c) => c.name).join(", ") : "none assigned"}
-            </p>
-          )}
+          <p className="text-sm text-ink-soft">
+            {squad.sport ?? "No sport given"} · Coaches:{" "}
+            {squad.coaches.length > 0 ? squad.coaches.map((c) => c.name).join(", ") : "none assigned"}
+          </p>
         </div>
         <div className="flex flex-wrap gap-2">
           <Link href={`/sessions?squadId=${squadId}`} className="btn-quiet">Sessions</Link>
-          {detail.data?.canManage && (
+          {detail.canManage && (
             <button type="button" className="btn-quiet" onClick={() => setPanel({ kind: "settings" })}>Squad settings</button>
           )}
           <button type="button" className="btn-primary" onClick={() => setPanel({ kind: "add" })}>Add athlete</button>
@@ -89,21 +74,14 @@ export function Roster({ squadId }: { squadId: number }) {
       {notice && (
         <p role="status" className="rounded-md border border-line bg-band px-3 py-2 text-sm">{notice}</p>
       )}
-      {failed && (
-        <LoadFailure
-          failure="The Roster could not load"
-          error={failed}
-          onRetry={() => { void detail.refetch(); void athletes.refetch(); }}
-        />
-      )}
-      {athletes.isPending && <p role="status" className="text-ink-soft">Loading athletes…</p>}
+      {athletes.error && <LoadFailure failure="The Roster could not load" error={athletes.error} onRetry={athletes.refetch} />}
       <label className="flex items-center gap-2 text-sm">
         <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} />
         Show archived athletes
       </label>
       {athletes.data && (
         <AthleteTable
-          athletes={athletes.data.athletes}
+          athletes={athletes.data}
           renderActions={(a) => (
             <div className="flex justify-end gap-1.5 whitespace-nowrap">
               <button type="button" className="btn-quiet px-2 py-1 text-xs" aria-label={`Edit ${a.name}`} onClick={() => setPanel({ kind: "edit", athlete: a })}>
@@ -120,7 +98,7 @@ export function Roster({ squadId }: { squadId: number }) {
         />
       )}
 
-      <Dialog open={panel?.kind === "add"} title={`Add an athlete to ${squad?.name ?? "the squad"}`} onClose={() => setPanel(null)}>
+      <Dialog open={panel?.kind === "add"} title={`Add an athlete to ${squad.name}`} onClose={() => setPanel(null)}>
         <div role="tablist" aria-label="How to add" className="mb-4 flex gap-2">
           {(["new", "existing"] as const).map((mode) => (
             <button
@@ -150,7 +128,7 @@ export function Roster({ squadId }: { squadId: number }) {
         {panel?.kind === "move" && <AthleteMove athlete={panel.athlete} fromSquadId={squadId} onDone={done} />}
       </Dialog>
       <Dialog open={panel?.kind === "settings"} title="Squad settings" onClose={() => setPanel(null)}>
-        {panel?.kind === "settings" && squad && <SquadSettings squad={squad} onSaved={done} />}
+        {panel?.kind === "settings" && <SquadSettings squad={squad} onSaved={done} />}
       </Dialog>
     </section>
   );

@@ -5,13 +5,12 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Field, SubmitRow, applyServerErrors } from "@/components/form-bits";
-import { fetchJson } from "@/hooks/use-api";
+import { useCreateSquad } from "@/hooks/use-writes";
 import { squadCreateSchema, type SquadCreateInput } from "@/lib/validation/roster";
 
-type Squad = { id: number; name: string };
-
-export function SquadCreateForm({ onDone }: { onDone: (squad: Squad) => void }) {
+export function SquadCreateForm({ onDone }: { onDone: (squad: { id: number }) => void }) {
   const [failure, setFailure] = useState<string | null>(null);
+  const create = useCreateSquad();
   const {
     register,
     handleSubmit,
@@ -22,8 +21,7 @@ export function SquadCreateForm({ onDone }: { onDone: (squad: Squad) => void }) 
   async function onSubmit(values: SquadCreateInput) {
     setFailure(null);
     try {
-      const { squad } = await fetchJson<{ squad: Squad }>("/api/squads", { method: "POST", body: JSON.stringify(values) });
-      onDone(squad);
+      onDone(await create.mutateAsync(values));
     } catch (error) {
       setFailure(applyServerErrors(error, setError, ["name", "sport"]));
     }

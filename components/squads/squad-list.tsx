@@ -4,10 +4,9 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
-import type { Phase, Role } from "@/lib/domain";
-import type { SquadSummary } from "@/lib/client/api-types";
-import { useApi } from "@/hooks/use-api";
-import { useInvalidate } from "@/hooks/use-invalidate";
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
+import { squadQueries } from "@/lib/client/queries";
+import type { Role } from "@/lib/domain";
 import { PHASE_LABELS, formatDate } from "@/lib/labels";
 import { SquadCreateForm } from "./squad-create-form";
 import { SquadsStatus } from "./squads-status";
@@ -17,10 +16,8 @@ export function SquadList({ role }: { role: Role }) {
   const [showArchived, setShowArchived] = useState(false);
   const [creating, setCreating] = useState(false);
   const router = useRouter();
-  const invalidate = useInvalidate();
-  const squads = useApi<{ squads: SquadSummary[] }>(
-    showArchived ? "/api/squads?archived=include" : "/api/squads",
-  );
+  // The page prefetched the active squads; the archived ones are read when asked for.
+  const squads = useQuery({ ...squadQueries.list({ archived: showArchived }), placeholderData: keepPreviousData });
 
   return (
     <section aria-labelledby="roster-heading" className="space-y-4">
@@ -43,9 +40,9 @@ export function SquadList({ role }: { role: Role }) {
       </div>
 
       <SquadsStatus query={squads} role={role} />
-      {squads.data && squads.data.squads.length > 0 && (
+      {squads.data && squads.data.length > 0 && (
         <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
-          {squads.data.squads.map((squad) => (
+          {squads.data.map((squad) => (
             <li key={squad.id}>
               <Link
                 href={`/squads/${squad.id}`}
@@ -60,7 +57,7 @@ export function SquadList({ role }: { role: Role }) {
                 </span>
                 <span className="mt-1 block text-xs text-ink-faint">
                   {squad.latestSession
-                    ? `Latest session ${formatDate(squad.latestSession.date)} · ${PHASE_LABELS[squad.latestSession.phase as Phase] ?? squad.latestSession.phase}`
+                    ? `Latest session ${formatDate(squad.latestSession.date)} · ${PHASE_LABELS[squad.latestSession.phase]}`
                     : "No sessions yet"}
                 </span>
               </Link>
@@ -73,7 +70,6 @@ export function SquadList({ role }: { role: Role }) {
         <SquadCreateForm
           onDone={(squad) => {
             setCreating(false);
-            void invalidate("/api/squads");
             router.push(`/squads/${squad.id}`);
           }}
         />

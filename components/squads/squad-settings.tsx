@@ -5,15 +5,13 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { Field, FormAlert, applyServerErrors } from "@/components/form-bits";
-import type { Person, SquadDetail } from "@/lib/client/api-types";
-import { fetchJson, useApi } from "@/hooks/use-api";
+import { useQuery } from "@tanstack/react-query";
+import { useUpdateSquad } from "@/hooks/use-writes";
+import { coachQueries, type SquadDetail } from "@/lib/client/queries";
 import { squadCreateSchema } from "@/lib/validation/roster";
 
 type Squad = SquadDetail["squad"];
 type NameInput = z.infer<typeof squadCreateSchema>;
-
-const patch = (squadId: number, body: unknown) =>
-  fetchJson(`/api/squads/${squadId}`, { method: "PATCH", body: JSON.stringify(body) });
 
 /** Owner only: rename the squad, choose its coaches, archive or restore it. */
 export function SquadSettings({ squad, onSaved }: { squad: Squad; onSaved: (message: string) => void }) {
@@ -28,6 +26,7 @@ export function SquadSettings({ squad, onSaved }: { squad: Squad; onSaved: (mess
 
 function RenameForm({ squad, onSaved }: { squad: Squad; onSaved: (message: string) => void }) {
   const [failure, setFailure] = useState<string | null>(null);
+  const update = useUpdateSquad(squad.id);
   const { register, handleSubmit, setError, formState } = useForm<z.input<typeof squadCreateSchema>, unknown, NameInput>({
     resolver: zodResolver(squadCreateSchema),
     defaultValues: { name: squad.name, sport: squad.sport ?? "" },
@@ -35,7 +34,7 @@ function RenameForm({ squad, onSaved }: { squad: Squad; onSaved: (message: strin
   async function onSubmit(values: NameInput) {
     setFailure(null);
     try {
-      await patch(squad.id, values);
+      await update.mutateAsync(values);
       onSaved(`The squad is now called ${values.name}.`);
     } catch (error) {
       setFailure(applyServerErrors(error, setError, ["name", "sport"]));
@@ -59,22 +58,16 @@ function RenameForm({ squad, onSaved }: { squad: Squad; onSaved: (message: strin
 }
 
 function CoachPicker({ squad, onSaved }: { squad: Squad; onSaved: (message: string) => void }) {
-  const { data, error, isPending } = useApi<{ coaches: Person[] }>("/api/coaches");
+  const { data, error, isPending } = useQuery(coachQueries.list());
   const [chosen, setChosen] = useState<Set<number>>(() => new Set(squad.coaches.map((c) => c.id)));
-  const [failure, setFailure] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
+  const update = useUpdateSquad(squad.id);
+  const failure = update.error ? update.error.message : null;
 
-  async function save() {
-    setBusy(true);
-    setFailure(null);
-    try {
-      await patch(squad.id, { coachUserIds: [...chosen] });
-      onSaved(chosen.size === 0 ? "The squad has no coach assigned now." : `Coaches saved (${chosen.size}).`);
-    } catch (e) {
-      setFailure(e instanceof Error ? e.message : "The coaches could not be saved.");
-    } finally {
-      setBusy(false);
-    }
+  function save() {
+    update.mutate(
+      { coachUserIds: [...chosen] },
+      { onSuccess: () => onSaved(chosen.size === 0 ? "The squad has no coach assigned now." : `Coaches saved (${chosen.size}).`) },
+    );
   }
 
   return (
@@ -83,10 +76,10 @@ function CoachPicker({ squad, onSaved }: { squad: Squad; onSaved: (message: stri
       <p className="text-sm text-ink-soft">Coaches see and edit only the squads they are assigned to.</p>
       {isPending && <p role="status" className="text-sm text-ink-soft">Loading coaches…</p>}
       {error && <FormAlert message={`Coaches could not load: ${error.message}`} />}
-      {data && data.coaches.length === 0 && <p className="text-sm">No member has the coach role yet.</p>}
-      {data && data.coaches.length > 0 && (
+      {data && data.length === 0 && <p className="text-sm">No member has the coach role yet.</p>}
+      {data && data.length > 0 && (
         <ul className="max-h-48 space-y-1 overflow-y-auto rounded-md border border-line p-2">
-          {data.coaches.map((coach) => (
+          {data.map((coach) => (
             <li key={coach.id}>
               <label className="flex items-center gap-2 text-sm">
                 <input
@@ -107,23 +100,25 @@ function CoachPicker({ squad, onSaved }: { squad: Squad; onSaved: (message: stri
         </ul>
       )}
       <FormAlert message={failure} />
-      <button type="button" className="btn-quiet" disabled={busy || !data} onClick={save}>Save coaches</button>
+      <button type="button" className="btn-quiet" disabled={update.isPending || !data} onClick={save}>Save coaches</button>
     </fieldset>
   );
 }
 
 function ArchiveSquad({ squad, onSaved }: { squad: Squad; onSaved: (message: string) => void }) {
   const [confirming, setConfirming] = useState(false);
-  const [failure, setFailure] = useState<string | null>(null);
-  async function toggle() {
-    setFailure(null);
-    try {
-      await patch(squad.id, { archived: !squad.archived });
-      onSaved(squad.archived ? `${squad.name} was restored.` : `${squad.name} was archived.`);
-      setConfirming(false);
-    } catch (e) {
-      setFailure(e instanceof Error ? e.message : "The change failed.");
-    }
+  const update = useUpdateSquad(squad.id);
+  const failure = update.error ? update.error.message : null;
+  function toggle() {
+    update.mutate(
+      { archived: !squad.archived },
+      {
+        onSuccess: () => {
+          onSaved(squad.archived ? `${squad.name} was restored.` : `${squad.name} was archived.`);
+          setConfirming(false);
+        },
+      },
+    );
   }
   return (
     <div className="space-y-2 border-t border-line pt-4">

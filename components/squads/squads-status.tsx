@@ -8,11 +8,11 @@ export function SquadsStatus({
   query,
   role,
 }: {
-  query: QueryState & { data?: { squads: unknown[] } };
+  query: QueryState & { data?: unknown[] };
   role: Role;
 }) {
   const none = role === "coach" ? "You are not assigned to a squad yet. Ask your head of performance to add you." : "No squads yet.";
   return (
-    <QueryStatus query={query} loading="Loading squads…" failure="Squads could not load" empty={query.data?.squads.length === 0 && none} />
+    <QueryStatus query={query} loading="Loading squads…" failure="Squads could not load" empty={query.data?.length === 0 && none} />
   );
 }

@@ -6,8 +6,8 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { numberOrNull, numberRequired } from "@/lib/decimal";
 import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
-import type { TestItem, TestRow } from "@/lib/client/api-types";
-import { fetchJson } from "@/hooks/use-api";
+import { useCreateTest, useUpdateTest } from "@/hooks/use-writes";
+import type { TestItem } from "@/lib/client/queries";
 import { testCreateSchema, type TestCreateInput, type TestUpdateInput } from "@/lib/validation/tests";
 
 type FormInput = z.input<typeof testCreateSchema>;
@@ -36,8 +36,10 @@ function defaultsFor(test: TestItem | null): Record<string, unknown> {
 }
 
 /** Create or edit a test of the Test library. Editing sends the version that was read. */
-export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (saved: TestRow) => void }) {
+export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (saved: { name: string }) => void }) {
   const [failure, setFailure] = useState<string | null>(null);
+  const create = useCreateTest();
+  const update = useUpdateTest();
   const {
     register,
     handleSubmit,
@@ -55,13 +57,11 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
   async function onSubmit(values: TestCreateInput) {
     setFailure(null);
     try {
-      const saved = test
-        ? await fetchJson<{ test: TestRow }>(`/api/tests/${test.id}`, {
-            method: "PATCH",
-            body: JSON.stringify({ ...values, version: test.version } satisfies TestUpdateInput),
-          })
-        : await fetchJson<{ test: TestRow }>("/api/tests", { method: "POST", body: JSON.stringify(values) });
-      onDone(saved.test);
+      onDone(
+        test
+          ? await update.mutateAsync({ testId: test.id, input: { ...values, version: test.version } satisfies TestUpdateInput })
+          : await create.mutateAsync(values),
+      );
     } catch (error) {
       setFailure(applyServerErrors(error, setError, FIELDS));
     }

@@ -4,9 +4,8 @@ import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
 import { TableCard, type Column } from "@/components/table-card";
-import type { TestItem, TestRow } from "@/lib/client/api-types";
-import { useApi } from "@/hooks/use-api";
-import { useInvalidate } from "@/hooks/use-invalidate";
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
+import { type TestItem, testQueries } from "@/lib/client/queries";
 import { TestForm } from "./test-form";
 import { TestRowActions } from "./test-row-actions";
 import { directionWords, rangeWords, swcWords, typicalErrorWords } from "@/lib/words/tests";
@@ -27,14 +26,11 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
   const [showArchived, setShowArchived] = useState(false);
   const [editing, setEditing] = useState<TestItem | "new" | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
-  const url = showArchived ? "/api/tests?archived=include" : "/api/tests";
-  const tests = useApi<{ tests: TestItem[] }>(url);
-  const invalidate = useInvalidate();
+  const tests = useQuery({ ...testQueries.list({ archived: showArchived }), placeholderData: keepPreviousData });
 
-  function saved(test: TestRow) {
+  function saved(test: { name: string }) {
     setNotice(editing === "new" ? `${test.name} was added to the Test library.` : `${test.name} was saved.`);
     setEditing(null);
-    void invalidate("/api/tests");
   }
 
   return (
@@ -69,11 +65,11 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
         query={tests}
         loading="Loading the Test library…"
         failure="The Test library could not load"
-        empty={tests.data?.tests.length === 0 && `No tests yet.${canEdit ? " Add the first one with “New test”." : ""}`}
+        empty={tests.data?.length === 0 && `No tests yet.${canEdit ? " Add the first one with “New test”." : ""}`}
       />
-      {tests.data && tests.data.tests.length > 0 && (
+      {tests.data && tests.data.length > 0 && (
         <TableCard columns={canEdit ? [...COLUMNS, { label: "Actions", srOnly: true }] : COLUMNS}>
-          {tests.data.tests.map((test) => {
+          {tests.data.map((test) => {
             const dir = directionWords(test.direction);
             const te = typicalErrorWords(test);
             const range = rangeWords(test);

@@ -1,9 +1,8 @@
 "use client";
 
 import { useState } from "react";
-import type { TestItem } from "@/lib/client/api-types";
-import { fetchJson } from "@/hooks/use-api";
-import { useInvalidate } from "@/hooks/use-invalidate";
+import { useDeleteTest, useUpdateTest } from "@/hooks/use-writes";
+import type { TestItem } from "@/lib/client/queries";
 
 /** Edit, archive or restore a test; delete is offered only while no result uses it. */
 export function TestRowActions({
@@ -15,40 +14,36 @@ export function TestRowActions({
   onEdit: () => void;
   onNotice: (message: string) => void;
 }) {
-  const [busy, setBusy] = useState(false);
   const [confirmDelete, setConfirmDelete] = useState(false);
-  const invalidate = useInvalidate();
-
-  async function run(action: () => Promise<string>) {
-    setBusy(true);
-    try {
-      onNotice(await action());
-    } catch (error) {
-      onNotice(`${test.name}: ${error instanceof Error ? error.message : "the change failed"}`);
-    } finally {
-      await invalidate("/api/tests");
-      setBusy(false);
-      setConfirmDelete(false);
-    }
-  }
+  const update = useUpdateTest();
+  const remove = useDeleteTest();
+  const busy = update.isPending || remove.isPending;
+  const settled = { onError: (error: Error) => onNotice(`${test.name}: ${error.message}`), onSettled: () => setConfirmDelete(false) };
 
   const setArchived = (archived: boolean) =>
-    run(async () => {
-      await fetchJson(`/api/tests/${test.id}`, { method: "PATCH", body: JSON.stringify({ archived, version: test.version }) });
-      return archived ? `${test.name} was archived. Its results stay; it is no longer offered for new sessions.` : `${test.name} was restored.`;
-    });
+    update.mutate(
+      { testId: test.id, input: { archived, version: test.version } },
+      {
+        ...settled,
+        onSuccess: () =>
+          onNotice(
+            archived ? `${test.name} was archived. Its results stay; it is no longer offered for new sessions.` : `${test.name} was restored.`,
+          ),
+      },
+    );
 
-  const remove = () =>
-    run(async () => {
-      const answer = await fetchJson<{ deleted?: boolean; archived?: boolean }>(`/api/tests/${test.id}`, { method: "DELETE" });
-      return answer.archived ? `${test.name} has results, so it was archived instead of deleted.` : `${test.name} was deleted.`;
+  const deleteTest = () =>
+    remove.mutate(test.id, {
+      ...settled,
+      onSuccess: (answer) =>
+        onNotice("archived" in answer ? `${test.name} has results, so it was archived instead of deleted.` : `${test.name} was deleted.`),
     });
 
   if (confirmDelete) {
     return (
       <div className="flex items-center justify-end gap-2 whitespace-nowrap">
         <span className="text-xs">Delete for good?</span>
-        <button type="button" className="btn-quiet px-2 py-1 text-xs" disabled={busy} onClick={remove}>Delete</button>
+        <button type="button" className="btn-quiet px-2 py-1 text-xs" disabled={busy} onClick={deleteTest}>Delete</button>
         <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setConfirmDelete(false)}>Keep</button>
       </div>
     );

@@ -18,3 +18,10 @@ export async function pageGuard(options: GuardOptions = {}) {
     throw error;
   }
 }
+
+/** A record id from the URL; anything but a positive integer is simply not found. */
+export function pageId(segment: string): number {
+  const id = Number(segment);
+  if (!Number.isSafeInteger(id) || id <= 0) notFound();
+  return id;
+}

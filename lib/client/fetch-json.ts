@@ -1,4 +1,4 @@
-// Apart from use-api so that form-bits (and so the sign-in page, which has no QueryClient) does not load React Query.
+// Plain fetch, without React Query, so the sign-in page (which has no QueryClient) can use it too.
 
 export class ApiClientError extends Error {
   constructor(

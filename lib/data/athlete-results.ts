@@ -5,27 +5,12 @@ import { results, testingSessions, tests } from "@/db/schema";
 import type { Actor } from "./actors";
 import { sessionScope } from "./scope";
 
-export type AthleteResult = {
-  id: number;
-  sessionId: number;
-  date: string;
-  phase: string;
-  status: string;
-  testId: number;
-  testName: string;
-  unit: string;
-  decimals: number;
-  direction: string;
-  trials: (number | null)[];
-  value: number | null;
-  flag: string | null;
-};
 
 /**
  * One athlete's results over time. The caller must already have the athlete in reach;
  * the session scope still applies, so an athlete sees only published sessions.
  */
-export async function listAthleteResults(actor: Actor, athleteId: number): Promise<AthleteResult[]> {
+export async function listAthleteResults(actor: Actor, athleteId: number) {
   return getDb()
     .select({
       id: results.id,

@@ -237,7 +237,7 @@ export async function listSessionAudit(actor: Actor, sessionId: number, limit = 
       testName: ref?.testId ? testNames.get(ref.testId) ?? null : null,
       before: view(e.before),
       after: view(e.after),
-      details: e.action === "results.import" ? e.after : undefined,
+      details: e.action === "results.import" ? (e.after as { filename?: string; rows?: number } | null) : undefined,
       undone: e.undoneAt !== null,
     };
   });

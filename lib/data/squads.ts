@@ -8,17 +8,9 @@ import { conflict, invalidInput, notFound } from "@/lib/errors";
 import type { SquadCreateInput, SquadUpdateInput } from "@/lib/validation/roster";
 import { isUniqueViolation } from "./errors";
 
-export type SquadSummary = {
-  id: number;
-  name: string;
-  sport: string | null;
-  archived: boolean;
-  athleteCount: number;
-  latestSession: { id: number; date: string; phase: string; status: string } | null;
-};
 
 /** The caller's squads with how many active athletes they hold and their latest session. */
-export async function listSquads(actor: Actor, { includeArchived = false } = {}): Promise<SquadSummary[]> {
+export async function listSquads(actor: Actor, { includeArchived = false } = {}) {
   const db = getDb();
   const where = includeArchived ? squadScope(actor) : and(squadScope(actor), eq(squads.archived, false));
   const rows = await db
@@ -58,10 +50,8 @@ export async function listSquads(actor: Actor, { includeArchived = false } = {})
     .orderBy(desc(testingSessions.id));
 
   const countBySquad = new Map(counts.map((c) => [c.squadId, c.n]));
-  const latestBySquad = new Map<number, SquadSummary["latestSession"]>();
-  for (const s of latest) {
-    if (!latestBySquad.has(s.squadId)) latestBySquad.set(s.squadId, { id: s.id, date: s.date, phase: s.phase, status: s.status });
-  }
+  const latestBySquad = new Map<number, Omit<(typeof latest)[number], "squadId">>();
+  for (const { squadId, ...session } of latest) if (!latestBySquad.has(squadId)) latestBySquad.set(squadId, session);
   return rows.map((r) => ({
     ...r,
     athleteCount: countBySquad.get(r.id) ?? 0,

@@ -1,4 +1,4 @@
-import type { SheetTest } from "@/lib/client/api-types";
+import type { SheetTest } from "@/lib/client/queries";
 
 /** Every focusable column of the sheet, left to right: each test's trial slots, then its flag. */
 export type NavColumn =

@@ -1,6 +1,6 @@
 /** Small pure helpers shared by the Session sheet hook and its cells. */
 import type { ResultFlag } from "@/lib/domain";
-import type { ResultRow, SheetData, SheetTest } from "@/lib/client/api-types";
+import type { ResultRow, SheetData, SheetTest } from "@/lib/client/queries";
 import { FLAG_LABELS } from "@/lib/labels";
 
 export type Trials = (number | null)[];

@@ -1,4 +1,4 @@
-import type { TestItem } from "@/lib/client/api-types";
+import type { TestItem } from "@/lib/client/queries";
 
 const num = (value: number) => String(Number(value.toPrecision(6)));
 

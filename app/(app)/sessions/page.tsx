@@ -1,13 +1,30 @@
+import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { SessionList } from "@/components/sessions/session-list";
-import { STAFF } from "@/lib/auth/guard";
+import { MANAGERS, STAFF } from "@/lib/auth/guard";
 import { pageGuard } from "@/lib/auth/page-guard";
+import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
+import { listSessions } from "@/lib/data/sessions";
+import { listSquads } from "@/lib/data/squads";
+import { listTests } from "@/lib/data/tests";
+import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
 
 export const metadata: Metadata = { title: "Sessions" };
 
 export default async function SessionsPage({ searchParams }: { searchParams: Promise<{ squadId?: string | string[] }> }) {
   const actor = await pageGuard({ roles: STAFF });
   const raw = (await searchParams).squadId;
-  const squadId = Number(Array.isArray(raw) ? raw[0] : raw);
-  return <SessionList role={actor.role} initialSquadId={Number.isSafeInteger(squadId) && squadId > 0 ? squadId : null} />;
+  const asked = Number(Array.isArray(raw) ? raw[0] : raw);
+  const squadId = Number.isSafeInteger(asked) && asked > 0 ? asked : null;
+  const client = serverQueryClient();
+  await Promise.all([
+    prefetch(client, squadQueries.list(), () => listSquads(actor)),
+    prefetch(client, testQueries.list({ archived: true }), () => listTests(actor, { includeArchived: true })),
+    prefetch(client, sessionQueries.list({ squadId }), () => listSessions(actor, { squadId: squadId ?? undefined })),
+  ]);
+  return (
+    <HydrationBoundary state={dehydrate(client)}>
+      <SessionList canPublish={MANAGERS.includes(actor.role)} initialSquadId={squadId} />
+    </HydrationBoundary>
+  );
 }

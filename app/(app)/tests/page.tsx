@@ -1,11 +1,21 @@
+import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { TestLibrary } from "@/components/tests/test-library";
 import { MANAGERS, STAFF } from "@/lib/auth/guard";
 import { pageGuard } from "@/lib/auth/page-guard";
+import { testQueries } from "@/lib/client/queries";
+import { listTests } from "@/lib/data/tests";
+import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
 
 export const metadata: Metadata = { title: "Test library" };
 
 export default async function TestLibraryPage() {
   const actor = await pageGuard({ roles: STAFF });
-  return <TestLibrary canEdit={MANAGERS.includes(actor.role)} />;
+  const client = serverQueryClient();
+  await prefetch(client, testQueries.list(), () => listTests(actor));
+  return (
+    <HydrationBoundary state={dehydrate(client)}>
+      <TestLibrary canEdit={MANAGERS.includes(actor.role)} />
+    </HydrationBoundary>
+  );
 }

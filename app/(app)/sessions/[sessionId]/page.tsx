@@ -1,15 +1,26 @@
+import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
 import { SessionSheet } from "@/components/sheet/session-sheet";
 import { STAFF } from "@/lib/auth/guard";
-import { pageGuard } from "@/lib/auth/page-guard";
+import { pageGuard, pageId } from "@/lib/auth/page-guard";
+import { sessionQueries } from "@/lib/client/queries";
+import { listSessionAudit } from "@/lib/data/results";
+import { getSessionSheet } from "@/lib/data/sessions";
+import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
 
 export const metadata: Metadata = { title: "Session sheet" };
 
 export default async function SessionSheetPage({ params }: { params: Promise<{ sessionId: string }> }) {
-  const { sessionId } = await params;
-  const id = Number(sessionId);
-  if (!Number.isSafeInteger(id) || id <= 0) notFound();
-  await pageGuard({ roles: STAFF, sessionId: id });
-  return <SessionSheet sessionId={id} />;
+  const sessionId = pageId((await params).sessionId);
+  const actor = await pageGuard({ roles: STAFF, sessionId });
+  const client = serverQueryClient();
+  await Promise.all([
+    prefetch(client, sessionQueries.sheet(sessionId), () => getSessionSheet(actor, sessionId)),
+    prefetch(client, sessionQueries.audit(sessionId), () => listSessionAudit(actor, sessionId)),
+  ]);
+  return (
+    <HydrationBoundary state={dehydrate(client)}>
+      <SessionSheet sessionId={sessionId} />
+    </HydrationBoundary>
+  );
 }

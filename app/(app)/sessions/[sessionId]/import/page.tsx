@@ -1,10 +1,11 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { Breadcrumbs } from "@/components/breadcrumbs";
 import { ImportFlow } from "@/components/import/import-flow";
 import { ApiError } from "@/lib/errors";
 import { STAFF } from "@/lib/auth/guard";
-import { pageGuard } from "@/lib/auth/page-guard";
+import { pageGuard, pageId } from "@/lib/auth/page-guard";
 import { getImportSession, loadImportContext } from "@/lib/data/import";
 import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
 
@@ -22,17 +23,13 @@ async function load(sessionId: number) {
 }
 
 export default async function ImportPage({ params }: { params: Promise<{ sessionId: string }> }) {
-  const { sessionId } = await params;
-  const id = Number(sessionId);
-  if (!Number.isSafeInteger(id) || id <= 0) notFound();
-  const { session, context } = await load(id);
+  const { session, context } = await load(pageId((await params).sessionId));
 
   return (
     <section aria-labelledby="import-heading" className="space-y-4">
-      <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">
-        <Link href="/sessions" className="hover:underline">Sessions</Link> <span aria-hidden>›</span>{" "}
-        <Link href={`/sessions/${session.id}`} className="hover:underline">Session sheet</Link> <span aria-hidden>›</span> Import
-      </nav>
+      <Breadcrumbs
+        trail={[{ href: "/sessions", label: "Sessions" }, { href: `/sessions/${session.id}`, label: "Session sheet" }, { label: "Import" }]}
+      />
       <div>
         <h1 id="import-heading" className="text-2xl font-bold">Import</h1>
         <p className="text-ink-soft">

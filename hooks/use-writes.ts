@@ -1,0 +1,66 @@
+"use client";
+
+/**
+ * The screens' writes as React Query mutations. Each one refreshes the query families its
+ * change can show up in (a new athlete changes a squad's count, a published session the
+ * squad's latest session), so no screen has to know which lists to reload.
+ */
+import { type QueryKey, useMutation, useQueryClient } from "@tanstack/react-query";
+import { queryKeys } from "@/lib/client/queries";
+import {
+  addAthleteRequest,
+  createSessionRequest,
+  createSquadRequest,
+  createTestRequest,
+  deleteTestRequest,
+  updateAthleteRequest,
+  updateSessionRequest,
+  updateSquadRequest,
+  updateTestRequest,
+} from "@/lib/client/writes";
+import type { AthleteUpdateInput, SquadAthleteAddInput, SquadCreateInput, SquadUpdateInput } from "@/lib/validation/roster";
+import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
+import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
+
+function useWrite<V, R>(request: (vars: V) => Promise<R>, refresh: readonly QueryKey[]) {
+  const client = useQueryClient();
+  return useMutation({
+    mutationFn: request,
+    onSettled: () => Promise.all(refresh.map((queryKey) => client.invalidateQueries({ queryKey }))),
+  });
+}
+
+const ROSTER_FAMILIES = [queryKeys.squads, queryKeys.athletes] as const;
+const SESSION_FAMILIES = [queryKeys.sessions, queryKeys.squads] as const;
+
+export const useCreateSquad = () => useWrite((input: SquadCreateInput) => createSquadRequest(input), [queryKeys.squads]);
+
+export const useUpdateSquad = (squadId: number) =>
+  useWrite((input: SquadUpdateInput) => updateSquadRequest(squadId, input), [queryKeys.squads]);
+
+export const useAddAthlete = (squadId: number) =>
+  useWrite((input: SquadAthleteAddInput) => addAthleteRequest(squadId, input), ROSTER_FAMILIES);
+
+export const useUpdateAthlete = () =>
+  useWrite(({ athleteId, input }: { athleteId: number; input: AthleteUpdateInput }) => updateAthleteRequest(athleteId, input), [
+    ...ROSTER_FAMILIES,
+    queryKeys.sessions,
+  ]);
+
+export const useCreateTest = () => useWrite((input: TestCreateInput) => createTestRequest(input), [queryKeys.tests]);
+
+export const useUpdateTest = () =>
+  useWrite(({ testId, input }: { testId: number; input: TestUpdateInput }) => updateTestRequest(testId, input), [
+    queryKeys.tests,
+    queryKeys.sessions,
+  ]);
+
+export const useDeleteTest = () => useWrite((testId: number) => deleteTestRequest(testId), [queryKeys.tests]);
+
+export const useCreateSession = () => useWrite((input: SessionCreateInput) => createSessionRequest(input), SESSION_FAMILIES);
+
+export const useUpdateSession = () =>
+  useWrite(
+    ({ sessionId, input }: { sessionId: number; input: SessionUpdateInput }) => updateSessionRequest(sessionId, input),
+    SESSION_FAMILIES,
+  );

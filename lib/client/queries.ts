@@ -1,0 +1,120 @@
+/**
+ * Every read the screens make, defined once: a structured key and a typed fetch. The data type
+ * of each query is the return type of the lib/data function its route answers with, so a page
+ * that prefetches on the server (`lib/query/prefetch.ts`) and a client that fetches over HTTP
+ * hold the same shape. Keys nest (`["sessions", 7, "audit"]` under `["sessions"]`), so a write
+ * invalidates a whole family with one prefix.
+ */
+import { queryOptions } from "@tanstack/react-query";
+import type { listSessionAudit } from "@/lib/data/results";
+import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
+import type { listAthleteResults } from "@/lib/data/athlete-results";
+import type { getSessionSheet, listSessions } from "@/lib/data/sessions";
+import type { getSquad, listCoaches, listSquads } from "@/lib/data/squads";
+import type { listTests } from "@/lib/data/tests";
+import { fetchJson } from "./fetch-json";
+
+/** What a lib/data function resolves to: the payload of the query that reads it. */
+export type Loaded<F extends (...args: never[]) => Promise<unknown>> = Awaited<ReturnType<F>>;
+
+const archivedParam = (archived: boolean) => (archived ? "?archived=include" : "");
+
+export const queryKeys = {
+  squads: ["squads"] as const,
+  athletes: ["athletes"] as const,
+  tests: ["tests"] as const,
+  sessions: ["sessions"] as const,
+  coaches: ["coaches"] as const,
+};
+
+export const squadQueries = {
+  list: ({ archived = false } = {}) =>
+    queryOptions({
+      queryKey: [...queryKeys.squads, "list", { archived }] as const,
+      queryFn: () => fetchJson<{ squads: Loaded<typeof listSquads> }>(`/api/squads${archivedParam(archived)}`).then((r) => r.squads),
+    }),
+  detail: (squadId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.squads, squadId] as const,
+      queryFn: () => fetchJson<Loaded<typeof getSquad>>(`/api/squads/${squadId}`),
+    }),
+  roster: (squadId: number, { archived = false } = {}) =>
+    queryOptions({
+      // Under the squad, so any change to the squad refreshes its roster too.
+      queryKey: [...queryKeys.squads, squadId, "athletes", { archived }] as const,
+      queryFn: () =>
+        fetchJson<{ athletes: Loaded<typeof listSquadAthletes> }>(`/api/squads/${squadId}/athletes${archivedParam(archived)}`).then(
+          (r) => r.athletes,
+        ),
+    }),
+};
+
+export const coachQueries = {
+  list: () =>
+    queryOptions({
+      queryKey: [...queryKeys.coaches] as const,
+      queryFn: () => fetchJson<{ coaches: Loaded<typeof listCoaches> }>("/api/coaches").then((r) => r.coaches),
+    }),
+};
+
+export const athleteQueries = {
+  list: () =>
+    queryOptions({
+      queryKey: [...queryKeys.athletes, "list"] as const,
+      queryFn: () => fetchJson<{ athletes: Loaded<typeof listAthletes> }>("/api/athletes").then((r) => r.athletes),
+    }),
+  detail: (athleteId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.athletes, athleteId] as const,
+      queryFn: () => fetchJson<{ athlete: Loaded<typeof getAthlete> }>(`/api/athletes/${athleteId}`).then((r) => r.athlete),
+    }),
+  results: (athleteId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.athletes, athleteId, "results"] as const,
+      queryFn: () =>
+        fetchJson<{ results: Loaded<typeof listAthleteResults> }>(`/api/athletes/${athleteId}/results`).then((r) => r.results),
+    }),
+};
+
+export const testQueries = {
+  list: ({ archived = false } = {}) =>
+    queryOptions({
+      queryKey: [...queryKeys.tests, "list", { archived }] as const,
+      queryFn: () => fetchJson<{ tests: Loaded<typeof listTests> }>(`/api/tests${archivedParam(archived)}`).then((r) => r.tests),
+    }),
+};
+
+export const sessionQueries = {
+  list: ({ squadId = null }: { squadId?: number | null } = {}) =>
+    queryOptions({
+      queryKey: [...queryKeys.sessions, "list", { squadId }] as const,
+      queryFn: () =>
+        fetchJson<{ sessions: Loaded<typeof listSessions> }>(squadId ? `/api/sessions?squadId=${squadId}` : "/api/sessions").then(
+          (r) => r.sessions,
+        ),
+    }),
+  sheet: (sessionId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.sessions, sessionId] as const,
+      queryFn: () => fetchJson<Loaded<typeof getSessionSheet>>(`/api/sessions/${sessionId}`),
+    }),
+  audit: (sessionId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.sessions, sessionId, "audit"] as const,
+      queryFn: () => fetchJson<{ events: Loaded<typeof listSessionAudit> }>(`/api/sessions/${sessionId}/audit`).then((r) => r.events),
+    }),
+};
+
+export type SquadSummary = Loaded<typeof listSquads>[number];
+export type SquadDetail = Loaded<typeof getSquad>;
+export type RosterAthlete = Loaded<typeof listSquadAthletes>[number];
+export type AthleteListItem = Loaded<typeof listAthletes>[number];
+export type AthleteDetail = Loaded<typeof getAthlete>;
+export type AthleteResult = Loaded<typeof listAthleteResults>[number];
+export type TestItem = Loaded<typeof listTests>[number];
+export type SessionListItem = Loaded<typeof listSessions>[number];
+export type SheetData = Loaded<typeof getSessionSheet>;
+export type SheetTest = SheetData["tests"][number];
+export type ResultRow = SheetData["results"][number];
+export type AuditEvent = Loaded<typeof listSessionAudit>[number];
+export type Person = Loaded<typeof listCoaches>[number];

@@ -1,0 +1,50 @@
+/**
+ * Every write the screens send, typed at both ends: the body is the input of the zod schema the
+ * route validates with, the answer the return type of the lib/data function that performs it.
+ * Components run these through React Query mutations (`hooks/use-writes.ts`), never bare.
+ */
+import type { addAthleteToSquad, updateAthlete } from "@/lib/data/athletes";
+import type { undoLastChange, writeResults } from "@/lib/data/results";
+import type { createSession, updateSession } from "@/lib/data/sessions";
+import type { createSquad, updateSquad } from "@/lib/data/squads";
+import type { createTest, deleteOrArchiveTest, updateTest } from "@/lib/data/tests";
+import type { AthleteUpdateInput, SquadAthleteAddInput, SquadCreateInput, SquadUpdateInput } from "@/lib/validation/roster";
+import type { ResultWriteInput, SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
+import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
+import { fetchJson } from "./fetch-json";
+import type { Loaded } from "./queries";
+
+const send = <T>(url: string, method: "POST" | "PATCH" | "PUT" | "DELETE", body?: unknown) =>
+  fetchJson<T>(url, { method, ...(body === undefined ? {} : { body: JSON.stringify(body) }) });
+
+export const createSquadRequest = (input: SquadCreateInput) =>
+  send<{ squad: Loaded<typeof createSquad> }>("/api/squads", "POST", input).then((r) => r.squad);
+
+export const updateSquadRequest = (squadId: number, input: SquadUpdateInput) =>
+  send<{ squad: Loaded<typeof updateSquad> }>(`/api/squads/${squadId}`, "PATCH", input).then((r) => r.squad);
+
+export const addAthleteRequest = (squadId: number, input: SquadAthleteAddInput) =>
+  send<{ athlete: Loaded<typeof addAthleteToSquad> }>(`/api/squads/${squadId}/athletes`, "POST", input).then((r) => r.athlete);
+
+export const updateAthleteRequest = (athleteId: number, input: AthleteUpdateInput) =>
+  send<{ athlete: Loaded<typeof updateAthlete> }>(`/api/athletes/${athleteId}`, "PATCH", input).then((r) => r.athlete);
+
+export const createTestRequest = (input: TestCreateInput) =>
+  send<{ test: Loaded<typeof createTest> }>("/api/tests", "POST", input).then((r) => r.test);
+
+export const updateTestRequest = (testId: number, input: TestUpdateInput) =>
+  send<{ test: Loaded<typeof updateTest> }>(`/api/tests/${testId}`, "PATCH", input).then((r) => r.test);
+
+export const deleteTestRequest = (testId: number) => send<Loaded<typeof deleteOrArchiveTest>>(`/api/tests/${testId}`, "DELETE");
+
+export const createSessionRequest = (input: SessionCreateInput) =>
+  send<{ session: Loaded<typeof createSession> }>("/api/sessions", "POST", input).then((r) => r.session);
+
+export const updateSessionRequest = (sessionId: number, input: SessionUpdateInput) =>
+  send<{ session: Loaded<typeof updateSession> }>(`/api/sessions/${sessionId}`, "PATCH", input).then((r) => r.session);
+
+export const saveResultsRequest = (sessionId: number, results: ResultWriteInput[]) =>
+  send<{ results: Loaded<typeof writeResults> }>(`/api/sessions/${sessionId}/results`, "PUT", { results }).then((r) => r.results);
+
+export const undoRequest = (sessionId: number) =>
+  send<{ undone: Loaded<typeof undoLastChange> }>(`/api/sessions/${sessionId}/undo`, "POST").then((r) => r.undone);
