@@ -27,11 +27,6 @@ export function numberRequired(raw: unknown): number {
   return value === null ? Number.NaN : value;
 }
 
-/** A number as it was recorded, without padding or rounding away what was typed. */
-export function plainNumber(value: number | null | undefined): string {
-  return value === null || value === undefined || !Number.isFinite(value) ? "" : String(value);
-}
-
 /**
  * A recorded number padded to the test's decimals so columns line up ("1.8" → "1.80"),
  * but never rounded: a value typed with more digits shows them all.

@@ -46,8 +46,5 @@ export function uploadImport<T>(
   });
 }
 
-/** The mapping fields to send with a file, as chosen in the mapping step. */
-export type MappingFields = Record<string, string>;
-
 export const formatBytes = (bytes: number) =>
   bytes < 1024 ? `${bytes} B` : bytes < 1024 * 1024 ? `${(bytes / 1024).toFixed(1)} kB` : `${(bytes / 1024 / 1024).toFixed(1)} MB`;

@@ -26,10 +26,6 @@ export function directionWords(direction: TestItem["direction"]): { arrow: strin
   return direction === "higher" ? { arrow: "↑", words: "Higher is better" } : { arrow: "↓", words: "Lower is better" };
 }
 
-export function trialRuleWords(rule: TestItem["trialRule"]): string {
-  return rule === "best" ? "Best of trials" : "Mean of trials";
-}
-
 export function typicalErrorWords(test: Pick<TestItem, "typicalError" | "typicalErrorDf" | "unit">): string | null {
   if (test.typicalError === null) return null;
   const df = test.typicalErrorDf !== null ? ` (df ${test.typicalErrorDf})` : " (df not given)";
