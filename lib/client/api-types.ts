@@ -3,11 +3,12 @@
  * Where a query in lib/data already names a shape, it is re-exported from there: type-only
  * imports are erased, so no server module reaches the client bundle.
  */
-import type { Phase, ResultFlag, SessionStatus } from "@/lib/domain";
+import type { Phase, SessionStatus } from "@/lib/domain";
 import type { ResultRow } from "@/lib/data/results";
 import type { TestRow } from "@/lib/data/tests";
 
 export type { AthleteListItem } from "@/lib/data/athletes";
+export type { AuditEvent } from "@/lib/data/audit";
 export type { AthleteResult } from "@/lib/data/athlete-results";
 export type { ResultRow } from "@/lib/data/results";
 export type { SquadSummary } from "@/lib/data/squads";
@@ -67,19 +68,3 @@ export type SheetData = {
 };
 
 export type ResultConflict = { athleteId: number; testId: number; current: ResultRow | null };
-
-export type AuditSnapshot = { trials: (number | null)[]; flag: ResultFlag | null; note: string | null };
-
-export type AuditEvent = {
-  id: number;
-  at: number;
-  actorName: string | null;
-  athleteName: string | null;
-  testName: string | null;
-  action: string;
-  before: AuditSnapshot | null;
-  after: AuditSnapshot | null;
-  /** For a file import: what was imported. */
-  details?: { filename?: string; rows?: number } | null;
-  undone: boolean;
-};
