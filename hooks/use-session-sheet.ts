@@ -4,11 +4,11 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useCallback, useMemo, useRef, useState } from "react";
 import { parseDecimal } from "@/lib/decimal";
 import {
-  cellKey, padTrials, sameWanted, trialKey, trimTrials, wantedOf, withRow, type Wanted,
+  cellKey, padTrials, sameWanted, trialKey, wantedOf, withRow, type Wanted,
 } from "@/lib/sheet/model";
-import type { ResultFlag } from "@/lib/domain";
+import { MAX_TRIALS, type ResultFlag } from "@/lib/domain";
 import type { ResultConflict, ResultRow, SheetData } from "@/lib/client/api-types";
-import { reduceTrials } from "@/lib/trials";
+import { reduceTrials, trimTrials } from "@/lib/trials";
 import { ApiClientError, fetchJson, useApi } from "./use-api";
 
 export type CellState =
@@ -217,7 +217,7 @@ export function useSessionSheet(sessionId: number) {
   /** Keep the server's value: drop ours. */
   function takeTheirs(athleteId: number, testId: number) {
     setCell(cellKey(athleteId, testId), null);
-    clearInvalid(Array.from({ length: 10 }, (_, i) => trialKey(athleteId, testId, i)));
+    clearInvalid(Array.from({ length: MAX_TRIALS }, (_, i) => trialKey(athleteId, testId, i)));
   }
 
   /** Retry a failed write, or overwrite after a conflict: the version now comes from their row. */
