@@ -1,7 +1,7 @@
 /** Results of a session: the rows the Session sheet reads, and its batch saves. */
 import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
-import { getDb, writeTransaction, type Reader, type Transaction as Tx } from "@/db/client";
+import { writeTransaction, type Reader, type Transaction as Tx } from "@/db/client";
 import { results, sessionTests, squadAthletes, testingSessions, tests, users } from "@/db/schema";
 import { canEditSession } from "@/lib/auth/permissions";
 import type { ResultFlag } from "@/lib/domain";
@@ -27,8 +27,10 @@ export type ResultRow = {
 
 const key = (athleteId: number, testId: number) => `${athleteId}:${testId}`;
 
-export async function listResultRows(sessionId: number, reader: Reader = getDb(), athleteIds?: number[]): Promise<ResultRow[]> {
-  const where = athleteIds ? and(eq(results.sessionId, sessionId), inArray(results.athleteId, athleteIds)) : eq(results.sessionId, sessionId);
+/** A session's results (or some athletes' of them); the caller has checked the session is in reach. */
+export async function listResultRows(reader: Reader, actor: Actor, sessionId: number, athleteIds?: number[]): Promise<ResultRow[]> {
+  const inSession = and(eq(results.sessionId, sessionId), eq(results.organizationId, actor.organizationId));
+  const where = athleteIds ? and(inSession, inArray(results.athleteId, athleteIds)) : inSession;
   const rows = await reader
     .select({
       id: results.id,
@@ -95,7 +97,7 @@ export async function writeResults(actor: Actor, sessionId: number, inputs: Resu
     const session = await loadWritableSession(tx, actor, sessionId);
     const testById = await validateWrites(tx, session, inputs);
     const athleteIds = [...new Set(inputs.map((i) => i.athleteId))];
-    const current = new Map((await listResultRows(sessionId, tx, athleteIds)).map((r) => [key(r.athleteId, r.testId), r]));
+    const current = new Map((await listResultRows(tx, actor, sessionId, athleteIds)).map((r) => [key(r.athleteId, r.testId), r]));
 
     const conflicts = inputs
       .filter((input) => (current.get(key(input.athleteId, input.testId))?.version ?? null) !== input.version)
@@ -140,6 +142,6 @@ export async function writeResults(actor: Actor, sessionId: number, inputs: Resu
       });
     }
     const keys = new Set(inputs.map((i) => key(i.athleteId, i.testId)));
-    return (await listResultRows(sessionId, tx, athleteIds)).filter((r) => keys.has(key(r.athleteId, r.testId)));
+    return (await listResultRows(tx, actor, sessionId, athleteIds)).filter((r) => keys.has(key(r.athleteId, r.testId)));
   });
 }

@@ -107,7 +107,7 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
   const withResult = db.select({ id: results.athleteId }).from(results).where(eq(results.sessionId, sessionId));
   const [battery, resultRows, athleteList] = await Promise.all([
     sessionBattery(sessionId),
-    listResultRows(sessionId),
+    listResultRows(db, actor, sessionId),
     // Archived athletes stay on the sheet only where they already have a result.
     db
       .select({ id: athletes.id, name: athletes.name, position: athletes.position })

@@ -20,7 +20,7 @@ export async function undoLastChange(actor: Actor, sessionId: number) {
     const event = await lastUndoableChange(tx, actor, sessionId);
     if (!event) throw notFound("A change of yours to undo");
     const { before, after } = event;
-    const cell = async () => (await listResultRows(sessionId, tx, [after.athleteId])).find((r) => r.testId === after.testId);
+    const cell = async () => (await listResultRows(tx, actor, sessionId, [after.athleteId])).find((r) => r.testId === after.testId);
     const row = await cell();
     // Compared by content, not version: an earlier undo bumps the version but leaves the
     // cell exactly as this change wrote it, so undo can walk back through several changes.
