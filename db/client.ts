@@ -4,6 +4,9 @@ import { type Database, databaseUrl, openDatabase, type Transaction } from "./co
 
 export type { Database, Transaction } from "./connection";
 
+/** What a read needs: the database itself, or the transaction a write is running in. */
+export type Reader = Pick<Database, "select">;
+
 type Cached = { url: string; client: Client; db: Database; writes: Promise<unknown> };
 
 // Hot reload in development re-evaluates modules; keeping the client on globalThis

@@ -14,7 +14,18 @@ import {
   uniqueIndex,
 } from "drizzle-orm/sqlite-core";
 
-import { DIRECTIONS, PHASES, RESULT_FLAGS, ROLES, SESSION_STATUSES, SEXES, SWC_METHODS, TRIAL_RULES } from "../lib/domain";
+import {
+  AUDIT_ACTIONS,
+  AUDIT_ENTITY_TYPES,
+  DIRECTIONS,
+  PHASES,
+  RESULT_FLAGS,
+  ROLES,
+  SESSION_STATUSES,
+  SEXES,
+  SWC_METHODS,
+  TRIAL_RULES,
+} from "../lib/domain";
 
 export type { Direction, Phase, ResultFlag, Role, SessionStatus, Sex, SwcMethod, TrialRule } from "../lib/domain";
 
@@ -285,8 +296,8 @@ export const auditEvents = sqliteTable(
       .notNull()
       .references(() => organizations.id, { onDelete: "cascade" }),
     actorUserId: integer("actor_user_id").references(() => users.id, { onDelete: "set null" }),
-    action: text("action").notNull(),
-    entityType: text("entity_type").notNull(),
+    action: text("action", { enum: AUDIT_ACTIONS }).notNull(),
+    entityType: text("entity_type", { enum: AUDIT_ENTITY_TYPES }).notNull(),
     entityId: integer("entity_id"),
     /** Session the change belongs to, so a sheet can list and undo its own changes. */
     sessionId: integer("session_id"),

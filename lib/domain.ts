@@ -27,3 +27,37 @@ export type ResultFlag = (typeof RESULT_FLAGS)[number];
 
 export const SEXES = ["female", "male", "other"] as const;
 export type Sex = (typeof SEXES)[number];
+
+/** No test takes more than this many trials in one session: the Session sheet, the Test library and Import agree. */
+export const MAX_TRIALS = 10;
+
+/**
+ * Every change the audit trail records. A new action is added here first, so that each place
+ * that words or filters actions (the Recent changes list among them) fails to compile until it
+ * knows the new one.
+ */
+export const AUDIT_ACTIONS = [
+  "session.create",
+  "session.update",
+  "session.publish",
+  "result.create",
+  "result.update",
+  "result.undo",
+  "results.import",
+  "squad.create",
+  "squad.update",
+  "roster.add",
+  "athlete.update",
+  "test.create",
+  "test.update",
+  "test.archive",
+  "test.delete",
+] as const;
+export type AuditAction = (typeof AUDIT_ACTIONS)[number];
+
+export const AUDIT_ENTITY_TYPES = ["session", "result", "upload", "squad", "athlete", "test"] as const;
+export type AuditEntityType = (typeof AUDIT_ENTITY_TYPES)[number];
+
+/** The changes a Session sheet lists under Recent changes: its scores, typed or imported. */
+export const SHEET_AUDIT_ACTIONS = ["result.create", "result.update", "result.undo", "results.import"] as const satisfies readonly AuditAction[];
+export type SheetAuditAction = (typeof SHEET_AUDIT_ACTIONS)[number];

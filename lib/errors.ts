@@ -15,6 +15,10 @@ export type ErrorCode =
   | "internal";
 
 export type FieldErrors = Record<string, string>;
+/**
+ * A problem in one row of the input: an index into a batch of results, or in a file the
+ * spreadsheet row (the header is row 1) with the column header.
+ */
 export type RowError = { row: number; column?: string; message: string };
 
 export type ErrorBody = {

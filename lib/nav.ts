@@ -1,15 +1,14 @@
+import { STAFF } from "@/lib/auth/permissions";
 import type { Role } from "@/lib/domain";
 
 export type NavItem = { href: string; label: string; roles: readonly Role[] };
 
-const STAFF_ROLES: readonly Role[] = ["owner", "scientist", "coach"];
-
 /** Screens by role, with our own names (PRODUCT.md §6). Only screens that exist are listed. */
 export const NAV_ITEMS: NavItem[] = [
-  { href: "/", label: "Squads", roles: STAFF_ROLES },
-  { href: "/squads", label: "Roster", roles: STAFF_ROLES },
-  { href: "/tests", label: "Test library", roles: STAFF_ROLES },
-  { href: "/sessions", label: "Sessions", roles: STAFF_ROLES },
+  { href: "/", label: "Squads", roles: STAFF },
+  { href: "/squads", label: "Roster", roles: STAFF },
+  { href: "/tests", label: "Test library", roles: STAFF },
+  { href: "/sessions", label: "Sessions", roles: STAFF },
   { href: "/", label: "My progress", roles: ["athlete"] },
 ];
 

@@ -34,3 +34,10 @@ export function trialSpread(trials: readonly (number | null)[]): number | null {
   }
   return count < 2 ? null : max - min;
 }
+
+/** Trailing empty slots carry no information; keeping them would make equal results look different. */
+export function trimTrials(trials: readonly (number | null)[]): (number | null)[] {
+  let end = trials.length;
+  while (end > 0 && trials[end - 1] === null) end--;
+  return trials.slice(0, end);
+}

@@ -3,6 +3,7 @@ import type { Metadata } from "next";
 import { AthleteHome } from "@/components/athlete-home";
 import { SquadsOverview } from "@/components/squads-overview";
 import { pageGuard } from "@/lib/auth/page-guard";
+import { isAthlete } from "@/lib/auth/permissions";
 import { listAthleteResults } from "@/lib/data/athlete-results";
 import { listSquads } from "@/lib/data/squads";
 import { athleteQueries, squadQueries } from "@/lib/client/queries";
@@ -13,7 +14,7 @@ export const metadata: Metadata = { title: "Home" };
 export default async function HomePage() {
   const actor = await pageGuard();
   const client = serverQueryClient();
-  if (actor.role === "athlete") {
+  if (isAthlete(actor)) {
     const { athleteId } = actor;
     if (athleteId) await prefetch(client, athleteQueries.results(athleteId), () => listAthleteResults(actor, athleteId));
     return (

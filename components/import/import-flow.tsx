@@ -5,7 +5,7 @@ import { useState } from "react";
 import { ApiClientError } from "@/lib/client/fetch-json";
 import { queryKeys } from "@/lib/client/queries";
 import type { ImportCommitted, ImportPreview, ReplacementRow } from "@/lib/import/summary";
-import type { ImportRowError } from "@/lib/import/types";
+import type { RowError } from "@/lib/errors";
 import { FilePicker } from "./file-picker";
 import { ImportDone, PreviewFacts } from "./import-summary";
 import { draftFromPreview, fieldsOf, type MappingDraft } from "@/lib/import/mapping-draft";
@@ -15,7 +15,7 @@ import { ProblemList, ReplacementList, WarningList } from "./problem-list";
 import { ProgressBar } from "./progress-bar";
 import { uploadImport, type UploadProgress } from "@/lib/client/upload";
 
-type ErrorBody = { error?: { rows?: ImportRowError[]; details?: { replacements?: ReplacementRow[]; errorCount?: number } } };
+type ErrorBody = { error?: { rows?: RowError[]; details?: { replacements?: ReplacementRow[]; errorCount?: number } } };
 
 const bodyOf = (error: unknown): ErrorBody | null => (error instanceof ApiClientError ? (error.body as ErrorBody | null) : null);
 

@@ -2,7 +2,8 @@
 
 import { useState } from "react";
 import type { ReplacementRow } from "@/lib/import/summary";
-import type { ImportRowError, UnknownAthlete, UnknownTest } from "@/lib/import/types";
+import type { UnknownAthlete, UnknownTest } from "@/lib/import/types";
+import type { RowError } from "@/lib/errors";
 
 const rowsText = (rows: number[], count: number) =>
   `${rows.length === 1 ? "row" : "rows"} ${rows.join(", ")}${count > rows.length ? ` and ${count - rows.length} more` : ""}`;
@@ -16,7 +17,7 @@ export function ProblemList({
   title,
   unknownAthleteCount,
 }: {
-  errors: ImportRowError[];
+  errors: RowError[];
   errorCount: number;
   unknownAthletes: UnknownAthlete[];
   unknownTests: UnknownTest[];
@@ -102,7 +103,7 @@ export function ProblemList({
   );
 }
 
-export function WarningList({ warnings, count }: { warnings: ImportRowError[]; count: number }) {
+export function WarningList({ warnings, count }: { warnings: RowError[]; count: number }) {
   if (count === 0) return null;
   return (
     <details className="card bg-band/40 p-4">

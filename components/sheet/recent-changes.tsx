@@ -2,9 +2,10 @@
 
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { type AuditEvent, sessionQueries } from "@/lib/client/queries";
+import type { SheetAuditAction } from "@/lib/domain";
 import { describeEntry, timeWords } from "@/lib/sheet/model";
 
-const ACTION_WORDS: Record<string, string> = {
+const ACTION_WORDS: Record<Exclude<SheetAuditAction, "results.import">, string> = {
   "result.create": "entered",
   "result.update": "changed",
   "result.undo": "undid a change to",
@@ -22,7 +23,7 @@ function EventText({ e }: { e: AuditEvent }) {
   }
   return (
     <>
-      <span className="font-semibold">{e.actorName ?? "Someone"}</span> {ACTION_WORDS[e.action] ?? e.action}{" "}
+      <span className="font-semibold">{e.actorName ?? "Someone"}</span> {ACTION_WORDS[e.action]}{" "}
       {e.athleteName ?? "an athlete"} · {e.testName ?? "a test"}:{" "}
       <span className={`num ${e.undone ? "line-through" : ""}`}>
         {describeEntry(e.before)} → {describeEntry(e.after)}

@@ -5,8 +5,8 @@ import { useCallback, useRef, useState } from "react";
 import { ApiClientError } from "@/lib/client/fetch-json";
 import type { ResultRow } from "@/lib/client/queries";
 import { saveResultsRequest } from "@/lib/client/writes";
-import { cellKey, trimTrials, type Wanted } from "@/lib/sheet/model";
-import { reduceTrials } from "@/lib/trials";
+import { cellKey, type Wanted } from "@/lib/sheet/model";
+import { reduceTrials, trimTrials } from "@/lib/trials";
 import type { SheetCache } from "./use-sheet-cache";
 
 export type CellState =

@@ -2,7 +2,7 @@ import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
 import { ApiError, invalidInput, type ErrorBody, type FieldErrors } from "@/lib/errors";
 
-export function zodFieldErrors(error: ZodError): FieldErrors {
+function zodFieldErrors(error: ZodError): FieldErrors {
   const fields: FieldErrors = {};
   for (const issue of error.issues) {
     const key = issue.path.join(".") || "_";
@@ -11,7 +11,7 @@ export function zodFieldErrors(error: ZodError): FieldErrors {
   return fields;
 }
 
-export function errorResponse(error: unknown): NextResponse<ErrorBody> {
+function errorResponse(error: unknown): NextResponse<ErrorBody> {
   if (error instanceof ApiError) return NextResponse.json(error.toBody(), { status: error.status });
   if (error instanceof ZodError) {
     return NextResponse.json(invalidInput("Some fields need attention.", zodFieldErrors(error)).toBody(), { status: 422 });
@@ -62,28 +62,35 @@ export function withApi<P = Record<string, string>>(
 }
 
 /** The largest JSON body any route takes (a 5000-cell sheet save is well under 1 MB). */
-export const MAX_JSON_BYTES = 2 * 1024 * 1024;
+const MAX_JSON_BYTES = 2 * 1024 * 1024;
 
-const tooLarge = () => new ApiError(413, "payload_too_large", "The request is larger than 2 MB. Send fewer results at once.");
-
-/** Reads the body as text, stopping as soon as it passes `max` bytes, whatever Content-Length claims. */
-async function readCappedText(request: Request, max: number): Promise<string> {
+/**
+ * Reads the body, stopping as soon as it passes `max` bytes: neither a missing nor a false
+ * Content-Length gets a larger body into memory.
+ */
+export async function readCappedBytes(request: Request, max: number, tooLargeMessage: string): Promise<Uint8Array> {
+  const tooLarge = () => new ApiError(413, "payload_too_large", tooLargeMessage);
   if (Number(request.headers.get("content-length") ?? 0) > max) throw tooLarge();
-  if (!request.body) return "";
+  if (!request.body) return new Uint8Array(0);
   const reader = request.body.getReader();
   const chunks: Uint8Array[] = [];
   let total = 0;
   for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    total += value.byteLength;
+    let part: ReadableStreamReadResult<Uint8Array>;
+    try {
+      part = await reader.read();
+    } catch {
+      throw new ApiError(400, "bad_request", "The request was interrupted before it was complete. Try again.");
+    }
+    if (part.done) break;
+    total += part.value.byteLength;
     if (total > max) {
-      await reader.cancel();
+      await reader.cancel().catch(() => undefined);
       throw tooLarge();
     }
-    chunks.push(value);
+    chunks.push(part.value);
   }
-  return Buffer.concat(chunks).toString("utf8");
+  return Buffer.concat(chunks);
 }
 
 /** Reads a JSON body and validates it; malformed JSON is a 400 and an oversized one a 413, never a 500. */
@@ -92,7 +99,8 @@ export async function readJson<T>(request: Request, schema: ZodType<T>): Promise
   if (!type.includes("application/json")) {
     throw new ApiError(415, "unsupported_media_type", "Send the body as JSON (Content-Type: application/json).");
   }
-  const text = await readCappedText(request, MAX_JSON_BYTES);
+  const bytes = await readCappedBytes(request, MAX_JSON_BYTES, "The request is larger than 2 MB. Send fewer results at once.");
+  const text = new TextDecoder().decode(bytes);
   let body: unknown;
   try {
     body = JSON.parse(text);

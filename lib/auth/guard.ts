@@ -4,17 +4,14 @@
  */
 import "server-only";
 import type { Role } from "@/lib/domain";
-import { forbidden, notFound, unauthenticated, ApiError } from "@/lib/errors";
+import { forbidden, notFound, unauthenticated } from "@/lib/errors";
 import { loadActor, type Actor } from "@/lib/data/actors";
 import { athleteInReach, sessionInReach, squadInReach, testInReach } from "@/lib/data/scope";
 import { currentUserId } from "./session";
 
 export type { Actor };
-
-export const ALL_ROLES: readonly Role[] = ["owner", "scientist", "coach", "athlete"];
-export const STAFF: readonly Role[] = ["owner", "scientist", "coach"];
-export const MANAGERS: readonly Role[] = ["owner", "scientist"];
-export const OWNERS: readonly Role[] = ["owner"];
+// The role lists `roles` takes come with the guard; they are defined beside the rules they follow.
+export { MANAGERS, OWNERS, STAFF } from "./permissions";
 
 export type GuardOptions = {
   roles?: readonly Role[];
@@ -44,15 +41,5 @@ export async function authorize(actor: Actor, options: GuardOptions): Promise<vo
   ];
   for (const [id, inReach, what] of checks) {
     if (id !== undefined && !(await inReach(actor, id))) throw notFound(what);
-  }
-}
-
-/** For server actions: the same gate, answering with a plain object instead of throwing. */
-export async function guardAction(options: GuardOptions = {}) {
-  try {
-    return { ok: true as const, actor: await guard(options) };
-  } catch (error) {
-    if (error instanceof ApiError) return { ok: false as const, error: error.toBody().error };
-    throw error;
   }
 }

@@ -8,7 +8,7 @@ export const MAX_FAILURES_PER_EMAIL = 5;
  * from one address (one NAT), and a few typos by different staff must not lock everyone out.
  */
 export const MAX_FAILURES_PER_ADDRESS = 20;
-export const WINDOW_MS = 60_000;
+const WINDOW_MS = 60_000;
 
 export const THROTTLED_MESSAGE = "Too many failed sign-ins. Wait a minute, then try again.";
 

@@ -11,6 +11,12 @@ export class ApiClientError extends Error {
   }
 }
 
+/** The error an API answer carries (`{ error: { code, message } }`), or a plain one when the body has none. */
+export function apiErrorFrom(status: number, body: unknown, fallback = `Request failed (${status}).`): ApiClientError {
+  const error = (body as { error?: { code?: string; message?: string } } | null)?.error;
+  return new ApiClientError(status, error?.code ?? "unknown", error?.message ?? fallback, body);
+}
+
 /** Fetches our JSON API and turns the error shape into a thrown ApiClientError. */
 export async function fetchJson<T>(url: string, init?: RequestInit): Promise<T> {
   const response = await fetch(url, {
@@ -18,9 +24,6 @@ export async function fetchJson<T>(url: string, init?: RequestInit): Promise<T> 
     headers: { Accept: "application/json", ...(init?.body && typeof init.body === "string" ? { "Content-Type": "application/json" } : {}), ...init?.headers },
   });
   const body = await response.json().catch(() => null);
-  if (!response.ok) {
-    const error = (body as { error?: { code?: string; message?: string } } | null)?.error;
-    throw new ApiClientError(response.status, error?.code ?? "unknown", error?.message ?? `Request failed (${response.status}).`, body);
-  }
+  if (!response.ok) throw apiErrorFrom(response.status, body);
   return body as T;
 }

@@ -6,7 +6,7 @@
  * invalidates a whole family with one prefix.
  */
 import { queryOptions } from "@tanstack/react-query";
-import type { listSessionAudit } from "@/lib/data/results";
+import type { listSessionAudit } from "@/lib/data/audit";
 import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
 import type { listAthleteResults } from "@/lib/data/athlete-results";
 import type { getSessionSheet, listSessions } from "@/lib/data/sessions";

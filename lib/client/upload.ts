@@ -1,6 +1,6 @@
 "use client";
 
-import { ApiClientError } from "@/lib/client/fetch-json";
+import { ApiClientError, apiErrorFrom } from "@/lib/client/fetch-json";
 
 export type UploadProgress = { loaded: number; total: number; done: boolean };
 
@@ -39,8 +39,7 @@ export function uploadImport<T>(
         resolve(body as T);
         return;
       }
-      const error = (body as { error?: { code?: string; message?: string } } | null)?.error;
-      reject(new ApiClientError(xhr.status, error?.code ?? "unknown", error?.message ?? `The import failed (${xhr.status}).`, body));
+      reject(apiErrorFrom(xhr.status, body, `The import failed (${xhr.status}).`));
     };
     xhr.send(form);
   });

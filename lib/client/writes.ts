@@ -4,7 +4,8 @@
  * Components run these through React Query mutations (`hooks/use-writes.ts`), never bare.
  */
 import type { addAthleteToSquad, updateAthlete } from "@/lib/data/athletes";
-import type { undoLastChange, writeResults } from "@/lib/data/results";
+import type { writeResults } from "@/lib/data/results";
+import type { undoLastChange } from "@/lib/data/undo";
 import type { createSession, updateSession } from "@/lib/data/sessions";
 import type { createSquad, updateSquad } from "@/lib/data/squads";
 import type { createTest, deleteOrArchiveTest, updateTest } from "@/lib/data/tests";

@@ -2,6 +2,7 @@ import "server-only";
 import { asc, eq } from "drizzle-orm";
 import { getDb } from "@/db/client";
 import { athletes, memberships, organizations, users } from "@/db/schema";
+import { isAthlete } from "@/lib/auth/permissions";
 import { type Role } from "@/lib/domain";
 
 export type Actor = {
@@ -39,7 +40,7 @@ export async function loadActor(userId: number): Promise<Actor | null> {
     .limit(1);
   if (!row) return null;
   let athleteId: number | null = null;
-  if (row.role === "athlete") {
+  if (isAthlete(row)) {
     const [linked] = await db
       .select({ id: athletes.id, organizationId: athletes.organizationId })
       .from(athletes)

@@ -1,14 +1,15 @@
 import "server-only";
 import { and, asc, eq, inArray, notInArray } from "drizzle-orm";
 import { getDb, writeTransaction } from "@/db/client";
-import { athletes, auditEvents, squadAthletes, squads } from "@/db/schema";
+import { athletes, squadAthletes, squads } from "@/db/schema";
 import { conflict, invalidInput, notFound } from "@/lib/errors";
 import type { AthleteCreateInput, AthleteUpdateInput, SquadAthleteAddInput } from "@/lib/validation/roster";
 import type { Actor } from "./actors";
+import { recordAudit } from "./audit";
 import { isUniqueViolation } from "./errors";
 import { athleteScope, squadScope } from "./scope";
 
-export const rosterColumns = {
+const rosterColumns = {
   id: athletes.id,
   name: athletes.name,
   position: athletes.position,
@@ -53,9 +54,7 @@ export async function addAthleteToSquad(actor: Actor, squadId: number, input: Sq
       }
       await tx.insert(squadAthletes).values({ squadId, athleteId }).onConflictDoNothing();
       const [row] = await tx.select(rosterColumns).from(athletes).where(eq(athletes.id, athleteId));
-      await tx.insert(auditEvents).values({
-        organizationId: actor.organizationId, actorUserId: actor.userId, action: "roster.add", entityType: "athlete", entityId: athleteId, after: { ...row, squadId },
-      });
+      await recordAudit(tx, actor, { action: "roster.add", entity: { type: "athlete", id: athleteId }, after: { ...row, squadId } });
       return row;
     });
   } catch (error) {
@@ -88,9 +87,7 @@ export async function updateAthlete(actor: Actor, athleteId: number, input: Athl
         if (wanted.length) await tx.insert(squadAthletes).values(wanted.map((squadId) => ({ squadId, athleteId }))).onConflictDoNothing();
       }
       const [row] = await tx.select(rosterColumns).from(athletes).where(eq(athletes.id, athleteId));
-      await tx.insert(auditEvents).values({
-        organizationId: actor.organizationId, actorUserId: actor.userId, action: "athlete.update", entityType: "athlete", entityId: athleteId, before, after: { ...row, squadIds },
-      });
+      await recordAudit(tx, actor, { action: "athlete.update", entity: { type: "athlete", id: athleteId }, before, after: { ...row, squadIds } });
       return row;
     });
   } catch (error) {
@@ -99,20 +96,20 @@ export async function updateAthlete(actor: Actor, athleteId: number, input: Athl
   }
 }
 
-export async function athleteSquadIds(actor: Actor, athleteId: number) {
-  const rows = await getDb()
-    .select({ id: squadAthletes.squadId })
-    .from(squadAthletes)
-    .innerJoin(squads, eq(squads.id, squadAthletes.squadId))
-    .where(and(eq(squadAthletes.athleteId, athleteId), squadScope(actor)));
-  return rows.map((r) => r.id);
-}
-
 /** One athlete with the squads (in the caller's reach) they belong to. */
 export async function getAthlete(actor: Actor, athleteId: number) {
-  const [row] = await getDb().select(rosterColumns).from(athletes).where(and(eq(athletes.id, athleteId), athleteScope(actor)));
+  const db = getDb();
+  const [[row], squadRows] = await Promise.all([
+    db.select(rosterColumns).from(athletes).where(and(eq(athletes.id, athleteId), athleteScope(actor))),
+    // Scoped by the squad, so it reads nothing the caller could not reach on its own.
+    db
+      .select({ id: squadAthletes.squadId })
+      .from(squadAthletes)
+      .innerJoin(squads, eq(squads.id, squadAthletes.squadId))
+      .where(and(eq(squadAthletes.athleteId, athleteId), squadScope(actor))),
+  ]);
   if (!row) throw notFound("Athlete");
-  return { ...row, squadIds: await athleteSquadIds(actor, athleteId) };
+  return { ...row, squadIds: squadRows.map((r) => r.id) };
 }
 
 // Staff notes stay on the Roster: this list also answers athletes about themselves.

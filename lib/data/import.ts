@@ -4,11 +4,12 @@
  * so a failure anywhere leaves the session exactly as it was.
  */
 import "server-only";
-import { and, asc, eq, notInArray, sql } from "drizzle-orm";
-import { getDb, type Database, type Transaction as Tx, writeTransaction } from "@/db/client";
-import { athletes, auditEvents, results, squadAthletes, squads, testingSessions, tests, uploads } from "@/db/schema";
+import { and, asc, eq, sql } from "drizzle-orm";
+import { getDb, type Reader, type Transaction as Tx, writeTransaction } from "@/db/client";
+import { athletes, results, squadAthletes, squads, testingSessions, tests, uploads } from "@/db/schema";
+import { canEditSession } from "@/lib/auth/permissions";
 import { type Phase, type SessionStatus } from "@/lib/domain";
-import { ApiError, forbidden, notFound } from "@/lib/errors";
+import { ApiError, forbidden } from "@/lib/errors";
 import { analyseCsv, type Analysis } from "@/lib/import/analyse";
 import { ImportFileError, decodeCsvBytes } from "@/lib/import/decode";
 import { MAX_IMPORT_BYTES, MAX_LISTED_REPLACEMENTS, PREVIEW_ROWS, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
@@ -17,10 +18,9 @@ import { type ImportOptions, mappingRequestOf } from "@/lib/validation/import";
 import { describeReplacements, type ImportCommitted, type ImportPreview } from "@/lib/import/summary";
 import type { ExistingResult, ImportContext } from "@/lib/import/types";
 import type { Actor } from "./actors";
-import { canEditSession, sessionScope } from "./scope";
+import { recordAudit } from "./audit";
+import { findSessionInScope } from "./scope";
 import { sessionBattery } from "./sessions";
-
-type Reader = Pick<Database, "select">;
 
 export type ImportSession = {
   id: number;
@@ -36,39 +36,33 @@ export type ImportSession = {
 
 export type ImportFile = { bytes: Uint8Array; filename: string; contentType: string | null };
 
-/** The session, if the caller reaches it (scoped in the WHERE clause, like every read). */
 export async function getImportSession(actor: Actor, sessionId: number): Promise<ImportSession> {
-  const [row] = await getDb()
-    .select({
-      id: testingSessions.id,
-      organizationId: testingSessions.organizationId,
-      squadId: testingSessions.squadId,
-      squadName: squads.name,
-      date: testingSessions.date,
-      phase: testingSessions.phase,
-      status: testingSessions.status,
-    })
-    .from(testingSessions)
-    .innerJoin(squads, eq(squads.id, testingSessions.squadId))
-    .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)));
-  if (!row) throw notFound("Session");
+  const row = await findSessionInScope(getDb(), actor, sessionId, {
+    id: testingSessions.id,
+    organizationId: testingSessions.organizationId,
+    squadId: testingSessions.squadId,
+    squadName: squads.name,
+    date: testingSessions.date,
+    phase: testingSessions.phase,
+    status: testingSessions.status,
+  });
   return { ...row, canImport: canEditSession(actor, row.status) };
 }
 
 /** Battery, the rest of the organisation's Test library (names only) and the squad roster. */
 export async function loadImportContext(session: ImportSession, db: Reader = getDb()): Promise<ImportContext> {
-  const battery = await sessionBattery(session.id, db);
-  const batteryIds = battery.map((t) => t.id);
-  const others = await db
-    .select({ name: tests.name })
-    .from(tests)
-    .where(batteryIds.length ? and(eq(tests.organizationId, session.organizationId), notInArray(tests.id, batteryIds)) : eq(tests.organizationId, session.organizationId));
-  const roster = await db
-    .select({ id: athletes.id, name: athletes.name, externalId: athletes.externalId })
-    .from(squadAthletes)
-    .innerJoin(athletes, eq(athletes.id, squadAthletes.athleteId))
-    .where(and(eq(squadAthletes.squadId, session.squadId), eq(athletes.organizationId, session.organizationId)))
-    .orderBy(asc(athletes.name));
+  const [battery, allTests, roster] = await Promise.all([
+    sessionBattery(session.id, db),
+    db.select({ id: tests.id, name: tests.name }).from(tests).where(eq(tests.organizationId, session.organizationId)),
+    db
+      .select({ id: athletes.id, name: athletes.name, externalId: athletes.externalId })
+      .from(squadAthletes)
+      .innerJoin(athletes, eq(athletes.id, squadAthletes.athleteId))
+      .where(and(eq(squadAthletes.squadId, session.squadId), eq(athletes.organizationId, session.organizationId)))
+      .orderBy(asc(athletes.name)),
+  ]);
+  const inBattery = new Set(battery.map((t) => t.id));
+  const others = allTests.filter((t) => !inBattery.has(t.id));
   return { squadName: session.squadName, tests: battery, otherTestNames: others.map((t) => t.name), athletes: roster };
 }
 
@@ -236,12 +230,9 @@ async function commitImport(
         const old = existing.get(resultKey(w.athleteId, w.testId))!;
         return { athleteId: w.athleteId, testId: w.testId, trials: old.trials, value: old.value, flag: old.flag };
       });
-    await tx.insert(auditEvents).values({
-      organizationId: session.organizationId,
-      actorUserId: actor.userId,
+    await recordAudit(tx, actor, {
       action: "results.import",
-      entityType: "upload",
-      entityId: upload.id,
+      entity: { type: "upload", id: upload.id },
       sessionId: session.id,
       // The results as they were, so the import can be reviewed (or undone) later.
       before: before.length ? { results: before } : null,

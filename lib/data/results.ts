@@ -1,14 +1,16 @@
+/** Results of a session: the rows the Session sheet reads, and its batch saves. */
 import "server-only";
-import { and, desc, eq, inArray, isNull } from "drizzle-orm";
-import { getDb, writeTransaction, type Transaction as Tx } from "@/db/client";
-import { athletes, auditEvents, results, sessionTests, squadAthletes, testingSessions, tests, users } from "@/db/schema";
-import { conflict, forbidden, invalidInput, notFound, type RowError } from "@/lib/errors";
-import { reduceTrials } from "@/lib/trials";
+import { and, eq, inArray } from "drizzle-orm";
+import { writeTransaction, type Reader, type Transaction as Tx } from "@/db/client";
+import { results, sessionTests, squadAthletes, testingSessions, tests, users } from "@/db/schema";
+import { canEditSession } from "@/lib/auth/permissions";
+import type { ResultFlag } from "@/lib/domain";
+import { conflict, forbidden, invalidInput, type RowError } from "@/lib/errors";
+import { reduceTrials, trimTrials } from "@/lib/trials";
 import type { ResultWriteInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
-import { canEditSession, sessionScope } from "./scope";
-
-type Reader = ReturnType<typeof getDb> | Tx;
+import { recordAudit, type ResultSnapshot } from "./audit";
+import { findSessionInScope } from "./scope";
 
 export type ResultRow = {
   id: number;
@@ -16,19 +18,19 @@ export type ResultRow = {
   testId: number;
   trials: (number | null)[];
   value: number | null;
-  flag: "absent" | "injured" | "invalid" | null;
+  flag: ResultFlag | null;
   note: string | null;
   version: number;
   updatedAt: number;
   updatedByName: string | null;
 };
 
-type Snapshot = { athleteId: number; testId: number; trials: (number | null)[]; flag: ResultRow["flag"]; note: string | null; version: number };
-
 const key = (athleteId: number, testId: number) => `${athleteId}:${testId}`;
 
-export async function listResultRows(sessionId: number, reader: Reader = getDb(), athleteIds?: number[]): Promise<ResultRow[]> {
-  const where = athleteIds ? and(eq(results.sessionId, sessionId), inArray(results.athleteId, athleteIds)) : eq(results.sessionId, sessionId);
+/** A session's results (or some athletes' of them); the caller has checked the session is in reach. */
+export async function listResultRows(reader: Reader, actor: Actor, sessionId: number, athleteIds?: number[]): Promise<ResultRow[]> {
+  const inSession = and(eq(results.sessionId, sessionId), eq(results.organizationId, actor.organizationId));
+  const where = athleteIds ? and(inSession, inArray(results.athleteId, athleteIds)) : inSession;
   const rows = await reader
     .select({
       id: results.id,
@@ -48,19 +50,9 @@ export async function listResultRows(sessionId: number, reader: Reader = getDb()
   return rows.map((r) => ({ ...r, updatedAt: r.updatedAt.getTime() }));
 }
 
-/** Empty trailing slots carry no information; keeping them would make equal rows look different. */
-function trimTrials(trials: (number | null)[]) {
-  let end = trials.length;
-  while (end > 0 && trials[end - 1] === null) end--;
-  return trials.slice(0, end);
-}
-
-async function loadWritableSession(tx: Tx, actor: Actor, sessionId: number) {
-  const [session] = await tx
-    .select({ id: testingSessions.id, status: testingSessions.status, squadId: testingSessions.squadId })
-    .from(testingSessions)
-    .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)));
-  if (!session) throw notFound("Session");
+/** The session, if the caller reaches it and may change its results. */
+export async function loadWritableSession(tx: Tx, actor: Actor, sessionId: number) {
+  const session = await findSessionInScope(tx, actor, sessionId, { id: testingSessions.id, status: testingSessions.status, squadId: testingSessions.squadId });
   if (!canEditSession(actor, session.status)) {
     throw forbidden("This session is published; ask a sport scientist to correct a result.");
   }
@@ -105,7 +97,7 @@ export async function writeResults(actor: Actor, sessionId: number, inputs: Resu
     const session = await loadWritableSession(tx, actor, sessionId);
     const testById = await validateWrites(tx, session, inputs);
     const athleteIds = [...new Set(inputs.map((i) => i.athleteId))];
-    const current = new Map((await listResultRows(sessionId, tx, athleteIds)).map((r) => [key(r.athleteId, r.testId), r]));
+    const current = new Map((await listResultRows(tx, actor, sessionId, athleteIds)).map((r) => [key(r.athleteId, r.testId), r]));
 
     const conflicts = inputs
       .filter((input) => (current.get(key(input.athleteId, input.testId))?.version ?? null) !== input.version)
@@ -140,105 +132,16 @@ export async function writeResults(actor: Actor, sessionId: number, inputs: Resu
           .values({ ...values, organizationId: actor.organizationId, sessionId, athleteId: input.athleteId, testId: input.testId, version })
           .returning({ id: results.id });
       }
-      const snapshot = (v: number, s: Pick<Snapshot, "trials" | "flag" | "note">): Snapshot => ({ athleteId: input.athleteId, testId: input.testId, ...s, version: v });
-      await tx.insert(auditEvents).values({
-        organizationId: actor.organizationId,
-        actorUserId: actor.userId,
+      const snapshot = (v: number, s: Pick<ResultSnapshot, "trials" | "flag" | "note">): ResultSnapshot => ({ athleteId: input.athleteId, testId: input.testId, ...s, version: v });
+      await recordAudit(tx, actor, {
         action: existing ? "result.update" : "result.create",
-        entityType: "result",
-        entityId: id,
+        entity: { type: "result", id },
         sessionId,
         before: existing ? snapshot(existing.version, existing) : null,
         after: snapshot(version, { trials, flag: input.flag, note: input.note }),
       });
     }
     const keys = new Set(inputs.map((i) => key(i.athleteId, i.testId)));
-    return (await listResultRows(sessionId, tx, athleteIds)).filter((r) => keys.has(key(r.athleteId, r.testId)));
-  });
-}
-
-const sameContent = (a: Pick<Snapshot, "trials" | "flag" | "note">, b: Pick<Snapshot, "trials" | "flag" | "note">) =>
-  JSON.stringify(a.trials) === JSON.stringify(b.trials) && a.flag === b.flag && (a.note ?? null) === (b.note ?? null);
-
-/** Reverts the caller's last sheet change in this session, unless someone changed that cell since. */
-export async function undoLastChange(actor: Actor, sessionId: number) {
-  return writeTransaction(async (tx) => {
-    await loadWritableSession(tx, actor, sessionId);
-    const [event] = await tx
-      .select({ id: auditEvents.id, entityId: auditEvents.entityId, before: auditEvents.before, after: auditEvents.after })
-      .from(auditEvents)
-      .where(
-        and(
-          eq(auditEvents.sessionId, sessionId),
-          eq(auditEvents.actorUserId, actor.userId),
-          eq(auditEvents.entityType, "result"),
-          inArray(auditEvents.action, ["result.create", "result.update"]),
-          isNull(auditEvents.undoneAt),
-        ),
-      )
-      .orderBy(desc(auditEvents.id))
-      .limit(1);
-    if (!event) throw notFound("A change of yours to undo");
-    const after = event.after as Snapshot;
-    const before = event.before as Snapshot | null;
-    const [row] = await listResultRows(sessionId, tx, [after.athleteId]).then((rows) => rows.filter((r) => r.testId === after.testId));
-    // Compared by content, not version: an earlier undo bumps the version but leaves the
-    // cell exactly as this change wrote it, so undo can walk back through several changes.
-    if (!row || !sameContent(row, after)) {
-      throw conflict(`${row?.updatedByName ?? "Someone"} changed that result after you; it was not undone.`, { current: row ?? null });
-    }
-    const [test] = await tx.select({ trialRule: tests.trialRule, direction: tests.direction }).from(tests).where(eq(tests.id, after.testId));
-    let restored: ResultRow | null = null;
-    if (before) {
-      await tx
-        .update(results)
-        .set({ trials: before.trials, value: reduceTrials(before.trials, test.trialRule, test.direction), flag: before.flag, note: before.note, updatedBy: actor.userId, updatedAt: new Date(), version: row.version + 1 })
-        .where(and(eq(results.id, row.id), eq(results.version, row.version)));
-      [restored] = (await listResultRows(sessionId, tx, [after.athleteId])).filter((r) => r.testId === after.testId);
-    } else {
-      await tx.delete(results).where(eq(results.id, row.id));
-    }
-    await tx.update(auditEvents).set({ undoneAt: new Date() }).where(eq(auditEvents.id, event.id));
-    await tx.insert(auditEvents).values({
-      organizationId: actor.organizationId, actorUserId: actor.userId, action: "result.undo", entityType: "result", entityId: row.id, sessionId,
-      before: { ...after, version: row.version }, after: restored ? { ...before!, version: restored.version } : null,
-    });
-    return { athleteId: after.athleteId, testId: after.testId, result: restored };
-  });
-}
-
-/** The session's recent changes, newest first, with names for people, athletes and tests. */
-export async function listSessionAudit(actor: Actor, sessionId: number, limit = 50) {
-  const db = getDb();
-  const events = await db
-    .select({ id: auditEvents.id, at: auditEvents.createdAt, action: auditEvents.action, actorName: users.name, before: auditEvents.before, after: auditEvents.after, undoneAt: auditEvents.undoneAt })
-    .from(auditEvents)
-    .leftJoin(users, eq(users.id, auditEvents.actorUserId))
-    .where(and(eq(auditEvents.sessionId, sessionId), eq(auditEvents.organizationId, actor.organizationId), inArray(auditEvents.entityType, ["result", "upload"])))
-    .orderBy(desc(auditEvents.id))
-    .limit(limit);
-  const snap = (v: unknown) => v as Partial<Snapshot> | null;
-  const athleteIds = [...new Set(events.map((e) => snap(e.after)?.athleteId ?? snap(e.before)?.athleteId).filter((v): v is number => typeof v === "number"))];
-  const testIds = [...new Set(events.map((e) => snap(e.after)?.testId ?? snap(e.before)?.testId).filter((v): v is number => typeof v === "number"))];
-  const athleteNames = new Map(athleteIds.length ? (await db.select({ id: athletes.id, name: athletes.name }).from(athletes).where(inArray(athletes.id, athleteIds))).map((a) => [a.id, a.name]) : []);
-  const testNames = new Map(testIds.length ? (await db.select({ id: tests.id, name: tests.name }).from(tests).where(inArray(tests.id, testIds))).map((t) => [t.id, t.name]) : []);
-  const view = (v: unknown) => {
-    const s = snap(v);
-    return s && "trials" in s ? { trials: s.trials ?? [], flag: s.flag ?? null, note: s.note ?? null } : null;
-  };
-  return events.map((e) => {
-    const ref = snap(e.after) ?? snap(e.before);
-    return {
-      id: e.id,
-      at: e.at.getTime(),
-      action: e.action,
-      actorName: e.actorName,
-      athleteName: ref?.athleteId ? athleteNames.get(ref.athleteId) ?? null : null,
-      testName: ref?.testId ? testNames.get(ref.testId) ?? null : null,
-      before: view(e.before),
-      after: view(e.after),
-      details: e.action === "results.import" ? (e.after as { filename?: string; rows?: number } | null) : undefined,
-      undone: e.undoneAt !== null,
-    };
+    return (await listResultRows(tx, actor, sessionId, athleteIds)).filter((r) => keys.has(key(r.athleteId, r.testId)));
   });
 }

@@ -4,18 +4,16 @@
  */
 import "server-only";
 import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import type { SelectResultFields } from "drizzle-orm/query-builders/select.types";
+import type { SelectedFields } from "drizzle-orm/sqlite-core";
+import { getDb, type Reader } from "@/db/client";
 import { squadAthletes, squadCoaches, squads, testingSessions, athletes, tests } from "@/db/schema";
+import { isCoach, isManager } from "@/lib/auth/permissions";
+import { notFound } from "@/lib/errors";
 import type { Actor } from "./actors";
 
-export const isManager = (actor: Actor) => actor.role === "owner" || actor.role === "scientist";
-
-/** Coaches write into draft sessions only; a published session is corrected by a scientist or the owner. */
-export const canEditSession = (actor: Actor, status: string) =>
-  isManager(actor) || (actor.role === "coach" && status === "draft");
-
 /** Squads a coach is assigned to, inside the organisation. */
-export function coachSquadIds(actor: Actor) {
+function coachSquadIds(actor: Actor) {
   return getDb()
     .select({ id: squadCoaches.squadId })
     .from(squadCoaches)
@@ -24,7 +22,7 @@ export function coachSquadIds(actor: Actor) {
 }
 
 /** Athletes reachable through a coach's squads. */
-export function coachAthleteIds(actor: Actor) {
+function coachAthleteIds(actor: Actor) {
   return getDb()
     .select({ id: squadAthletes.athleteId })
     .from(squadAthletes)
@@ -36,14 +34,14 @@ const never = sql`0 = 1`;
 export function squadScope(actor: Actor): SQL {
   const inOrg = eq(squads.organizationId, actor.organizationId);
   if (isManager(actor)) return inOrg;
-  if (actor.role === "coach") return and(inOrg, inArray(squads.id, coachSquadIds(actor)))!;
+  if (isCoach(actor)) return and(inOrg, inArray(squads.id, coachSquadIds(actor)))!;
   return never;
 }
 
 export function athleteScope(actor: Actor): SQL {
   const inOrg = eq(athletes.organizationId, actor.organizationId);
   if (isManager(actor)) return inOrg;
-  if (actor.role === "coach") return and(inOrg, inArray(athletes.id, coachAthleteIds(actor)))!;
+  if (isCoach(actor)) return and(inOrg, inArray(athletes.id, coachAthleteIds(actor)))!;
   if (actor.athleteId) return and(inOrg, eq(athletes.id, actor.athleteId))!;
   return never;
 }
@@ -52,13 +50,34 @@ export function athleteScope(actor: Actor): SQL {
 export function sessionScope(actor: Actor): SQL {
   const inOrg = eq(testingSessions.organizationId, actor.organizationId);
   if (isManager(actor)) return inOrg;
-  if (actor.role === "coach") return and(inOrg, inArray(testingSessions.squadId, coachSquadIds(actor)))!;
+  if (isCoach(actor)) return and(inOrg, inArray(testingSessions.squadId, coachSquadIds(actor)))!;
   if (!actor.athleteId) return never;
   const ownSquads = getDb()
     .select({ id: squadAthletes.squadId })
     .from(squadAthletes)
     .where(eq(squadAthletes.athleteId, actor.athleteId));
   return and(inOrg, eq(testingSessions.status, "published"), inArray(testingSessions.squadId, ownSquads))!;
+}
+
+/**
+ * The session, with the chosen columns (its squad's may be among them), if the caller reaches
+ * it; otherwise "not found", whether it exists elsewhere or not at all.
+ */
+export async function findSessionInScope<C extends SelectedFields>(
+  reader: Reader,
+  actor: Actor,
+  sessionId: number,
+  columns: C,
+): Promise<SelectResultFields<C>> {
+  // Widened for the builder, whose join types cannot follow a generic selection; an inner
+  // join leaves every column as its table declares it, which is what the signature promises.
+  const [row] = await reader
+    .select(columns as SelectedFields)
+    .from(testingSessions)
+    .innerJoin(squads, eq(squads.id, testingSessions.squadId))
+    .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)));
+  if (!row) throw notFound("Session");
+  return row as SelectResultFields<C>;
 }
 
 export async function squadInReach(actor: Actor, squadId: number): Promise<boolean> {

@@ -1,12 +1,14 @@
 import "server-only";
 import { and, asc, count, desc, eq, inArray, notInArray, or } from "drizzle-orm";
-import { getDb, writeTransaction } from "@/db/client";
-import { athletes, auditEvents, results, sessionTests, squadAthletes, squads, testingSessions, tests } from "@/db/schema";
+import { getDb, writeTransaction, type Reader } from "@/db/client";
+import { athletes, results, sessionTests, squadAthletes, squads, testingSessions, tests } from "@/db/schema";
+import { canEditSession, canPublish } from "@/lib/auth/permissions";
 import { conflict, forbidden, invalidInput, notFound } from "@/lib/errors";
 import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
+import { recordAudit } from "./audit";
 import { listResultRows } from "./results";
-import { canEditSession, isManager, sessionScope, squadScope } from "./scope";
+import { findSessionInScope, sessionScope, squadScope } from "./scope";
 
 const sessionColumns = {
   id: testingSessions.id,
@@ -30,16 +32,18 @@ export async function listSessions(actor: Actor, { squadId }: { squadId?: number
     .orderBy(desc(testingSessions.date), desc(testingSessions.id));
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.id);
-  const battery = await db
-    .select({ sessionId: sessionTests.sessionId, testId: sessionTests.testId })
-    .from(sessionTests)
-    .where(inArray(sessionTests.sessionId, ids))
-    .orderBy(asc(sessionTests.position));
-  const counts = await db
-    .select({ sessionId: results.sessionId, n: count() })
-    .from(results)
-    .where(inArray(results.sessionId, ids))
-    .groupBy(results.sessionId);
+  const [battery, counts] = await Promise.all([
+    db
+      .select({ sessionId: sessionTests.sessionId, testId: sessionTests.testId })
+      .from(sessionTests)
+      .where(inArray(sessionTests.sessionId, ids))
+      .orderBy(asc(sessionTests.position)),
+    db
+      .select({ sessionId: results.sessionId, n: count() })
+      .from(results)
+      .where(and(inArray(results.sessionId, ids), eq(results.organizationId, actor.organizationId)))
+      .groupBy(results.sessionId),
+  ]);
   const countBy = new Map(counts.map((c) => [c.sessionId, c.n]));
   return rows.map((r) => ({
     ...r,
@@ -49,7 +53,7 @@ export async function listSessions(actor: Actor, { squadId }: { squadId?: number
 }
 
 /** The battery's tests must be active tests of the caller's organisation. */
-async function checkBattery(db: Pick<ReturnType<typeof getDb>, "select">, actor: Actor, testIds: number[]) {
+async function checkBattery(db: Reader, actor: Actor, testIds: number[]) {
   const unique = [...new Set(testIds)];
   const found = await db
     .select({ id: tests.id })
@@ -70,24 +74,12 @@ export async function createSession(actor: Actor, input: SessionCreateInput) {
       .values({ organizationId: actor.organizationId, squadId: input.squadId, date: input.date, phase: input.phase, notes: input.notes, createdBy: actor.userId })
       .returning({ id: testingSessions.id });
     await tx.insert(sessionTests).values(testIds.map((testId, position) => ({ sessionId: session.id, testId, position })));
-    await tx.insert(auditEvents).values({
-      organizationId: actor.organizationId, actorUserId: actor.userId, action: "session.create", entityType: "session", entityId: session.id, sessionId: session.id, after: { ...input, testIds },
-    });
+    await recordAudit(tx, actor, { action: "session.create", entity: { type: "session", id: session.id }, sessionId: session.id, after: { ...input, testIds } });
     return session;
   });
 }
 
-export async function getSessionHeader(actor: Actor, sessionId: number) {
-  const [row] = await getDb()
-    .select(sessionColumns)
-    .from(testingSessions)
-    .innerJoin(squads, eq(squads.id, testingSessions.squadId))
-    .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)));
-  if (!row) throw notFound("Session");
-  return row;
-}
-
-export async function sessionBattery(sessionId: number, reader: Pick<ReturnType<typeof getDb>, "select"> = getDb()) {
+export async function sessionBattery(sessionId: number, reader: Reader = getDb()) {
   return reader
     .select({
       id: tests.id,
@@ -109,41 +101,42 @@ export async function sessionBattery(sessionId: number, reader: Pick<ReturnType<
 /** Everything the Session sheet needs: battery, roster (plus anyone with a result) and results. */
 export async function getSessionSheet(actor: Actor, sessionId: number) {
   const db = getDb();
-  const session = await getSessionHeader(actor, sessionId);
-  const battery = await sessionBattery(sessionId);
-  const resultRows = await listResultRows(sessionId);
+  // The header comes first: it is the scope check for everything read after it.
+  const session = await findSessionInScope(db, actor, sessionId, sessionColumns);
   const squadMembers = db.select({ id: squadAthletes.athleteId }).from(squadAthletes).where(eq(squadAthletes.squadId, session.squadId));
   const withResult = db.select({ id: results.athleteId }).from(results).where(eq(results.sessionId, sessionId));
-  // Archived athletes stay on the sheet only where they already have a result.
-  const athleteList = await db
-    .select({ id: athletes.id, name: athletes.name, position: athletes.position })
-    .from(athletes)
-    .where(
-      and(
-        eq(athletes.organizationId, actor.organizationId),
-        or(and(inArray(athletes.id, squadMembers), eq(athletes.archived, false)), inArray(athletes.id, withResult)),
-      ),
-    )
-    .orderBy(asc(athletes.name));
+  const [battery, resultRows, athleteList] = await Promise.all([
+    sessionBattery(sessionId),
+    listResultRows(db, actor, sessionId),
+    // Archived athletes stay on the sheet only where they already have a result.
+    db
+      .select({ id: athletes.id, name: athletes.name, position: athletes.position })
+      .from(athletes)
+      .where(
+        and(
+          eq(athletes.organizationId, actor.organizationId),
+          or(and(inArray(athletes.id, squadMembers), eq(athletes.archived, false)), inArray(athletes.id, withResult)),
+        ),
+      )
+      .orderBy(asc(athletes.name)),
+  ]);
   return {
     session,
     tests: battery,
     athletes: athleteList,
     results: resultRows,
     canEdit: canEditSession(actor, session.status),
-    canPublish: isManager(actor),
+    canPublish: canPublish(actor),
   };
 }
 
 export async function updateSession(actor: Actor, sessionId: number, input: SessionUpdateInput) {
   const { version, testIds, ...changes } = input;
-  if (changes.status && !isManager(actor)) throw forbidden("Only a sport scientist or the owner publishes results.");
+  if (changes.status && !canPublish(actor)) throw forbidden("Only a sport scientist or the owner publishes results.");
   return writeTransaction(async (tx) => {
-    const [before] = await tx
-      .select({ id: testingSessions.id, status: testingSessions.status, version: testingSessions.version, date: testingSessions.date, phase: testingSessions.phase, notes: testingSessions.notes })
-      .from(testingSessions)
-      .where(and(eq(testingSessions.id, sessionId), sessionScope(actor)));
-    if (!before) throw notFound("Session");
+    const before = await findSessionInScope(tx, actor, sessionId, {
+      id: testingSessions.id, status: testingSessions.status, version: testingSessions.version, date: testingSessions.date, phase: testingSessions.phase, notes: testingSessions.notes,
+    });
     if (!canEditSession(actor, before.status)) throw forbidden("This session is published; ask a sport scientist to change it.");
     if (before.version !== version) throw conflict("Someone else changed this session since you opened it. Reload to see their change.", { current: before });
     const publishing = changes.status === "published" && before.status !== "published";
@@ -161,9 +154,7 @@ export async function updateSession(actor: Actor, sessionId: number, input: Sess
       await tx.delete(sessionTests).where(eq(sessionTests.sessionId, sessionId));
       await tx.insert(sessionTests).values(unique.map((testId, position) => ({ sessionId, testId, position })));
     }
-    await tx.insert(auditEvents).values({
-      organizationId: actor.organizationId, actorUserId: actor.userId, action: publishing ? "session.publish" : "session.update", entityType: "session", entityId: sessionId, sessionId, before, after: input,
-    });
+    await recordAudit(tx, actor, { action: publishing ? "session.publish" : "session.update", entity: { type: "session", id: sessionId }, sessionId, before, after: input });
     return { id: sessionId, version: version + 1, ...changes };
   });
 }

@@ -1,12 +1,14 @@
 import "server-only";
 import { and, asc, count, desc, eq, inArray, max } from "drizzle-orm";
 import { getDb, writeTransaction } from "@/db/client";
-import { squadAthletes, squads, testingSessions, athletes, auditEvents, memberships, squadCoaches, users } from "@/db/schema";
-import type { Actor } from "./actors";
-import { squadScope, isManager } from "./scope";
+import { athletes, memberships, squadAthletes, squadCoaches, squads, testingSessions, users } from "@/db/schema";
+import { canEditRoster, canManageSquad } from "@/lib/auth/permissions";
 import { conflict, invalidInput, notFound } from "@/lib/errors";
 import type { SquadCreateInput, SquadUpdateInput } from "@/lib/validation/roster";
+import type { Actor } from "./actors";
+import { recordAudit } from "./audit";
 import { isUniqueViolation } from "./errors";
+import { squadScope } from "./scope";
 
 
 /** The caller's squads with how many active athletes they hold and their latest session. */
@@ -21,33 +23,31 @@ export async function listSquads(actor: Actor, { includeArchived = false } = {})
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.id);
 
-  const counts = await db
-    .select({ squadId: squadAthletes.squadId, n: count() })
-    .from(squadAthletes)
-    .innerJoin(athletes, eq(athletes.id, squadAthletes.athleteId))
-    .where(and(inArray(squadAthletes.squadId, ids), eq(athletes.archived, false)))
-    .groupBy(squadAthletes.squadId);
-
   const latestDates = db
     .select({ squadId: testingSessions.squadId, date: max(testingSessions.date).as("latest_date") })
     .from(testingSessions)
-    .where(inArray(testingSessions.squadId, ids))
+    .where(and(inArray(testingSessions.squadId, ids), eq(testingSessions.organizationId, actor.organizationId)))
     .groupBy(testingSessions.squadId)
     .as("latest");
-  const latest = await db
-    .select({
-      squadId: testingSessions.squadId,
-      id: testingSessions.id,
-      date: testingSessions.date,
-      phase: testingSessions.phase,
-      status: testingSessions.status,
-    })
-    .from(testingSessions)
-    .innerJoin(
-      latestDates,
-      and(eq(latestDates.squadId, testingSessions.squadId), eq(latestDates.date, testingSessions.date)),
-    )
-    .orderBy(desc(testingSessions.id));
+  const [counts, latest] = await Promise.all([
+    db
+      .select({ squadId: squadAthletes.squadId, n: count() })
+      .from(squadAthletes)
+      .innerJoin(athletes, eq(athletes.id, squadAthletes.athleteId))
+      .where(and(inArray(squadAthletes.squadId, ids), eq(athletes.organizationId, actor.organizationId), eq(athletes.archived, false)))
+      .groupBy(squadAthletes.squadId),
+    db
+      .select({
+        squadId: testingSessions.squadId,
+        id: testingSessions.id,
+        date: testingSessions.date,
+        phase: testingSessions.phase,
+        status: testingSessions.status,
+      })
+      .from(testingSessions)
+      .innerJoin(latestDates, and(eq(latestDates.squadId, testingSessions.squadId), eq(latestDates.date, testingSessions.date)))
+      .orderBy(desc(testingSessions.id)),
+  ]);
 
   const countBySquad = new Map(counts.map((c) => [c.squadId, c.n]));
   const latestBySquad = new Map<number, Omit<(typeof latest)[number], "squadId">>();
@@ -63,15 +63,20 @@ const squadColumns = { id: squads.id, name: squads.name, sport: squads.sport, ar
 
 export async function getSquad(actor: Actor, squadId: number) {
   const db = getDb();
-  const [squad] = await db.select(squadColumns).from(squads).where(and(eq(squads.id, squadId), squadScope(actor)));
+  // The coaches are read beside the squad, not after it: the join through the squad keeps
+  // that read inside the caller's reach on its own.
+  const [[squad], coaches] = await Promise.all([
+    db.select(squadColumns).from(squads).where(and(eq(squads.id, squadId), squadScope(actor))),
+    db
+      .select({ id: users.id, name: users.name, email: users.email })
+      .from(squadCoaches)
+      .innerJoin(squads, eq(squads.id, squadCoaches.squadId))
+      .innerJoin(users, eq(users.id, squadCoaches.userId))
+      .where(and(eq(squadCoaches.squadId, squadId), squadScope(actor)))
+      .orderBy(asc(users.name)),
+  ]);
   if (!squad) throw notFound("Squad");
-  const coaches = await db
-    .select({ id: users.id, name: users.name, email: users.email })
-    .from(squadCoaches)
-    .innerJoin(users, eq(users.id, squadCoaches.userId))
-    .where(eq(squadCoaches.squadId, squadId))
-    .orderBy(asc(users.name));
-  return { squad: { ...squad, coaches }, canManage: actor.role === "owner", canEditRoster: isManager(actor) || actor.role === "coach" };
+  return { squad: { ...squad, coaches }, canManage: canManageSquad(actor), canEditRoster: canEditRoster(actor) };
 }
 
 /** Members of the organisation with the coach role: the people a squad can be assigned to. */
@@ -90,9 +95,7 @@ export async function createSquad(actor: Actor, input: SquadCreateInput) {
   try {
     return await writeTransaction(async (tx) => {
       const [row] = await tx.insert(squads).values({ ...input, organizationId: actor.organizationId }).returning(squadColumns);
-      await tx.insert(auditEvents).values({
-        organizationId: actor.organizationId, actorUserId: actor.userId, action: "squad.create", entityType: "squad", entityId: row.id, after: row,
-      });
+      await recordAudit(tx, actor, { action: "squad.create", entity: { type: "squad", id: row.id }, after: row });
       return row;
     });
   } catch (error) {
@@ -128,9 +131,7 @@ export async function updateSquad(actor: Actor, squadId: number, input: SquadUpd
         await tx.delete(squadCoaches).where(eq(squadCoaches.squadId, squadId));
         if (unique.length) await tx.insert(squadCoaches).values(unique.map((userId) => ({ squadId, userId })));
       }
-      await tx.insert(auditEvents).values({
-        organizationId: actor.organizationId, actorUserId: actor.userId, action: "squad.update", entityType: "squad", entityId: squadId, before, after: { ...row, coachUserIds },
-      });
+      await recordAudit(tx, actor, { action: "squad.update", entity: { type: "squad", id: squadId }, before, after: { ...row, coachUserIds } });
       return row;
     });
   } catch (error) {

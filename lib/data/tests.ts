@@ -1,13 +1,14 @@
 import "server-only";
 import { and, asc, count, eq } from "drizzle-orm";
 import { getDb, writeTransaction } from "@/db/client";
-import { auditEvents, results, sessionTests, tests } from "@/db/schema";
+import { results, sessionTests, tests } from "@/db/schema";
 import { conflict, notFound } from "@/lib/errors";
 import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
 import type { Actor } from "./actors";
+import { recordAudit } from "./audit";
 import { isUniqueViolation } from "./errors";
 
-export const testColumns = {
+const testColumns = {
   id: tests.id,
   name: tests.name,
   unit: tests.unit,
@@ -41,12 +42,10 @@ export async function listTests(actor: Actor, { includeArchived = false } = {}) 
   const where = includeArchived
     ? eq(tests.organizationId, actor.organizationId)
     : and(eq(tests.organizationId, actor.organizationId), eq(tests.archived, false));
-  const rows = await db.select(testColumns).from(tests).where(where).orderBy(asc(tests.name));
-  const counts = await db
-    .select({ testId: results.testId, n: count() })
-    .from(results)
-    .where(eq(results.organizationId, actor.organizationId))
-    .groupBy(results.testId);
+  const [rows, counts] = await Promise.all([
+    db.select(testColumns).from(tests).where(where).orderBy(asc(tests.name)),
+    db.select({ testId: results.testId, n: count() }).from(results).where(eq(results.organizationId, actor.organizationId)).groupBy(results.testId),
+  ]);
   const byTest = new Map(counts.map((c) => [c.testId, c.n]));
   return rows.map((r) => ({ ...r, resultCount: byTest.get(r.id) ?? 0 }));
 }
@@ -67,9 +66,7 @@ export async function createTest(actor: Actor, input: TestCreateInput): Promise<
         .insert(tests)
         .values({ ...input, organizationId: actor.organizationId })
         .returning(testColumns);
-      await tx.insert(auditEvents).values({
-        organizationId: actor.organizationId, actorUserId: actor.userId, action: "test.create", entityType: "test", entityId: row.id, after: row,
-      });
+      await recordAudit(tx, actor, { action: "test.create", entity: { type: "test", id: row.id }, after: row });
       return row;
     });
   } catch (error) {
@@ -100,9 +97,7 @@ export async function updateTest(actor: Actor, testId: number, input: TestUpdate
         .set({ ...changes, version: version + 1 })
         .where(and(eq(tests.id, testId), eq(tests.version, version)))
         .returning(testColumns);
-      await tx.insert(auditEvents).values({
-        organizationId: actor.organizationId, actorUserId: actor.userId, action: "test.update", entityType: "test", entityId: testId, before, after: row,
-      });
+      await recordAudit(tx, actor, { action: "test.update", entity: { type: "test", id: testId }, before, after: row });
       return row;
     });
   } catch (error) {
@@ -121,14 +116,14 @@ export async function deleteOrArchiveTest(actor: Actor, testId: number): Promise
     if (!test) throw notFound("Test");
     const [used] = await tx.select({ n: count() }).from(results).where(eq(results.testId, testId));
     const [inBattery] = await tx.select({ n: count() }).from(sessionTests).where(eq(sessionTests.testId, testId));
-    const audit = { organizationId: actor.organizationId, actorUserId: actor.userId, entityType: "test", entityId: testId, before: test };
+    const entity = { type: "test", id: testId } as const;
     if ((used?.n ?? 0) > 0 || (inBattery?.n ?? 0) > 0) {
       await tx.update(tests).set({ archived: true }).where(eq(tests.id, testId));
-      await tx.insert(auditEvents).values({ ...audit, action: "test.archive" });
+      await recordAudit(tx, actor, { action: "test.archive", entity, before: test });
       return { archived: true as const };
     }
     await tx.delete(tests).where(eq(tests.id, testId));
-    await tx.insert(auditEvents).values({ ...audit, action: "test.delete" });
+    await recordAudit(tx, actor, { action: "test.delete", entity, before: test });
     return { deleted: true as const };
   });
 }

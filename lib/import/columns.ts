@@ -77,7 +77,7 @@ export function testNameIndex(tests: ImportTest[]): Map<string, ImportTest> {
 }
 
 /** Reads one wide header against the battery (exact name first, so a test whose name ends in a number still matches). */
-export function matchWideHeader(
+function matchWideHeader(
   header: string,
   byName: Map<string, ImportTest>,
   otherNames: Set<string>,

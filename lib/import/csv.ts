@@ -3,7 +3,8 @@
  * (RFC 4180 quoting: a quoted field may hold delimiters, line breaks and doubled quotes).
  */
 import Papa from "papaparse";
-import type { Delimiter, ImportRowError } from "./types";
+import type { Delimiter } from "./types";
+import type { RowError } from "@/lib/errors";
 
 export type CsvTable = {
   delimiter: Delimiter;
@@ -15,7 +16,7 @@ export type CsvTable = {
   /** Spreadsheet row number of each data row (the header is row 1; blank rows still count). */
   rowNumbers: number[];
   /** Quoting or shape problems found while splitting. */
-  problems: ImportRowError[];
+  problems: RowError[];
 };
 
 const CANDIDATES: Delimiter[] = [",", ";", "\t", "|"];
@@ -60,7 +61,7 @@ export function parseCsv(text: string): CsvTable {
   // No quote character in the input lets papaparse take its fast path (a plain split).
   const parsed = Papa.parse<string[]>(text, { delimiter, header: false, skipEmptyLines: false, dynamicTyping: false });
   const records = parsed.data;
-  const problems: ImportRowError[] = [];
+  const problems: RowError[] = [];
   for (const error of parsed.errors) {
     if (error.type !== "Quotes") continue;
     problems.push({

@@ -15,6 +15,3 @@ export const MAX_LISTED_ERRORS = 200;
 
 /** Replaced values listed in a preview or a 409 answer. */
 export const MAX_LISTED_REPLACEMENTS = 200;
-
-/** No test takes more than this many trials in one session (the Session sheet's own limit). */
-export const MAX_IMPORT_TRIALS = 10;

@@ -4,8 +4,9 @@
  */
 import type { CsvTable } from "./csv";
 import { detectFormat, findAthleteColumn, findLongColumns, normaliseName, suggestWideColumns, wideMappingOf } from "./columns";
-import { MAX_IMPORT_TRIALS } from "./limits";
-import type { ImportContext, ImportFormat, ImportMapping, ImportRowError, LongColumns, UnknownTest, WideColumnSuggestion, WideTarget } from "./types";
+import type { ImportContext, ImportFormat, ImportMapping, LongColumns, UnknownTest, WideColumnSuggestion, WideTarget } from "./types";
+import { MAX_TRIALS } from "@/lib/domain";
+import type { RowError } from "@/lib/errors";
 
 /** What the caller may choose; anything left out is suggested from the header. */
 export type MappingRequest = {
@@ -25,17 +26,17 @@ export type ResolvedMapping = {
   suggestions: WideColumnSuggestion[];
   /** The long-format columns found in the header, for the mapping step. */
   suggestedLong: LongColumns;
-  errors: ImportRowError[];
+  errors: RowError[];
   unknownTests: UnknownTest[];
 };
 
-export const trialLimit = (trialsPerSession: number) => Math.max(1, Math.min(trialsPerSession, MAX_IMPORT_TRIALS));
+export const trialLimit = (trialsPerSession: number) => Math.max(1, Math.min(trialsPerSession, MAX_TRIALS));
 
 const quote = (s: string) => `“${s}”`;
 
 export function resolveMapping(table: CsvTable, request: MappingRequest, context: ImportContext): ResolvedMapping {
   const { headers, headerRow: row } = table;
-  const errors: ImportRowError[] = [];
+  const errors: RowError[] = [];
   const unknownTests: UnknownTest[] = [];
   const detectedFormat = detectFormat(headers);
   const format = request.format ?? detectedFormat;

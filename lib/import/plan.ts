@@ -8,8 +8,10 @@ import { MAX_LISTED_ERRORS, PREVIEW_ROWS } from "./limits";
 import { trialLimit } from "./mapping";
 import { parseScore } from "./numbers";
 import type {
-  ColumnOf, ImportAthlete, ImportContext, ImportFormat, ImportGroup, ImportMapping, ImportRowError, ImportTest, UnknownAthlete, UnknownTest,
+  ColumnOf, ImportAthlete, ImportContext, ImportFormat, ImportGroup, ImportMapping, ImportTest, UnknownAthlete, UnknownTest,
 } from "./types";
+import { MAX_TRIALS } from "@/lib/domain";
+import type { RowError } from "@/lib/errors";
 
 export type PreviewValue = { row: number; column: string; athleteName: string; testName: string; trial: number; value: number };
 
@@ -23,10 +25,10 @@ export type ImportPlan = {
   rowsWithValues: number;
   /** Non-blank data rows. */
   rowCount: number;
-  errors: ImportRowError[];
+  errors: RowError[];
   errorCount: number;
   /** Values outside a test's plausible range: shown, never blocking. */
-  warnings: ImportRowError[];
+  warnings: RowError[];
   warningCount: number;
   /** The first MAX_LISTED_ERRORS of them; `unknownAthleteCount` says how many there are. */
   unknownAthletes: UnknownAthlete[];
@@ -37,9 +39,9 @@ export type ImportPlan = {
 
 /** Keeps the first errors in full and counts the rest. */
 class Listing {
-  readonly items: ImportRowError[] = [];
+  readonly items: RowError[] = [];
   count = 0;
-  add(error: ImportRowError) {
+  add(error: RowError) {
     this.count++;
     if (this.items.length < MAX_LISTED_ERRORS) this.items.push(error);
   }
@@ -247,7 +249,7 @@ export function buildPlan(table: CsvTable, mapping: ImportMapping, context: Impo
           trialCache.set(rawTrial, parsedTrial);
         }
         const trialCell = rawTrial.trim();
-        const limit = test ? trialLimit(test.trialsPerSession) : 10;
+        const limit = test ? trialLimit(test.trialsPerSession) : MAX_TRIALS;
         if (parsedTrial < 0) {
           errors.add({ row, column: rName, message: trialCell === "" ? "The trial number is missing." : `${shown(trialCell)} is not a trial number (1, 2, 3…).` });
           failed = true;

@@ -2,10 +2,11 @@
 import type { Replacement } from "./merge";
 import type { PreviewValue } from "./plan";
 import type {
-  Delimiter, ImportContext, ImportCounts, ImportFormat, ImportMapping, ImportRowError, LongColumns, UnknownAthlete, UnknownTest, WideColumnSuggestion,
+  Delimiter, ImportContext, ImportCounts, ImportFormat, ImportMapping, LongColumns, UnknownAthlete, UnknownTest, WideColumnSuggestion,
 } from "./types";
+import type { RowError } from "@/lib/errors";
 
-export type ReplacementRow = ImportRowError & {
+export type ReplacementRow = RowError & {
   athleteName: string;
   testName: string;
   trial: number | null;
@@ -36,9 +37,9 @@ export type ImportPreview = {
   unknownAthletes: UnknownAthlete[];
   unknownAthleteCount: number;
   unknownTests: UnknownTest[];
-  errors: ImportRowError[];
+  errors: RowError[];
   errorCount: number;
-  warnings: ImportRowError[];
+  warnings: RowError[];
   warningCount: number;
   counts: ImportCounts;
   replacements: ReplacementRow[];

@@ -5,9 +5,6 @@ export const IMPORT_FORMATS = ["long", "wide"] as const;
 
 export type Delimiter = "," | ";" | "\t" | "|";
 
-/** A problem in the file, by row (the header is row 1, as a spreadsheet numbers it) and column header. */
-export type ImportRowError = { row: number; column?: string; message: string };
-
 /** A test of the session's battery, as the import needs it. */
 export type ImportTest = {
   id: number;

@@ -2,6 +2,7 @@
 import type { ResultFlag } from "@/lib/domain";
 import type { ResultRow, SheetData, SheetTest } from "@/lib/client/queries";
 import { FLAG_LABELS } from "@/lib/labels";
+import { trimTrials } from "@/lib/trials";
 
 export type Trials = (number | null)[];
 /** What the person at the sheet wants a result to hold. */
@@ -15,13 +16,6 @@ export function padTrials(trials: Trials, slots: number): Trials {
   const out = trials.slice();
   while (out.length < slots) out.push(null);
   return out;
-}
-
-/** Trailing empty slots carry no information; the API stores trials in order with null gaps. */
-export function trimTrials(trials: Trials): Trials {
-  let end = trials.length;
-  while (end > 0 && trials[end - 1] === null) end--;
-  return trials.slice(0, end);
 }
 
 export function sameWanted(a: Wanted, b: Wanted): boolean {

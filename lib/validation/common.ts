@@ -25,5 +25,3 @@ export const isoDate = z
   }, "That date does not exist.");
 
 export const optionalIsoDate = isoDate.nullish().or(z.literal("").transform(() => null));
-
-export const optionalNumber = z.number().finite().nullish().transform((v) => (v === undefined ? null : v));

@@ -9,11 +9,13 @@ import { IMPORT_FORMATS } from "@/lib/import/types";
 
 const column = z.string().max(200, "Column names are limited to 200 characters.");
 
+// Only a bound on what is parsed: a trial past the test's own limit is reported by the mapping
+// step, which can name the column.
 const wideTarget = z
   .object({ testId: z.number().int().positive(), trial: z.number().int().positive().max(99) })
   .nullable();
 
-export const wideMappingSchema = z.record(column, wideTarget).refine((m) => Object.keys(m).length <= 500, "At most 500 columns.");
+const wideMappingSchema = z.record(column, wideTarget).refine((m) => Object.keys(m).length <= 500, "At most 500 columns.");
 
 export const importOptionsSchema = z.object({
   mode: z.enum(["preview", "commit"], { message: "mode is preview or commit." }).default("preview"),

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { PHASES, RESULT_FLAGS, SESSION_STATUSES } from "@/lib/domain";
+import { MAX_TRIALS, PHASES, RESULT_FLAGS, SESSION_STATUSES } from "@/lib/domain";
 import { idSchema, isoDate, optionalText } from "./common";
 
 export const sessionCreateSchema = z.object({
@@ -21,12 +21,10 @@ export const sessionUpdateSchema = z.object({
 });
 export type SessionUpdateInput = z.infer<typeof sessionUpdateSchema>;
 
-export const MAX_TRIALS = 10;
-
 /** A trial score as typed: a finite number, or null for an empty slot. */
-export const trialValue = z.number().finite("Scores must be numbers.").nullable();
+const trialValue = z.number().finite("Scores must be numbers.").nullable();
 
-export const resultWriteSchema = z.object({
+const resultWriteSchema = z.object({
   athleteId: idSchema,
   testId: idSchema,
   trials: z.array(trialValue).max(MAX_TRIALS, `At most ${MAX_TRIALS} trials.`),
@@ -40,4 +38,3 @@ export type ResultWriteInput = z.infer<typeof resultWriteSchema>;
 export const resultsBatchSchema = z.object({
   results: z.array(resultWriteSchema).min(1, "Nothing to save.").max(5000, "Save at most 5000 results at once."),
 });
-export type ResultsBatchInput = z.infer<typeof resultsBatchSchema>;

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { DIRECTIONS, SWC_METHODS, TRIAL_RULES } from "@/lib/domain";
+import { DIRECTIONS, MAX_TRIALS, SWC_METHODS, TRIAL_RULES } from "@/lib/domain";
 import { optionalText, requiredText } from "./common";
 
 const fields = {
@@ -8,7 +8,7 @@ const fields = {
   decimals: z.number().int().min(0, "0 to 4 decimals.").max(4, "0 to 4 decimals."),
   direction: z.enum(DIRECTIONS, { message: "Choose whether higher or lower is better." }),
   trialRule: z.enum(TRIAL_RULES, { message: "Choose best or mean of trials." }),
-  trialsPerSession: z.number().int().min(1, "At least one trial.").max(10, "At most 10 trials."),
+  trialsPerSession: z.number().int().min(1, "At least one trial.").max(MAX_TRIALS, `At most ${MAX_TRIALS} trials.`),
   swcMethod: z.enum(SWC_METHODS),
   swcValue: z.number().finite().positive("The SWC setting must be above zero."),
   cvPercent: z.number().finite().positive("CV% must be above zero.").max(100).nullable(),

@@ -1,7 +1,8 @@
 import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { TestLibrary } from "@/components/tests/test-library";
-import { MANAGERS, STAFF } from "@/lib/auth/guard";
+import { STAFF } from "@/lib/auth/guard";
+import { canEditTestLibrary } from "@/lib/auth/permissions";
 import { pageGuard } from "@/lib/auth/page-guard";
 import { testQueries } from "@/lib/client/queries";
 import { listTests } from "@/lib/data/tests";
@@ -15,7 +16,7 @@ export default async function TestLibraryPage() {
   await prefetch(client, testQueries.list(), () => listTests(actor));
   return (
     <HydrationBoundary state={dehydrate(client)}>
-      <TestLibrary canEdit={MANAGERS.includes(actor.role)} />
+      <TestLibrary canEdit={canEditTestLibrary(actor)} />
     </HydrationBoundary>
   );
 }

@@ -4,7 +4,7 @@ import { SessionSheet } from "@/components/sheet/session-sheet";
 import { STAFF } from "@/lib/auth/guard";
 import { pageGuard, pageId } from "@/lib/auth/page-guard";
 import { sessionQueries } from "@/lib/client/queries";
-import { listSessionAudit } from "@/lib/data/results";
+import { listSessionAudit } from "@/lib/data/audit";
 import { getSessionSheet } from "@/lib/data/sessions";
 import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
 

@@ -1,6 +1,6 @@
 import { guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, withApi } from "@/lib/api/handler";
-import { listSessionAudit } from "@/lib/data/results";
+import { listSessionAudit } from "@/lib/data/audit";
 
 type Params = { sessionId: string };
 

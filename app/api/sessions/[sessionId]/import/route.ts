@@ -4,43 +4,11 @@
  * Preview checks the file and writes nothing; commit writes all of it or nothing.
  */
 import { ApiError, invalidInput } from "@/lib/errors";
-import { json, parseId, withApi } from "@/lib/api/handler";
+import { json, parseId, readCappedBytes, withApi } from "@/lib/api/handler";
 import { guard, STAFF } from "@/lib/auth/guard";
 import { runImport } from "@/lib/data/import";
 import { MAX_IMPORT_BYTES, MULTIPART_ALLOWANCE_BYTES, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
 import { importOptionsSchema } from "@/lib/validation/import";
-
-const tooLarge = () => new ApiError(413, "payload_too_large", TOO_LARGE_MESSAGE);
-
-/** Reads the body, stopping as soon as it passes the limit (a missing or false Content-Length cannot get past it). */
-async function readBody(request: Request, limit: number): Promise<Uint8Array> {
-  if (!request.body) return new Uint8Array(0);
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  for (;;) {
-    let part: ReadableStreamReadResult<Uint8Array>;
-    try {
-      part = await reader.read();
-    } catch {
-      throw new ApiError(400, "bad_request", "The upload was interrupted. Try again.");
-    }
-    if (part.done) break;
-    total += part.value.byteLength;
-    if (total > limit) {
-      await reader.cancel().catch(() => undefined);
-      throw tooLarge();
-    }
-    chunks.push(part.value);
-  }
-  const body = new Uint8Array(total);
-  let offset = 0;
-  for (const chunk of chunks) {
-    body.set(chunk, offset);
-    offset += chunk.byteLength;
-  }
-  return body;
-}
 
 const text = (value: FormDataEntryValue | null) => (typeof value === "string" ? value : undefined);
 
@@ -48,14 +16,11 @@ export const POST = withApi<{ sessionId: string }>(async (request, { params }) =
   const sessionId = parseId((await params).sessionId, "Session");
   const actor = await guard({ roles: STAFF, sessionId });
 
-  const limit = MAX_IMPORT_BYTES + MULTIPART_ALLOWANCE_BYTES;
-  const declared = Number(request.headers.get("content-length"));
-  if (Number.isFinite(declared) && declared > limit) throw tooLarge();
   const type = request.headers.get("content-type") ?? "";
   if (!/^multipart\/form-data\b/i.test(type)) {
     throw new ApiError(415, "unsupported_media_type", "Send the CSV as multipart/form-data with the file in a field called “file”.");
   }
-  const body = await readBody(request, limit);
+  const body = await readCappedBytes(request, MAX_IMPORT_BYTES + MULTIPART_ALLOWANCE_BYTES, TOO_LARGE_MESSAGE);
   let form: FormData;
   try {
     form = await new Response(body as BodyInit, { headers: { "content-type": type } }).formData();
@@ -66,7 +31,7 @@ export const POST = withApi<{ sessionId: string }>(async (request, { params }) =
   const file = form.get("file");
   if (file === null) throw invalidInput("Choose a CSV file to import.", { file: "No file was sent (field “file”)." });
   if (typeof file === "string") throw invalidInput("The “file” field must be a file upload, not text.", { file: "Not a file." });
-  if (file.size > MAX_IMPORT_BYTES) throw tooLarge();
+  if (file.size > MAX_IMPORT_BYTES) throw new ApiError(413, "payload_too_large", TOO_LARGE_MESSAGE);
 
   const url = new URL(request.url);
   const options = importOptionsSchema.parse({

@@ -1,6 +1,6 @@
 import { guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, withApi } from "@/lib/api/handler";
-import { undoLastChange } from "@/lib/data/results";
+import { undoLastChange } from "@/lib/data/undo";
 
 type Params = { sessionId: string };
 

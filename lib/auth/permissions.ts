@@ -1,0 +1,41 @@
+/**
+ * Who may do what: the one place the product's role rules (PRODUCT.md §2) are written down.
+ * Pure functions of the caller's role and, where it matters, the record's state, so the server
+ * decides with them and the screens can show or hide a control by the very same rule.
+ * Reach (which squads, athletes and sessions a caller sees at all) is the WHERE-clause work of
+ * lib/data/scope.ts, which asks these functions which rule applies.
+ */
+import { ROLES, type Role, type SessionStatus } from "@/lib/domain";
+
+/** Anything that has a role: the server's Actor, or the role the screens read from /api/me. */
+export type RoleHolder = { readonly role: Role };
+
+export const isOwner = (who: RoleHolder) => who.role === "owner";
+/** Owner and scientist: the whole organisation is in their reach. */
+export const isManager = (who: RoleHolder) => who.role === "owner" || who.role === "scientist";
+/** Coaches reach only the squads they are assigned to. */
+export const isCoach = (who: RoleHolder) => who.role === "coach";
+export const isAthlete = (who: RoleHolder) => who.role === "athlete";
+export const isStaff = (who: RoleHolder) => !isAthlete(who);
+
+/** Coaches write into draft sessions only; a published session is corrected by a scientist or the owner. */
+export const canEditSession = (who: RoleHolder, status: SessionStatus) => isManager(who) || (isCoach(who) && status === "draft");
+
+/** Publishing (or withdrawing) a session's results to its athletes. */
+export const canPublish = isManager;
+
+/** Creating, renaming and archiving squads, and assigning their coaches. */
+export const canManageSquad = isOwner;
+
+/** Adding athletes to a squad in reach, editing them, moving them between squads. */
+export const canEditRoster = isStaff;
+
+/** Every member reads the Test library; only these change it. */
+export const canEditTestLibrary = isManager;
+
+const rolesWhere = (rule: (who: RoleHolder) => boolean): readonly Role[] => ROLES.filter((role) => rule({ role }));
+
+// The role lists `guard({ roles })` takes, derived from the rules above so the two cannot drift.
+export const STAFF = rolesWhere(isStaff);
+export const MANAGERS = rolesWhere(isManager);
+export const OWNERS = rolesWhere(isOwner);
