@@ -1,14 +1,8 @@
 import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
+import { clientAddress } from "./client-address";
 import { authorizeCredentials } from "./credentials";
-
-function clientAddress(headers: Record<string, string | string[] | undefined> | undefined): string {
-  const forwarded = headers?.["x-forwarded-for"];
-  const first = Array.isArray(forwarded) ? forwarded[0] : forwarded;
-  const real = headers?.["x-real-ip"];
-  return (first?.split(",")[0]?.trim() || (Array.isArray(real) ? real[0] : real) || "local").slice(0, 100);
-}
 
 export const authOptions: NextAuthOptions = {
   session: { strategy: "jwt", maxAge: 12 * 60 * 60 },
@@ -17,6 +11,8 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: "E-mail and password",
       credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
+      // next-auth hands authorize the request's headers only (from next/headers, not the Request),
+      // so the address is read from them, trusting forwarded entries only as far as TRUST_PROXY says.
       authorize: (credentials, request) => authorizeCredentials(credentials, clientAddress(request?.headers)),
     }),
   ],
