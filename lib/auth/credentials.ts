@@ -4,7 +4,8 @@ import { signInSchema } from "@/lib/validation/auth";
 import { hashPassword, verifyPassword } from "./password";
 import { THROTTLED_MESSAGE, releaseSignIn, reserveSignIn } from "./throttle";
 
-export type SignedInUser = { id: string; email: string; name: string };
+/** `sessionVersion` goes into the session token; see `sessionIsCurrent`. */
+export type SignedInUser = { id: string; email: string; name: string; sessionVersion: number };
 
 export class SignInError extends Error {}
 
@@ -27,5 +28,5 @@ export async function authorizeCredentials(raw: unknown, address: string): Promi
   const ok = await verifyPassword(password, user?.passwordHash ?? (await timingDummy()));
   if (!user || !user.passwordHash || !ok) return null;
   await releaseSignIn(reservation);
-  return { id: String(user.id), email: user.email, name: user.name };
+  return { id: String(user.id), email: user.email, name: user.name, sessionVersion: user.sessionVersion };
 }

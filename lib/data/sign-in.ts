@@ -10,6 +10,7 @@ export async function findUserCredentials(email: string) {
       email: users.email,
       name: users.name,
       passwordHash: users.passwordHash,
+      sessionVersion: users.sessionVersion,
     })
     .from(users)
     .where(eq(users.email, email))
