@@ -6,12 +6,8 @@ import { useRouter, useSearchParams } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Field, FormAlert } from "@/components/form-bits";
+import { safeNextPath } from "@/lib/safe-next";
 import { signInSchema, type SignInInput } from "@/lib/validation/auth";
-
-/** Only same-site paths are followed after sign-in. */
-function safeNext(value: string | null): string {
-  return value && value.startsWith("/") && !value.startsWith("//") ? value : "/";
-}
 
 export function SignInForm() {
   const router = useRouter();
@@ -34,7 +30,7 @@ export function SignInForm() {
       );
       return;
     }
-    router.replace(safeNext(params.get("next")));
+    router.replace(safeNextPath(params.get("next"), window.location.origin));
     router.refresh();
   }
 

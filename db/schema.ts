@@ -45,6 +45,11 @@ export const users = sqliteTable("users", {
   email: text("email").notNull().unique(),
   name: text("name").notNull(),
   passwordHash: text("password_hash"),
+  /**
+   * Carried in every session token; raising it ends every session issued before (sign-out,
+   * password change or reset, removal), since a JWT cannot be recalled from the browser.
+   */
+  sessionVersion: integer("session_version").notNull().default(0),
   createdAt: createdAt(),
 });
 

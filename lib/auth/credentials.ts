@@ -1,10 +1,11 @@
 import "server-only";
-import { clearFailures, findUserCredentials } from "@/lib/data/sign-in";
+import { findUserCredentials } from "@/lib/data/sign-in";
 import { signInSchema } from "@/lib/validation/auth";
 import { hashPassword, verifyPassword } from "./password";
-import { THROTTLED_MESSAGE, isThrottled, noteFailure } from "./throttle";
+import { THROTTLED_MESSAGE, releaseSignIn, reserveSignIn } from "./throttle";
 
-export type SignedInUser = { id: string; email: string; name: string };
+/** `sessionVersion` goes into the session token; see `sessionIsCurrent`. */
+export type SignedInUser = { id: string; email: string; name: string; sessionVersion: number };
 
 export class SignInError extends Error {}
 
@@ -20,13 +21,12 @@ export async function authorizeCredentials(raw: unknown, address: string): Promi
   const parsed = signInSchema.safeParse(raw);
   if (!parsed.success) return null;
   const { email, password } = parsed.data;
-  if (await isThrottled(email, address)) throw new SignInError(THROTTLED_MESSAGE);
+  // Counted before the check and kept as a failure unless the password is right.
+  const reservation = await reserveSignIn(email, address);
+  if (!reservation) throw new SignInError(THROTTLED_MESSAGE);
   const user = await findUserCredentials(email);
   const ok = await verifyPassword(password, user?.passwordHash ?? (await timingDummy()));
-  if (!user || !user.passwordHash || !ok) {
-    await noteFailure(email, address);
-    return null;
-  }
-  await clearFailures(email);
-  return { id: String(user.id), email: user.email, name: user.name };
+  if (!user || !user.passwordHash || !ok) return null;
+  await releaseSignIn(reservation);
+  return { id: String(user.id), email: user.email, name: user.name, sessionVersion: user.sessionVersion };
 }

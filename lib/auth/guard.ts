@@ -5,9 +5,9 @@
 import "server-only";
 import type { Role } from "@/lib/domain";
 import { forbidden, notFound, unauthenticated } from "@/lib/errors";
-import { loadActor, type Actor } from "@/lib/data/actors";
+import { loadActor, sessionIsCurrent, type Actor } from "@/lib/data/actors";
 import { athleteInReach, sessionInReach, squadInReach, testInReach } from "@/lib/data/scope";
-import { currentUserId } from "./session";
+import { currentSession } from "./session";
 
 export type { Actor };
 // The role lists `roles` takes come with the guard; they are defined beside the rules they follow.
@@ -22,9 +22,11 @@ export type GuardOptions = {
 };
 
 export async function guard(options: GuardOptions = {}): Promise<Actor> {
-  const userId = await currentUserId();
-  if (userId === null) throw unauthenticated();
-  const actor = await loadActor(userId);
+  const session = await currentSession();
+  // An ended session (sign-out, password change, removal) counts as signed out: 401 here,
+  // the sign-in page through pageGuard.
+  if (session === null || !(await sessionIsCurrent(session))) throw unauthenticated();
+  const actor = await loadActor(session.userId);
   if (!actor) throw forbidden("Your account is not a member of any organisation.");
   await authorize(actor, options);
   return actor;

@@ -1,10 +1,16 @@
 import "server-only";
 import { getServerSession } from "next-auth";
-import { authOptions } from "./options";
+import type { SessionClaims } from "@/lib/data/actors";
+import { authOptions, claimsOf } from "./options";
 
-/** The signed-in user's id from the JWT session, or null. The only place that reads the session. */
-export async function currentUserId(): Promise<number | null> {
+export type { SessionClaims };
+
+/**
+ * The claims of the JWT session (user id and session version), or null. The only place that
+ * reads the session; whether those claims are still current is the guard's question.
+ */
+export async function currentSession(): Promise<SessionClaims | null> {
   const session = await getServerSession(authOptions);
-  const id = Number((session?.user as { id?: string } | undefined)?.id);
-  return Number.isSafeInteger(id) && id > 0 ? id : null;
+  const user = session?.user as { id?: string; sessionVersion?: unknown } | undefined;
+  return user ? claimsOf({ sub: user.id, sv: user.sessionVersion }) : null;
 }

@@ -1,7 +1,8 @@
 import "server-only";
-import { countRecentFailures, recordFailure } from "@/lib/data/sign-in";
+import { type AttemptCounts, releaseAttempt, reserveAttempt } from "@/lib/data/sign-in";
+import { UNKNOWN_ADDRESS } from "./client-address";
 
-/** Failures a minute before one account is held. */
+/** Failures a minute on one account before it is held (for addresses already failing on it). */
 export const MAX_FAILURES_PER_EMAIL = 5;
 /**
  * Failures a minute before one address is held: higher, because a whole club often signs in
@@ -12,12 +13,36 @@ const WINDOW_MS = 60_000;
 
 export const THROTTLED_MESSAGE = "Too many failed sign-ins. Wait a minute, then try again.";
 
-/** True when this e-mail or this address has failed too often in the last minute. */
-export async function isThrottled(email: string, address: string, now = Date.now()): Promise<boolean> {
-  const { byEmail, byAddress } = await countRecentFailures(email, address, now - WINDOW_MS);
-  return byEmail >= MAX_FAILURES_PER_EMAIL || byAddress >= MAX_FAILURES_PER_ADDRESS;
+/**
+ * Whether one more attempt may be checked, given the attempts in the window (failures and
+ * attempts still being checked).
+ *
+ * An account under attack is held only for the addresses that have failed on it. A hard lock for
+ * everyone would let anyone lock any member out with five wrong passwords a minute; a growing
+ * delay would too, as long as the attacker keeps taking every slot. So an address that has not
+ * failed on the account may still try — once, since that try counts against it. The price: an
+ * attacker with many addresses gets one guess per address per minute, still bounded by the
+ * per-address limit. Without a declared proxy the address is unknown and all callers share one
+ * bucket: the account lock then holds everyone (no address can prove it is not the attacker), and
+ * the per-address limit is skipped, because that shared bucket would let one person hold back the
+ * whole club.
+ */
+export function mayTry(counts: AttemptCounts, address: string): boolean {
+  const known = address !== UNKNOWN_ADDRESS;
+  if (known && counts.byAddress >= MAX_FAILURES_PER_ADDRESS) return false;
+  if (counts.byEmail < MAX_FAILURES_PER_EMAIL) return true;
+  return known && counts.byEmailFromAddress === 0;
 }
 
-export function noteFailure(email: string, address: string, now = Date.now()) {
-  return recordFailure(email, address, now);
+export type Reservation = { email: string; address: string; id: number };
+
+/** Counts this attempt before the password is checked; null when it is held. */
+export async function reserveSignIn(email: string, address: string, now = Date.now()): Promise<Reservation | null> {
+  const id = await reserveAttempt(email, address, { since: now - WINDOW_MS, at: now }, (counts) => mayTry(counts, address));
+  return id === null ? null : { email, address, id };
+}
+
+/** The password was right: the attempt is not a failure. */
+export function releaseSignIn({ email, address, id }: Reservation) {
+  return releaseAttempt(email, address, id);
 }

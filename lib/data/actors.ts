@@ -1,6 +1,6 @@
 import "server-only";
-import { asc, eq } from "drizzle-orm";
-import { getDb } from "@/db/client";
+import { and, asc, eq, sql } from "drizzle-orm";
+import { getDb, writeTransaction } from "@/db/client";
 import { athletes, memberships, organizations, users } from "@/db/schema";
 import { isAthlete } from "@/lib/auth/permissions";
 import { type Role } from "@/lib/domain";
@@ -49,4 +49,45 @@ export async function loadActor(userId: number): Promise<Actor | null> {
     athleteId = linked && linked.organizationId === row.organizationId ? linked.id : null;
   }
   return { ...row, athleteId };
+}
+
+/** What a session token claims: whose it is and which of their session versions it carries. */
+export type SessionClaims = { userId: number; sessionVersion: number };
+
+/**
+ * False once the user's sessions were ended after this token was issued (or the user is gone).
+ * Checked on every request, because a signed token stays valid in any copy of the cookie.
+ */
+export async function sessionIsCurrent({ userId, sessionVersion }: SessionClaims): Promise<boolean> {
+  const [row] = await getDb()
+    .select({ sessionVersion: users.sessionVersion })
+    .from(users)
+    .where(eq(users.id, userId))
+    .limit(1);
+  return row !== undefined && row.sessionVersion === sessionVersion;
+}
+
+/**
+ * Ends every session of this user, on every device. Call it when a password is changed or
+ * reset and when a member is removed: the next request with any older token is signed out.
+ */
+export async function endAllSessions(userId: number): Promise<void> {
+  await writeTransaction((tx) =>
+    tx.update(users).set({ sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId)),
+  );
+}
+
+/**
+ * Sign-out: ends the user's sessions only if the token is still current, so someone holding an
+ * old, already ended cookie cannot use sign-out to end the sessions the user has started since.
+ */
+export async function endSession({ userId, sessionVersion }: SessionClaims): Promise<boolean> {
+  const changed = await writeTransaction((tx) =>
+    tx
+      .update(users)
+      .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+      .where(and(eq(users.id, userId), eq(users.sessionVersion, sessionVersion)))
+      .returning({ id: users.id }),
+  );
+  return changed.length > 0;
 }

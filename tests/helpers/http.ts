@@ -7,8 +7,23 @@ export class HttpSession {
     for (const line of response.headers.getSetCookie()) {
       const [pair] = line.split(";");
       const eq = pair.indexOf("=");
-      this.cookies.set(pair.slice(0, eq).trim(), pair.slice(eq + 1));
+      const name = pair.slice(0, eq).trim();
+      const value = pair.slice(eq + 1);
+      // A cleared cookie comes back empty (and expired): the browser forgets it.
+      if (value === "") this.cookies.delete(name);
+      else this.cookies.set(name, value);
     }
+  }
+
+  /** Another client holding copies of this one's cookies (as if they had been copied out). */
+  copy(): HttpSession {
+    const other = new HttpSession(this.baseUrl);
+    other.cookies = new Map(this.cookies);
+    return other;
+  }
+
+  get signedIn() {
+    return [...this.cookies.keys()].some((k) => k.endsWith("next-auth.session-token"));
   }
 
   get cookieHeader() {
@@ -38,6 +53,17 @@ export class HttpSession {
       headers: { "content-type": "application/x-www-form-urlencoded" },
       body,
     });
-    return { status: response.status, signedIn: [...this.cookies.keys()].some((k) => k.endsWith("next-auth.session-token")) };
+    return { status: response.status, signedIn: this.signedIn };
+  }
+
+  /** What the sign-out button does: POST /api/auth/signout with the csrf token. */
+  async signOut() {
+    const { json } = await this.json("/api/auth/csrf");
+    const body = new URLSearchParams({ csrfToken: json.csrfToken, callbackUrl: "/sign-in", json: "true" });
+    return this.fetch("/api/auth/signout", {
+      method: "POST",
+      headers: { "content-type": "application/x-www-form-urlencoded" },
+      body,
+    });
   }
 }

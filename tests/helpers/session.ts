@@ -1,17 +1,32 @@
+import { eq } from "drizzle-orm";
 import { vi } from "vitest";
+import { getDb } from "@/db/client";
+import { users } from "@/db/schema";
 import { userIdOf } from "./db";
 
 /**
- * Route handlers read the signed-in user through lib/auth/session. Tests replace
- * that one function; everything after it (membership, role, reach) runs for real.
+ * Route handlers read the signed-in user through lib/auth/session. Tests replace that one
+ * function (the token's claims); everything after it (is the session still current? membership,
+ * role, reach) runs for real.
  * Use with: vi.mock("@/lib/auth/session", () => sessionMock);
  */
-export const signedIn = { userId: null as number | null };
+export const signedIn = { userId: null as number | null, sessionVersion: 0 };
 
-export const sessionMock = { currentUserId: vi.fn(async () => signedIn.userId) };
+export const sessionMock = {
+  currentSession: vi.fn(async () =>
+    signedIn.userId === null ? null : { userId: signedIn.userId, sessionVersion: signedIn.sessionVersion },
+  ),
+};
 
+/** Holds a token for this user as a fresh sign-in would: with their current session version. */
 export async function signInAs(email: string | null) {
-  signedIn.userId = email === null ? null : await userIdOf(email);
+  if (email === null) {
+    signedIn.userId = null;
+    return;
+  }
+  signedIn.userId = await userIdOf(email);
+  const [row] = await getDb().select({ v: users.sessionVersion }).from(users).where(eq(users.id, signedIn.userId));
+  signedIn.sessionVersion = row.v;
 }
 
 type Handler<P> = (request: Request, context: { params: Promise<P> }) => Promise<Response>;

@@ -8,6 +8,7 @@ vi.mock("@/lib/auth/session", () => sessionMock);
 
 const { guard, MANAGERS, STAFF } = await import("@/lib/auth/guard");
 const { ApiError } = await import("@/lib/errors");
+const { endAllSessions } = await import("@/lib/data/actors");
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
 const ids = { senior: 0, academy: 0, rowing: 0, seniorAthlete: 0, academyAthlete: 0, tessa: 0, rower: 0, seniorPublished: 0, seniorDraft: 0, rowingSession: 0, clubTest: 0, otherTest: 0 };
@@ -47,6 +48,16 @@ describe("guard: who is asking", () => {
   it("answers 401 to a signed-out caller", async () => {
     await signInAs(null);
     expect(await statusOf(guard())).toBe(401);
+  });
+
+  it("answers 401 to a token issued before the user's sessions were ended", async () => {
+    await signInAs("coach@example.com");
+    expect(await statusOf(guard())).toBe(200);
+    const actor = await guard();
+    await endAllSessions(actor.userId);
+    expect(await statusOf(guard())).toBe(401);
+    await signInAs("coach@example.com");
+    expect(await statusOf(guard())).toBe(200);
   });
 
   it("resolves organisation and role for every demo account", async () => {
