@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { SquadsStatus } from "@/components/squads/squads-status";
 import { TableCard, type Column } from "@/components/table-card";
+import { isCoach } from "@/lib/auth/permissions";
 import type { Role } from "@/lib/domain";
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { squadQueries } from "@/lib/client/queries";
@@ -18,7 +19,7 @@ export function SquadsOverview({ role }: { role: Role }) {
       <div className="mb-4 flex items-baseline justify-between">
         <h1 id="squads-heading" className="text-2xl font-bold">Squads</h1>
         <p className="text-sm text-ink-soft">
-          {role === "coach" ? "The squads you coach" : "Every squad in your organisation"}
+          {isCoach({ role }) ? "The squads you coach" : "Every squad in your organisation"}
         </p>
       </div>
       <SquadsStatus query={squads} role={role} />

@@ -67,7 +67,9 @@ export function Roster({ squadId }: { squadId: number }) {
           {detail.canManage && (
             <button type="button" className="btn-quiet" onClick={() => setPanel({ kind: "settings" })}>Squad settings</button>
           )}
-          <button type="button" className="btn-primary" onClick={() => setPanel({ kind: "add" })}>Add athlete</button>
+          {detail.canEditRoster && (
+            <button type="button" className="btn-primary" onClick={() => setPanel({ kind: "add" })}>Add athlete</button>
+          )}
         </div>
       </div>
 

@@ -6,13 +6,14 @@ import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { squadQueries } from "@/lib/client/queries";
+import { isCoach } from "@/lib/auth/permissions";
 import type { Role } from "@/lib/domain";
 import { PHASE_LABELS, formatDate } from "@/lib/labels";
 import { SquadCreateForm } from "./squad-create-form";
 import { SquadsStatus } from "./squads-status";
 
 /** Roster entry point: pick a squad. The owner may create one. */
-export function SquadList({ role }: { role: Role }) {
+export function SquadList({ role, canCreate }: { role: Role; canCreate: boolean }) {
   const [showArchived, setShowArchived] = useState(false);
   const [creating, setCreating] = useState(false);
   const router = useRouter();
@@ -25,7 +26,7 @@ export function SquadList({ role }: { role: Role }) {
         <div>
           <h1 id="roster-heading" className="text-2xl font-bold">Roster</h1>
           <p className="text-sm text-ink-soft">
-            {role === "coach" ? "Open one of your squads to see and change its athletes." : "Open a squad to see and change its athletes."}
+            {isCoach({ role }) ? "Open one of your squads to see and change its athletes." : "Open a squad to see and change its athletes."}
           </p>
         </div>
         <div className="flex items-center gap-3">
@@ -33,7 +34,7 @@ export function SquadList({ role }: { role: Role }) {
             <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} />
             Show archived squads
           </label>
-          {role === "owner" && (
+          {canCreate && (
             <button type="button" className="btn-primary" onClick={() => setCreating(true)}>New squad</button>
           )}
         </div>

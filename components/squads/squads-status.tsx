@@ -1,6 +1,7 @@
 "use client";
 
 import { QueryStatus, type QueryState } from "@/components/query-status";
+import { isCoach } from "@/lib/auth/permissions";
 import type { Role } from "@/lib/domain";
 
 /** Loading, failure and empty state of the caller's squads (the Squads overview and the Roster list). */
@@ -11,7 +12,7 @@ export function SquadsStatus({
   query: QueryState & { data?: unknown[] };
   role: Role;
 }) {
-  const none = role === "coach" ? "You are not assigned to a squad yet. Ask your head of performance to add you." : "No squads yet.";
+  const none = isCoach({ role }) ? "You are not assigned to a squad yet. Ask your head of performance to add you." : "No squads yet.";
   return (
     <QueryStatus query={query} loading="Loading squads…" failure="Squads could not load" empty={query.data?.length === 0 && none} />
   );

@@ -28,12 +28,6 @@ const testColumns = {
   version: tests.version,
 };
 
-export type TestRow = {
-  id: number; name: string; unit: string; decimals: number; direction: "higher" | "lower"; trialRule: "best" | "mean";
-  trialsPerSession: number; swcMethod: "sd-factor" | "fixed" | "cv-factor"; swcValue: number; cvPercent: number | null;
-  typicalError: number | null; typicalErrorDf: number | null; typicalErrorSource: string | null;
-  plausibleMin: number | null; plausibleMax: number | null; archived: boolean; version: number;
-};
 
 const nameTaken = (name: string) => conflict(`A test called "${name}" already exists in your library.`);
 
@@ -50,7 +44,7 @@ export async function listTests(actor: Actor, { includeArchived = false } = {}) 
   return rows.map((r) => ({ ...r, resultCount: byTest.get(r.id) ?? 0 }));
 }
 
-export async function getTest(actor: Actor, testId: number): Promise<TestRow> {
+export async function getTest(actor: Actor, testId: number) {
   const [row] = await getDb()
     .select(testColumns)
     .from(tests)
@@ -59,7 +53,7 @@ export async function getTest(actor: Actor, testId: number): Promise<TestRow> {
   return row;
 }
 
-export async function createTest(actor: Actor, input: TestCreateInput): Promise<TestRow> {
+export async function createTest(actor: Actor, input: TestCreateInput) {
   try {
     return await writeTransaction(async (tx) => {
       const [row] = await tx
@@ -76,7 +70,7 @@ export async function createTest(actor: Actor, input: TestCreateInput): Promise<
 }
 
 /** Applies an edit only if nobody changed the test since `version` was read. */
-export async function updateTest(actor: Actor, testId: number, input: TestUpdateInput): Promise<TestRow> {
+export async function updateTest(actor: Actor, testId: number, input: TestUpdateInput) {
   const { version, ...changes } = input;
   try {
     return await writeTransaction(async (tx) => {

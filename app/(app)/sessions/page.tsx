@@ -1,7 +1,8 @@
 import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { SessionList } from "@/components/sessions/session-list";
-import { MANAGERS, STAFF } from "@/lib/auth/guard";
+import { STAFF } from "@/lib/auth/guard";
+import { canPublish } from "@/lib/auth/permissions";
 import { pageGuard } from "@/lib/auth/page-guard";
 import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
 import { listSessions } from "@/lib/data/sessions";
@@ -24,7 +25,7 @@ export default async function SessionsPage({ searchParams }: { searchParams: Pro
   ]);
   return (
     <HydrationBoundary state={dehydrate(client)}>
-      <SessionList canPublish={MANAGERS.includes(actor.role)} initialSquadId={squadId} />
+      <SessionList canPublish={canPublish(actor)} initialSquadId={squadId} />
     </HydrationBoundary>
   );
 }

@@ -3,6 +3,7 @@ import type { Metadata } from "next";
 import { SquadList } from "@/components/squads/squad-list";
 import { STAFF } from "@/lib/auth/guard";
 import { pageGuard } from "@/lib/auth/page-guard";
+import { canManageSquad } from "@/lib/auth/permissions";
 import { squadQueries } from "@/lib/client/queries";
 import { listSquads } from "@/lib/data/squads";
 import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
@@ -15,7 +16,7 @@ export default async function RosterIndexPage() {
   await prefetch(client, squadQueries.list(), () => listSquads(actor));
   return (
     <HydrationBoundary state={dehydrate(client)}>
-      <SquadList role={actor.role} />
+      <SquadList role={actor.role} canCreate={canManageSquad(actor)} />
     </HydrationBoundary>
   );
 }
