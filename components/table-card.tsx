@@ -28,7 +28,7 @@ export function TableCard({
   children: ReactNode;
 }) {
   return (
-    <div className="card overflow-x-auto">
+    <div className="card relative overflow-x-auto">
       <table className="w-full text-left text-sm">
         {caption && <caption className="px-4 pt-3 text-left text-sm text-ink-soft">{caption}</caption>}
         <thead className={`border-b border-line text-xs text-ink-faint${asWritten ? "" : " uppercase tracking-wide"}`}>

@@ -56,7 +56,7 @@ export function RecentChanges({ sessionId }: { sessionId: number }) {
               <span className="num text-ink-faint">{timeWords(e.at)}</span>
               <span>
                 <EventText e={e} />
-                {e.undone && <span className="ml-2 rounded bg-steady-soft px-1.5 text-xs text-steady">undone</span>}
+                {e.undone && <span className="ml-2 rounded bg-steady-soft px-1.5 text-xs text-ink-soft">undone</span>}
               </span>
             </li>
           ))}

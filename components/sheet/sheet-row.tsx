@@ -107,7 +107,7 @@ export function SheetRow({
                     data-col={navIndex.get(`${test.id}:flag`) ?? 0}
                     value={shown.flag ?? ""}
                     onChange={(e) => sheet.setFlag(athlete.id, test.id, (e.target.value || null) as ResultFlag | null)}
-                    className={`h-10 w-[5.5rem] rounded border border-line bg-white px-1 text-sm focus:border-gain focus:outline-none focus:ring-2 focus:ring-gain ${
+                    className={`h-10 w-[5.5rem] rounded border border-control bg-white px-1 text-sm focus:border-gain focus:outline-none focus:ring-2 focus:ring-gain ${
                       shown.flag ? "font-semibold" : "text-ink-faint"
                     }`}
                   >

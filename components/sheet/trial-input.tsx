@@ -42,7 +42,7 @@ export const TrialInput = memo(function TrialInput({
     ? "border-decline bg-decline-soft ring-1 ring-decline"
     : outside
       ? "border-decline border-dashed ring-1 ring-decline/60"
-      : "border-line";
+      : "border-control";
 
   return (
     <span className="relative block">

@@ -93,7 +93,7 @@ export function AthleteTable({
           <tr key={a.id} className={`border-b border-line last:border-0 ${a.archived ? "bg-paper text-ink-faint" : ""}`}>
             <td className="px-3 py-2">
               <span className="font-semibold">{a.name}</span>
-              {a.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
+              {a.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>}
             </td>
             <td className="px-3 py-2">{a.position ?? "–"}</td>
             <td className="px-3 py-2">{a.sex ? SEX_LABELS[a.sex] : "–"}</td>

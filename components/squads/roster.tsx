@@ -55,7 +55,7 @@ export function Roster({ squadId }: { squadId: number }) {
         <div>
           <h1 id="squad-heading" className="text-2xl font-bold">
             {squad.name}
-            {squad.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 align-middle text-xs text-steady">Archived</span>}
+            {squad.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 align-middle text-xs text-ink-soft">Archived</span>}
           </h1>
           <p className="text-sm text-ink-soft">
             {squad.sport ?? "No sport given"} · Coaches:{" "}

@@ -51,7 +51,7 @@ export function SquadList({ role, canCreate }: { role: Role; canCreate: boolean 
               >
                 <span className="flex items-baseline justify-between gap-2">
                   <span className="text-lg font-bold">{squad.name}</span>
-                  {squad.archived && <span className="rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
+                  {squad.archived && <span className="rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>}
                 </span>
                 <span className="block text-sm text-ink-soft">
                   {squad.sport ?? "No sport given"} · <span className="num">{squad.athleteCount}</span> athletes

@@ -77,7 +77,7 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
               <tr key={test.id} className={`border-b border-line align-top last:border-0 ${test.archived ? "bg-paper text-ink-faint" : ""}`}>
                 <td className="px-3 py-2.5">
                   <span className="font-semibold">{test.name}</span>
-                  {test.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-steady">Archived</span>}
+                  {test.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>}
                   <div className="text-xs text-ink-faint">{test.decimals} decimal{test.decimals === 1 ? "" : "s"}</div>
                 </td>
                 <td className="px-3 py-2.5">{test.unit}</td>

@@ -1,0 +1,79 @@
+/**
+ * Every screen, as its users meet it: axe-core (WCAG 2.2 A and AA rules) finds no violation, and
+ * the page never scrolls sideways — staff screens at 1280 px and on an 820 px tablet, the
+ * athlete's at 390 px on a phone (PRODUCT.md §7). Screenshots land in tests/.artifacts/.
+ */
+import { createRequire } from "node:module";
+import type { Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
+import { openBrowser, screenshot, signInThroughForm } from "../helpers/browser";
+import { HttpSession } from "../helpers/http";
+
+const baseUrl = inject("baseUrl");
+const axePath = createRequire(import.meta.url).resolve("axe-core/axe.min.js");
+
+type Violation = { id: string; impact: string | null; nodes: { target: string[] }[] };
+
+async function audit(page: Page, name: string) {
+  await page.addScriptTag({ path: axePath });
+  const violations = await page.evaluate(async () => {
+    const axe = (window as unknown as { axe: { run: (ctx: Document, o: object) => Promise<{ violations: unknown[] }> } }).axe;
+    const result = await axe.run(document, { runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"] } });
+    return result.violations;
+  });
+  const sideways = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
+  await screenshot(page, name);
+  return {
+    violations: (violations as Violation[]).map(
+      (v) => `${v.id} (${v.impact}) ×${v.nodes.length}: ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join(", ")}`,
+    ),
+    sideways,
+  };
+}
+
+describe("accessibility and fit of every screen", () => {
+  let browser: Awaited<ReturnType<typeof openBrowser>>;
+  let paths: string[] = [];
+
+  beforeAll(async () => {
+    browser = await openBrowser();
+    const http = new HttpSession(baseUrl);
+    await http.signIn("scientist@example.com");
+    const sessions = (await http.json("/api/sessions")).json.sessions as { id: number }[];
+    const squads = (await http.json("/api/squads")).json.squads as { id: number }[];
+    paths = ["/", "/squads", `/squads/${squads[0].id}`, "/tests", "/sessions", `/sessions/${sessions[0].id}`, `/sessions/${sessions[0].id}/import`];
+  });
+  afterAll(() => browser?.close());
+
+  it("staff screens at 1280 px and on an 820 px tablet", async () => {
+    const page = await browser.context.newPage();
+    await signInThroughForm(page, baseUrl, "scientist@example.com");
+    const problems: string[] = [];
+    for (const width of [1280, 820]) {
+      await page.setViewportSize({ width, height: 900 });
+      for (const path of paths) {
+        await page.goto(`${baseUrl}${path}`);
+        await page.waitForSelector("h1");
+        const name = `a11y-${width}-${path.replaceAll("/", "_") || "home"}`;
+        const { violations, sideways } = await audit(page, name);
+        problems.push(...violations.map((v) => `${width}px ${path}: ${v}`));
+        if (sideways > 0) problems.push(`${width}px ${path}: scrolls sideways by ${sideways}px`);
+      }
+    }
+    await page.close();
+    expect(problems).toEqual([]);
+  });
+
+  it("sign-in and the athlete's home on a 390 px phone", async () => {
+    const page = await browser.context.newPage();
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.goto(`${baseUrl}/sign-in`);
+    const signIn = await audit(page, "a11y-390-sign-in");
+    await signInThroughForm(page, baseUrl, "athlete@example.com");
+    await page.waitForSelector("h1");
+    const home = await audit(page, "a11y-390-athlete-home");
+    await page.close();
+    expect([...signIn.violations, ...home.violations]).toEqual([]);
+    expect(Math.max(signIn.sideways, home.sideways)).toBeLessThanOrEqual(0);
+  });
+});
