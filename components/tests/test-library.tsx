@@ -89,7 +89,7 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
                   {test.trialRule === "best" ? "Best" : "Mean"} of <span className="num">{test.trialsPerSession}</span>
                 </td>
                 <td className="whitespace-nowrap px-3 py-2.5">{swcWords(test)}</td>
-                <td className="px-3 py-2.5">
+                <td className="min-w-40 px-3 py-2.5">
                   {te ? <span className="num">{te}</span> : <span className="text-ink-faint">Not set</span>}
                   {test.typicalErrorSource && <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>}
                 </td>
