@@ -131,7 +131,12 @@ export function buildChangeReport({ test, rows, confidence, swc: override }: Cha
 
   const standardisedChange = squad.baselineSd > 0 ? squad.meanDiff / squad.baselineSd : null;
   return {
-    settings: { confidence, swcMethod: swcSetting.method, swcValue: swcSetting.value, swcFromTest: override === undefined },
+    settings: {
+      confidence,
+      swcMethod: swcSetting.method,
+      swcValue: swcSetting.value,
+      swcSource: override === undefined ? ("test" as const) : ("report" as const),
+    },
     squad: {
       n: squad.n,
       df: squad.df,

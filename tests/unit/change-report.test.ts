@@ -88,7 +88,7 @@ describe("buildChangeReport", () => {
   it("takes an SWC override: fixed, or a factor × CV% of the mean pre score", () => {
     const fixed = buildChangeReport({ test: higher, rows: rowsOf(G1, G2), confidence: 0.95, swc: { method: "fixed", value: 1 } });
     expect(fixed.squad.swc).toBe(1);
-    expect(fixed.settings.swcFromTest).toBe(false);
+    expect(fixed.settings.swcSource).toBe("report");
     // 0.3 × CV 2 % × mean pre 0.75 → 0.0045 (METHODS.md §2 formula)
     const cv = buildChangeReport({ test: { ...higher, cvPercent: 2 }, rows: rowsOf(G1, G2), confidence: 0.95, swc: { method: "cv-factor", value: 0.3 } });
     expectRelClose(cv.squad.swc, (0.3 * 2 * 0.75) / 100, 1e-12);

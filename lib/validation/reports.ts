@@ -1,0 +1,49 @@
+/**
+ * The Change report's settings as they travel in its URL (`/reports/change?testId=…`): the page
+ * and `GET /api/reports/change` read them with this one schema, so a shared link always means
+ * the same report.
+ */
+import { z } from "zod";
+import { SWC_METHODS } from "@/lib/domain";
+
+/** The confidence levels a report offers; 90 % is the trade's usual choice for practical decisions. */
+export const REPORT_CONFIDENCES = [0.8, 0.9, 0.95, 0.99] as const;
+
+const queryId = (label: string) =>
+  z
+    .string({ message: `${label} is required.` })
+    .regex(/^[1-9][0-9]{0,15}$/, `${label} must be a record id.`)
+    .transform(Number)
+    .refine(Number.isSafeInteger, `${label} must be a record id.`);
+
+export const changeReportQuerySchema = z
+  .object({
+    testId: queryId("The test"),
+    fromSessionId: queryId("The first session"),
+    toSessionId: queryId("The second session"),
+    confidence: z
+      .string()
+      .optional()
+      .transform((v) => (v === undefined || v === "" ? 0.9 : Number(v)))
+      .refine((v) => (REPORT_CONFIDENCES as readonly number[]).includes(v), "Confidence is 0.8, 0.9, 0.95 or 0.99."),
+    swcMethod: z.enum(SWC_METHODS, { message: "The SWC method is sd-factor, fixed or cv-factor." }).optional(),
+    swcValue: z
+      .string()
+      .optional()
+      .transform((v) => (v === undefined || v.trim() === "" ? undefined : Number(v.replace(",", "."))))
+      .refine((v) => v === undefined || (Number.isFinite(v) && v >= 0 && v <= 1e6), "The SWC value must be a number, zero or more."),
+  })
+  .refine((q) => q.fromSessionId !== q.toSessionId, { message: "Choose two different sessions.", path: ["toSessionId"] })
+  .refine((q) => q.swcMethod === undefined || q.swcValue !== undefined, {
+    message: "Give the SWC value (a factor, or a fixed value in the test's unit) with its method.",
+    path: ["swcValue"],
+  });
+
+export type ChangeReportQuery = z.infer<typeof changeReportQuerySchema>;
+
+/** Reads the schema's fields from URL search params (the first of repeated names). */
+export function searchParamsObject(params: URLSearchParams): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const [key, value] of params) if (!(key in out)) out[key] = value;
+  return out;
+}
