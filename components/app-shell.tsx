@@ -14,10 +14,11 @@ export function AppShell({ actor, children }: { actor: Actor; children: React.Re
             <NavLinks items={navFor(actor.role)} />
           </nav>
           <div className="flex items-center gap-3 text-sm">
-            <span className="text-white/80" title={actor.organizationName}>
-              <span className="font-semibold text-white">{actor.name}</span> · {ROLE_LABELS[actor.role]}
-              {/* On a tablet the organisation name would push the navigation onto two rows. */}
-              <span className="hidden xl:inline"> · {actor.organizationName}</span>
+            <span className="text-white/80" title={`${ROLE_LABELS[actor.role]} · ${actor.organizationName}`}>
+              <span className="font-semibold text-white">{actor.name}</span>
+              {/* The role and the organisation would push the navigation onto two rows on smaller screens. */}
+              <span className="hidden lg:inline"> · {ROLE_LABELS[actor.role]}</span>
+              <span className="hidden 2xl:inline"> · {actor.organizationName}</span>
             </span>
             <SignOutButton />
           </div>

@@ -9,6 +9,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/squads", label: "Roster", roles: STAFF },
   { href: "/tests", label: "Test library", roles: STAFF },
   { href: "/sessions", label: "Sessions", roles: STAFF },
+  { href: "/reports/change", label: "Change report", roles: STAFF },
   { href: "/", label: "My progress", roles: ["athlete"] },
 ];
 

@@ -11,7 +11,9 @@ import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/ath
 import type { listAthleteResults } from "@/lib/data/athlete-results";
 import type { getSessionSheet, listSessions } from "@/lib/data/sessions";
 import type { getSquad, listCoaches, listSquads } from "@/lib/data/squads";
+import type { getChangeReport } from "@/lib/data/reports";
 import type { listTests } from "@/lib/data/tests";
+import type { ChangeReportQuery } from "@/lib/validation/reports";
 import { fetchJson } from "./fetch-json";
 
 /** What a lib/data function resolves to: the payload of the query that reads it. */
@@ -25,6 +27,7 @@ export const queryKeys = {
   tests: ["tests"] as const,
   sessions: ["sessions"] as const,
   coaches: ["coaches"] as const,
+  reports: ["reports"] as const,
 };
 
 export const squadQueries = {
@@ -105,6 +108,30 @@ export const sessionQueries = {
     }),
 };
 
+/** The query string of a Change report: the same names and values its page URL carries. */
+export function changeReportSearch(q: Omit<ChangeReportQuery, "swcValue"> & { swcValue?: number }): string {
+  const params = new URLSearchParams({
+    testId: String(q.testId),
+    fromSessionId: String(q.fromSessionId),
+    toSessionId: String(q.toSessionId),
+    confidence: String(q.confidence),
+  });
+  if (q.swcMethod && q.swcValue !== undefined) {
+    params.set("swcMethod", q.swcMethod);
+    params.set("swcValue", String(q.swcValue));
+  }
+  return params.toString();
+}
+
+export const reportQueries = {
+  change: (q: ChangeReportQuery) =>
+    queryOptions({
+      // Keyed by the URL's query, so a shared link and the screen's own reads meet in one entry.
+      queryKey: [...queryKeys.reports, "change", changeReportSearch(q)] as const,
+      queryFn: () => fetchJson<Loaded<typeof getChangeReport>>(`/api/reports/change?${changeReportSearch(q)}`),
+    }),
+};
+
 export type SquadSummary = Loaded<typeof listSquads>[number];
 export type SquadDetail = Loaded<typeof getSquad>;
 export type RosterAthlete = Loaded<typeof listSquadAthletes>[number];
@@ -114,3 +141,4 @@ export type SheetData = Loaded<typeof getSessionSheet>;
 export type SheetTest = SheetData["tests"][number];
 export type ResultRow = SheetData["results"][number];
 export type AuditEvent = Loaded<typeof listSessionAudit>[number];
+export type ChangeReportData = Loaded<typeof getChangeReport>;

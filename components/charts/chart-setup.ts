@@ -1,0 +1,89 @@
+/**
+ * chart.js for our charts only: the pieces they draw with (tree-shaken), Barlow as the font,
+ * the product's colours, and the SWC band drawn behind the data.
+ */
+import {
+  BarController,
+  BarElement,
+  CategoryScale,
+  Chart,
+  type ChartType,
+  Legend,
+  LinearScale,
+  LineController,
+  LineElement,
+  type Plugin,
+  PointElement,
+  ScatterController,
+  Tooltip,
+} from "chart.js";
+import type { Verdict } from "@/lib/stats";
+
+Chart.register(BarController, BarElement, CategoryScale, LinearScale, LineController, LineElement, PointElement, ScatterController, Tooltip, Legend);
+Chart.defaults.font.family = "Barlow, system-ui, sans-serif";
+Chart.defaults.font.size = 13;
+Chart.defaults.color = "#3B4866";
+// Printing and screenshots must show the final frame, not a half-drawn animation.
+Chart.defaults.animation = false;
+
+export const COLOURS = {
+  ink: "#1E2A44",
+  gain: "#0F766E",
+  decline: "#B45309",
+  steady: "#64748B",
+  inconclusive: "#586176",
+  band: "#F3E9D8",
+  grid: "#E7E3DA",
+};
+
+/** Colour and point shape of a verdict: the shape carries it too, so colour is never alone. */
+export function verdictMark(verdict: Verdict | null): { colour: string; shape: "triangle" | "rectRot" | "circle" | "crossRot"; rotation: number } {
+  switch (verdict) {
+    case "clear-gain":
+    case "gain":
+      return { colour: COLOURS.gain, shape: "triangle", rotation: 90 };
+    case "clear-decline":
+    case "decline":
+      return { colour: COLOURS.decline, shape: "triangle", rotation: -90 };
+    case "steady":
+      return { colour: COLOURS.steady, shape: "rectRot", rotation: 0 };
+    case "inconclusive":
+      return { colour: COLOURS.inconclusive, shape: "crossRot", rotation: 0 };
+    default:
+      return { colour: COLOURS.ink, shape: "circle", rotation: 0 };
+  }
+}
+
+/**
+ * Shades [−SWC, +SWC] on the value axis ("x" for horizontal charts, "y" for vertical ones)
+ * and draws the zero line, behind the datasets.
+ */
+export function swcBand<T extends ChartType>(swc: number, axis: "x" | "y"): Plugin<T> {
+  return {
+    id: "swcBand",
+    beforeDatasetsDraw(chart) {
+      const scale = chart.scales[axis];
+      const { ctx, chartArea: area } = chart;
+      if (!scale || !area) return;
+      const a = scale.getPixelForValue(-swc);
+      const b = scale.getPixelForValue(swc);
+      const zero = scale.getPixelForValue(0);
+      ctx.save();
+      ctx.fillStyle = COLOURS.band;
+      if (axis === "x") ctx.fillRect(Math.min(a, b), area.top, Math.abs(b - a), area.bottom - area.top);
+      else ctx.fillRect(area.left, Math.min(a, b), area.right - area.left, Math.abs(b - a));
+      ctx.strokeStyle = COLOURS.ink;
+      ctx.lineWidth = 1;
+      ctx.beginPath();
+      if (axis === "x") {
+        ctx.moveTo(zero, area.top);
+        ctx.lineTo(zero, area.bottom);
+      } else {
+        ctx.moveTo(area.left, zero);
+        ctx.lineTo(area.right, zero);
+      }
+      ctx.stroke();
+      ctx.restore();
+    },
+  };
+}
