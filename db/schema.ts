@@ -272,6 +272,40 @@ export const reliabilityStudies = sqliteTable(
   (t) => [index("reliability_org_test_idx").on(t.organizationId, t.testId)],
 );
 
+/**
+ * A Change report saved with the scientist's interpretation note: the settings that reproduce
+ * it and a snapshot of every number as it stood, so it reopens exactly as written even after
+ * scores change (and can say that they did).
+ */
+export const savedReports = sqliteTable(
+  "saved_reports",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    squadId: integer("squad_id")
+      .notNull()
+      .references(() => squads.id, { onDelete: "cascade" }),
+    testId: integer("test_id")
+      .notNull()
+      .references(() => tests.id, { onDelete: "cascade" }),
+    // A saved report holds athletes' scores: it goes when either of its sessions goes.
+    fromSessionId: integer("from_session_id")
+      .notNull()
+      .references(() => testingSessions.id, { onDelete: "cascade" }),
+    toSessionId: integer("to_session_id")
+      .notNull()
+      .references(() => testingSessions.id, { onDelete: "cascade" }),
+    settings: text("settings", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
+    snapshot: text("snapshot", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
+    note: text("note").notNull(),
+    createdBy: integer("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("saved_reports_org_squad_idx").on(t.organizationId, t.squadId, t.createdAt)],
+);
+
 export const uploads = sqliteTable(
   "uploads",
   {
