@@ -89,12 +89,15 @@ const escapeClass = (d: Delimiter) => (d === "\t" ? "\\t" : d === "|" ? "\\|" : 
 export function* readCsv(text: string): Steps<CsvTable> {
   const delimiter = yield* delimiterSteps(text);
   const D = delimiter.charCodeAt(0);
-  // The end of an unquoted field; searching from lastIndex never rescans what was read.
-  const fieldEnd = new RegExp(`[${escapeClass(delimiter)}\\r\\n]`, "g");
+  // The end of an unquoted field. A plain loop: a regex match would allocate an array per cell.
   const endOfField = (from: number) => {
-    fieldEnd.lastIndex = from;
-    const match = fieldEnd.exec(text);
-    return match ? match.index : n;
+    let at = from;
+    while (at < n) {
+      const c = text.charCodeAt(at);
+      if (c === D || c === LF || c === CR) break;
+      at++;
+    }
+    return at;
   };
   const n = text.length;
   const overflowTail = new RegExp(`[^${escapeClass(delimiter)} \t]`, "g");

@@ -46,11 +46,16 @@ describe("reading a file is linear in its size", () => {
       const n = 1 << 19;
       const small = make(n);
       const large = make(4 * n);
-      const t1 = fastest(() => analyseCsv(small, {}, context));
-      const t4 = fastest(() => analyseCsv(large, {}, context));
-      // Linear work grows 4×, quadratic 16×: a threshold of 8 sits far from both, so a busy
-      // machine does not decide. The floor keeps timer noise on tiny runs out of it.
-      expect(t4 / Math.max(t1, 5)).toBeLessThan(8);
+      // Linear work grows 4×, quadratic 16×: a threshold of 8 sits far from both. A busy
+      // machine can still slow one run, so the best of three attempts counts (a quadratic step
+      // fails every attempt). The floor keeps timer noise on tiny runs out of it.
+      let ratio = Infinity;
+      for (let attempt = 0; attempt < 3 && ratio >= 8; attempt++) {
+        const t1 = fastest(() => analyseCsv(small, {}, context));
+        const t4 = fastest(() => analyseCsv(large, {}, context));
+        ratio = Math.min(ratio, t4 / Math.max(t1, 10));
+      }
+      expect(ratio).toBeLessThan(8);
     });
   }
 });
