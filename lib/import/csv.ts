@@ -227,7 +227,8 @@ export function* readCsv(text: string): Steps<CsvTable> {
         break;
       }
       const inner = text.slice(start, close === -1 ? n : close);
-      value = (doubled ? inner.replace(/""/g, '"') : inner) + tail;
+      // split/join: a regex replace grew faster than the field on a field of a million doubled quotes.
+      value = (doubled ? inner.split('""').join('"') : inner) + tail;
       c = i < n ? text.charCodeAt(i) : -1;
     } else if (c === D || c === LF || c === CR || c === -1) {
       value = "";
