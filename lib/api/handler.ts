@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
-import { ApiError, invalidInput, type ErrorBody, type FieldErrors } from "@/lib/errors";
+import { ApiError, invalidInput, type FieldErrors } from "@/lib/errors";
 
 function zodFieldErrors(error: ZodError): FieldErrors {
   const fields: FieldErrors = {};
@@ -11,16 +11,42 @@ function zodFieldErrors(error: ZodError): FieldErrors {
   return fields;
 }
 
-function errorResponse(error: unknown): NextResponse<ErrorBody> {
+/** A body that cannot fail to build: the answer when even the error response could not be made. */
+const INTERNAL_BODY = JSON.stringify({ error: { code: "internal", message: "Something went wrong on our side. Nothing was changed." } });
+const internalError = () => new Response(INTERNAL_BODY, { status: 500, headers: { "content-type": "application/json" } });
+
+/** Logs without letting the log itself fail (a throwing getter, a huge message) or flood the log. */
+function logSafely(label: string, error: unknown) {
+  try {
+    console.error(label, error);
+  } catch {
+    try {
+      const text = error instanceof Error ? `${error.name}: ${error.message}` : typeof error;
+      console.error(label, text.slice(0, 500));
+    } catch {
+      // Nothing is left to report with; the 500 still goes out.
+    }
+  }
+}
+
+function buildErrorResponse(error: unknown): Response {
   if (error instanceof ApiError) return NextResponse.json(error.toBody(), { status: error.status });
   if (error instanceof ZodError) {
     return NextResponse.json(invalidInput("Some fields need attention.", zodFieldErrors(error)).toBody(), { status: 422 });
   }
-  console.error("Unhandled API error", error);
-  return NextResponse.json(
-    { error: { code: "internal", message: "Something went wrong on our side. Nothing was changed." } } as ErrorBody,
-    { status: 500 },
-  );
+  logSafely("Unhandled API error", error);
+  return internalError();
+}
+
+/** The one error shape for any failure; never throws (if the answer cannot be built, a fixed 500). */
+export function errorResponse(error: unknown): Response {
+  try {
+    return buildErrorResponse(error);
+  } catch (failure) {
+    // E.g. an error list too large to serialise (RangeError: Invalid string length).
+    logSafely("Could not build the error response", failure);
+    return internalError();
+  }
 }
 
 type RouteContext<P> = { params: Promise<P> };

@@ -10,9 +10,10 @@ import { athletes, results, squadAthletes, squads, testingSessions, tests, uploa
 import { canEditSession } from "@/lib/auth/permissions";
 import { type Phase, type SessionStatus } from "@/lib/domain";
 import { ApiError, forbidden } from "@/lib/errors";
-import { analyseCsv, type Analysis } from "@/lib/import/analyse";
-import { ImportFileError, decodeCsvBytes } from "@/lib/import/decode";
-import { MAX_IMPORT_BYTES, MAX_LISTED_REPLACEMENTS, PREVIEW_ROWS, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
+import { analyseCsvInSlices, type Analysis } from "@/lib/import/analyse";
+import { runInSlices } from "@/lib/import/cooperative";
+import { ImportFileError, decodeSteps } from "@/lib/import/decode";
+import { MAX_IMPORT_BYTES, MAX_LISTED_REPLACEMENTS, MAX_SHOWN_CHARS, PREVIEW_ROWS, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
 import { planWrites, resultKey, type ResultWrite } from "@/lib/import/merge";
 import { type ImportOptions, mappingRequestOf } from "@/lib/validation/import";
 import { describeReplacements, type ImportCommitted, type ImportPreview } from "@/lib/import/summary";
@@ -74,15 +75,17 @@ async function loadExisting(db: Reader, session: ImportSession): Promise<Map<str
   return new Map(rows.map((r) => [resultKey(r.athleteId, r.testId), { trials: r.trials ?? [], value: r.value, flag: r.flag, version: r.version }]));
 }
 
-function decode(bytes: Uint8Array): string {
+async function decode(bytes: Uint8Array): Promise<string> {
   if (bytes.length > MAX_IMPORT_BYTES) throw new ApiError(413, "payload_too_large", TOO_LARGE_MESSAGE);
   try {
-    return decodeCsvBytes(bytes);
+    return await runInSlices(decodeSteps(bytes));
   } catch (error) {
     if (error instanceof ImportFileError) throw new ApiError(error.status, error.code, error.message);
     throw error;
   }
 }
+
+const clip = (cell: string) => (cell.length > MAX_SHOWN_CHARS ? `${cell.slice(0, MAX_SHOWN_CHARS)}…` : cell);
 
 const testsMap = (context: ImportContext) => new Map(context.tests.map((t) => [t.id, t]));
 
@@ -90,13 +93,14 @@ const testsMap = (context: ImportContext) => new Map(context.tests.map((t) => [t
 export async function runImport(actor: Actor, sessionId: number, file: ImportFile, options: ImportOptions): Promise<ImportPreview | ImportCommitted> {
   const session = await getImportSession(actor, sessionId);
   if (!session.canImport) throw forbidden("This session is published; a sport scientist or the owner can import into it.");
-  const text = decode(file.bytes);
+  const text = await decode(file.bytes);
   const context = await loadImportContext(session);
-  const analysis = analyseCsv(text, mappingRequestOf(options), context);
+  const analysis = await analyseCsvInSlices(text, mappingRequestOf(options), context);
   if (options.mode === "preview") return preview(session, context, analysis, file);
   const { plan, table } = analysis;
   if (plan.errorCount > 0) {
-    const listed = plan.errors.length < plan.errorCount ? ` (the first ${plan.errors.length} are listed)` : "";
+    const unlisted = plan.errorCount - plan.errors.length;
+    const listed = unlisted > 0 ? ` (the first ${plan.errors.length} are listed; ${unlisted} more are not)` : "";
     throw new ApiError(
       422,
       "invalid_input",
@@ -132,7 +136,7 @@ async function preview(session: ImportSession, context: ImportContext, analysis:
     rowCount: plan.rowCount,
     sample: table.rows.slice(0, PREVIEW_ROWS).map((cells, i) => ({
       row: table.rowNumbers[i],
-      cells: Array.from({ length: Math.max(width, cells.length) }, (_, c) => cells[c] ?? ""),
+      cells: Array.from({ length: Math.max(width, cells.length) }, (_, c) => clip(cells[c] ?? "")),
     })),
     parsed: plan.sample,
     unknownAthletes: plan.unknownAthletes,

@@ -15,3 +15,16 @@ export const MAX_LISTED_ERRORS = 200;
 
 /** Replaced values listed in a preview or a 409 answer. */
 export const MAX_LISTED_REPLACEMENTS = 200;
+
+/**
+ * Columns read from a file. A battery's tests × trials plus the usual ride-along columns fit in
+ * far fewer, and the mapping step takes at most 500 columns; it also bounds the work and the
+ * answer for a file of 100 000 columns.
+ */
+export const MAX_IMPORT_COLUMNS = 500;
+
+/** A column name longer than this is not a name (the mapping step takes 200 characters). */
+export const MAX_HEADER_CHARS = 200;
+
+/** Cell text shown back in a preview or a message; the rest is elided. */
+export const MAX_SHOWN_CHARS = 200;

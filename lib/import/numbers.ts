@@ -1,3 +1,4 @@
+import { isStorableTrial, TRIAL_RANGE_TEXT } from "@/lib/trials";
 import type { Delimiter } from "./types";
 
 /** A number, null for an empty cell, or a string saying why the cell is not a score (no object per cell). */
@@ -16,21 +17,33 @@ const COMMA = /^[+-]?(?:\d+(?:,\d*)?|,\d+)$/;
  */
 export function parseScore(raw: string, delimiter: Delimiter): ScoreParse {
   // The common case first: a plain number with a decimal point and no spaces.
-  if (PLAIN.test(raw)) return Number(raw);
+  if (PLAIN.test(raw)) return storable(Number(raw), raw);
   const text = raw.trim();
   if (text === "") return null;
-  if (PLAIN.test(text)) return Number(text);
+  if (PLAIN.test(text)) return storable(Number(text), text);
   if (COMMA.test(text)) {
     if (delimiter === ",") {
-      return `“${text}” has a comma, which is ambiguous in a comma-separated file (decimal or thousands?). Write it with a decimal point, or save the file with “;” as delimiter.`;
+      return `“${clip(text)}” has a comma, which is ambiguous in a comma-separated file (decimal or thousands?). Write it with a decimal point, or save the file with “;” as delimiter.`;
     }
-    return Number(text.replace(",", "."));
+    return storable(Number(text.replace(",", ".")), text);
   }
   if (/^[+-]?[\d.,'\s]+$/.test(text) && /\d/.test(text)) {
-    return `“${text}” looks like a number with thousands separators or two decimal marks. Write it plainly, e.g. 1480 or 1.86.`;
+    return `“${clip(text)}” looks like a number with thousands separators or two decimal marks. Write it plainly, e.g. 1480 or 1.86.`;
   }
-  if (/^[+-]?(?:\d+[.,]?\d*|[.,]\d+)\s*[a-zA-Z%]+$/.test(text)) {
-    return `“${text}” has a unit or letters after the number. Write the number only; the test's unit is known.`;
+  // One way to split the digits, so a long cell cannot make the pattern backtrack quadratically.
+  if (/^[+-]?(?:\d+(?:[.,]\d*)?|[.,]\d+)\s*[a-zA-Z%]+$/.test(text)) {
+    return `“${clip(text)}” has a unit or letters after the number. Write the number only; the test's unit is known.`;
   }
-  return `“${text.length > 40 ? `${text.slice(0, 40)}…` : text}” is not a number.`;
+  return `“${clip(text)}” is not a number.`;
+}
+
+const clip = (text: string) => (text.length > 40 ? `${text.slice(0, 40)}…` : text);
+
+/**
+ * A digit string too long for a double reads as Infinity (stored as nothing) or overflows a
+ * mean, so the cell is refused here rather than stored as something other than what it says.
+ */
+function storable(value: number, text: string): ScoreParse {
+  if (isStorableTrial(value)) return value;
+  return `“${clip(text)}” is outside the range of a score (${TRIAL_RANGE_TEXT}). Check the cell.`;
 }

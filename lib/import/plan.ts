@@ -4,7 +4,8 @@
  */
 import type { CsvTable } from "./csv";
 import { normaliseName, testNameIndex } from "./columns";
-import { MAX_LISTED_ERRORS, PREVIEW_ROWS } from "./limits";
+import { runToEnd, type Steps } from "./cooperative";
+import { MAX_LISTED_ERRORS, MAX_SHOWN_CHARS, PREVIEW_ROWS } from "./limits";
 import { trialLimit } from "./mapping";
 import { parseScore } from "./numbers";
 import type {
@@ -90,12 +91,22 @@ class Tally<T extends { count: number; rows: number[] }> {
 
 const quote = (s: string) => `“${s}”`;
 const shown = (s: string) => quote(s.length > 60 ? `${s.slice(0, 60)}…` : s);
+/** Cell text echoed back in a listing: enough to recognise it, never the whole of a huge cell. */
+const clip = (s: string) => (s.length > MAX_SHOWN_CHARS ? `${s.slice(0, MAX_SHOWN_CHARS)}…` : s);
 
-export function buildPlan(table: CsvTable, mapping: ImportMapping, context: ImportContext): ImportPlan {
+/** Cells read between two chances to pause (see cooperative.ts). */
+const STEP_CELLS = 4096;
+
+export const buildPlan = (table: CsvTable, mapping: ImportMapping, context: ImportContext): ImportPlan =>
+  runToEnd(planSteps(table, mapping, context));
+
+export function* planSteps(table: CsvTable, mapping: ImportMapping, context: ImportContext): Steps<ImportPlan> {
   const { headers, rows, rowNumbers, delimiter } = table;
   const errors = new Listing();
   const warnings = new Listing();
   for (const problem of table.problems) errors.add(problem);
+  errors.count += table.problemCount - table.problems.length;
+  let work = 0;
   const unknownAthletes = new Tally<UnknownAthlete>();
   const unknownTests = new Tally<UnknownTest>();
   const matchAthlete = athleteMatcher(context.athletes);
@@ -117,7 +128,7 @@ export function buildPlan(table: CsvTable, mapping: ImportMapping, context: Impo
       return null;
     }
     const text = cell.trim();
-    unknownAthletes.add(normaliseName(text), row, () => ({ value: text, reason: match.problem as UnknownAthlete["reason"], count: 0, rows: [] }));
+    unknownAthletes.add(normaliseName(text), row, () => ({ value: clip(text), reason: match.problem as UnknownAthlete["reason"], count: 0, rows: [] }));
     errors.add({
       row,
       column,
@@ -194,6 +205,10 @@ export function buildPlan(table: CsvTable, mapping: ImportMapping, context: Impo
     columnOf = () => valueColumn;
 
     for (let i = 0; readable && i < rows.length; i++) {
+      if ((work += 4) >= STEP_CELLS) {
+        work = 0;
+        yield;
+      }
       const cells = rows[i];
       const row = rowNumbers[i];
       if (cells.length > headers.length && !checkWidth(cells, row)) continue;
@@ -226,7 +241,7 @@ export function buildPlan(table: CsvTable, mapping: ImportMapping, context: Impo
       } else {
         const testCell = rawTest.trim();
         if (typeof found === "string") {
-          unknownTests.add(normaliseName(testCell), row, () => ({ name: testCell, reason: found as UnknownTest["reason"], count: 0, rows: [] }));
+          unknownTests.add(normaliseName(testCell), row, () => ({ name: clip(testCell), reason: found as UnknownTest["reason"], count: 0, rows: [] }));
           errors.add({
             row,
             column: tName,
@@ -284,6 +299,10 @@ export function buildPlan(table: CsvTable, mapping: ImportMapping, context: Impo
     });
 
     for (let i = 0; ai >= 0 && targets.length > 0 && i < rows.length; i++) {
+      if ((work += targets.length + unnamed.length) >= STEP_CELLS) {
+        work = 0;
+        yield;
+      }
       const cells = rows[i];
       const row = rowNumbers[i];
       if (cells.length > headers.length && !checkWidth(cells, row)) continue;

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { MAX_TRIALS, PHASES, RESULT_FLAGS, SESSION_STATUSES } from "@/lib/domain";
+import { isStorableTrial, TRIAL_RANGE_TEXT } from "@/lib/trials";
 import { idSchema, isoDate, optionalText } from "./common";
 
 export const sessionCreateSchema = z.object({
@@ -21,8 +22,11 @@ export const sessionUpdateSchema = z.object({
 });
 export type SessionUpdateInput = z.infer<typeof sessionUpdateSchema>;
 
-/** A trial score as typed: a finite number, or null for an empty slot. */
-const trialValue = z.number().finite("Scores must be numbers.").nullable();
+/** A trial score as typed: a number Changewise can store as given, or null for an empty slot. */
+export const trialValue = z
+  .number({ message: "Scores must be numbers." })
+  .refine(isStorableTrial, `Scores must be ${TRIAL_RANGE_TEXT}.`)
+  .nullable();
 
 const resultWriteSchema = z.object({
   athleteId: idSchema,

@@ -34,3 +34,25 @@ describe("parseScore", () => {
     expect(refused("1e3")).toMatch(/unit|not a number/);
   });
 });
+
+describe("parseScore: numbers that cannot be stored as written", () => {
+  it("refuses non-finite and out-of-range values with the cell text (clipped) and the range", () => {
+    const huge = `1${"0".repeat(400)}`; // Number(huge) is Infinity: it would be stored as an empty trial
+    const big = `1${"0".repeat(308)}`; // 1e308: finite, but two of them overflow a mean
+    for (const raw of [huge, big, `-${big}`, "1000000000.5", "1000000001", "-1000000001"]) {
+      expect(parseScore(raw, ",")).toMatch(/outside the range of a score/);
+    }
+    expect(parseScore(huge, ",")).toMatch(/^“1000000000000000000000000000000000000000…”/);
+    for (const raw of ["NaN", "Infinity", "-Infinity", "∞", "1e308", "-1e308"]) expect(typeof parseScore(raw, ",")).toBe("string");
+    expect(parseScore("1000000000", ",")).toBe(1e9);
+    expect(parseScore("-1000000000,0", ";")).toBe(-1e9);
+  });
+
+  it("reads a very long cell in linear time (no backtracking blow-up)", () => {
+    const digits = "1".repeat(2_000_000);
+    const start = performance.now();
+    for (const raw of [digits, `${digits}#`, `${digits}x`, `${digits}.${digits}#`]) expect(typeof parseScore(raw, ";")).toBe("string");
+    // A quadratic pattern takes hours on these; a linear one milliseconds. The bound is loose on purpose.
+    expect(performance.now() - start).toBeLessThan(2000);
+  });
+});

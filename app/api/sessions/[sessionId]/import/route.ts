@@ -8,9 +8,8 @@ import { json, parseId, readCappedBytes, withApi } from "@/lib/api/handler";
 import { guard, STAFF } from "@/lib/auth/guard";
 import { runImport } from "@/lib/data/import";
 import { MAX_IMPORT_BYTES, MULTIPART_ALLOWANCE_BYTES, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
+import { type Multipart, parseMultipart } from "@/lib/import/multipart";
 import { importOptionsSchema } from "@/lib/validation/import";
-
-const text = (value: FormDataEntryValue | null) => (typeof value === "string" ? value : undefined);
 
 export const POST = withApi<{ sessionId: string }>(async (request, { params }) => {
   const sessionId = parseId((await params).sessionId, "Session");
@@ -21,29 +20,31 @@ export const POST = withApi<{ sessionId: string }>(async (request, { params }) =
     throw new ApiError(415, "unsupported_media_type", "Send the CSV as multipart/form-data with the file in a field called “file”.");
   }
   const body = await readCappedBytes(request, MAX_IMPORT_BYTES + MULTIPART_ALLOWANCE_BYTES, TOO_LARGE_MESSAGE);
-  let form: FormData;
+  let form: Multipart;
   try {
-    form = await new Response(body as BodyInit, { headers: { "content-type": type } }).formData();
+    form = parseMultipart(body, type);
   } catch {
     throw new ApiError(400, "bad_request", "The upload is not well-formed multipart/form-data. Choose the file again and retry.");
   }
+  const text = (name: string) => form.fields.get(name);
 
-  const file = form.get("file");
-  if (file === null) throw invalidInput("Choose a CSV file to import.", { file: "No file was sent (field “file”)." });
-  if (typeof file === "string") throw invalidInput("The “file” field must be a file upload, not text.", { file: "Not a file." });
-  if (file.size > MAX_IMPORT_BYTES) throw new ApiError(413, "payload_too_large", TOO_LARGE_MESSAGE);
+  const file = form.files.get("file");
+  if (!file) {
+    if (form.fields.has("file")) throw invalidInput("The “file” field must be a file upload, not text.", { file: "Not a file." });
+    throw invalidInput("Choose a CSV file to import.", { file: "No file was sent (field “file”)." });
+  }
+  if (file.bytes.length > MAX_IMPORT_BYTES) throw new ApiError(413, "payload_too_large", TOO_LARGE_MESSAGE);
 
   const url = new URL(request.url);
   const options = importOptionsSchema.parse({
-    mode: url.searchParams.get("mode") ?? text(form.get("mode")),
-    format: text(form.get("format")) || undefined,
-    athleteColumn: text(form.get("athleteColumn")),
-    testColumn: text(form.get("testColumn")),
-    trialColumn: text(form.get("trialColumn")),
-    valueColumn: text(form.get("valueColumn")),
-    mapping: text(form.get("mapping")),
-    replace: url.searchParams.get("replace") ?? text(form.get("replace")),
+    mode: url.searchParams.get("mode") ?? text("mode"),
+    format: text("format") || undefined,
+    athleteColumn: text("athleteColumn"),
+    testColumn: text("testColumn"),
+    trialColumn: text("trialColumn"),
+    valueColumn: text("valueColumn"),
+    mapping: text("mapping"),
+    replace: url.searchParams.get("replace") ?? text("replace"),
   });
-  const bytes = new Uint8Array(await file.arrayBuffer());
-  return json(await runImport(actor, sessionId, { bytes, filename: file.name, contentType: file.type || null }, options));
+  return json(await runImport(actor, sessionId, { bytes: file.bytes, filename: file.filename, contentType: file.type }, options));
 });
