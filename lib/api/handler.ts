@@ -1,6 +1,7 @@
 import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
-import { ApiError, invalidInput, type ErrorBody, type FieldErrors } from "@/lib/errors";
+import { ApiError, invalidInput, notFound, type ErrorBody, type FieldErrors } from "@/lib/errors";
+import { canonicalId } from "@/lib/ids";
 
 function zodFieldErrors(error: ZodError): FieldErrors {
   const fields: FieldErrors = {};
@@ -110,10 +111,10 @@ export async function readJson<T>(request: Request, schema: ZodType<T>): Promise
   return schema.parse(body);
 }
 
-/** Parses a path segment id; anything that is not a positive integer cannot exist. */
-export function parseId(value: string | undefined, what = "That record"): number {
-  const id = Number(value);
-  if (!Number.isSafeInteger(id) || id <= 0) throw new ApiError(404, "not_found", `${what} was not found.`);
+/** Parses an id from the path or the query string; anything but a canonical positive integer cannot exist. */
+export function parseId(value: string | null | undefined, what = "That record"): number {
+  const id = canonicalId(value);
+  if (id === null) throw notFound(what);
   return id;
 }
 

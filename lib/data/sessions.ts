@@ -8,7 +8,7 @@ import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/se
 import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
 import { listResultRows } from "./results";
-import { findSessionInScope, sessionScope, squadScope } from "./scope";
+import { findSessionInScope, onSessionSheet, sessionScope, squadScope } from "./scope";
 
 const sessionColumns = {
   id: testingSessions.id,
@@ -103,8 +103,6 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
   const db = getDb();
   // The header comes first: it is the scope check for everything read after it.
   const session = await findSessionInScope(db, actor, sessionId, sessionColumns);
-  const squadMembers = db.select({ id: squadAthletes.athleteId }).from(squadAthletes).where(eq(squadAthletes.squadId, session.squadId));
-  const withResult = db.select({ id: results.athleteId }).from(results).where(eq(results.sessionId, sessionId));
   const [battery, resultRows, athleteList] = await Promise.all([
     sessionBattery(sessionId),
     listResultRows(db, actor, sessionId),
@@ -112,12 +110,7 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
     db
       .select({ id: athletes.id, name: athletes.name, position: athletes.position })
       .from(athletes)
-      .where(
-        and(
-          eq(athletes.organizationId, actor.organizationId),
-          or(and(inArray(athletes.id, squadMembers), eq(athletes.archived, false)), inArray(athletes.id, withResult)),
-        ),
-      )
+      .where(and(eq(athletes.organizationId, actor.organizationId), onSessionSheet({ id: sessionId, squadId: session.squadId }, { activeMembersOnly: true })))
       .orderBy(asc(athletes.name)),
   ]);
   return {
