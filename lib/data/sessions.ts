@@ -1,7 +1,7 @@
 import "server-only";
-import { and, asc, count, desc, eq, inArray, notInArray, or } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, notInArray } from "drizzle-orm";
 import { getDb, writeTransaction, type Reader } from "@/db/client";
-import { athletes, results, sessionTests, squadAthletes, squads, testingSessions, tests } from "@/db/schema";
+import { athletes, results, sessionTests, squads, testingSessions, tests } from "@/db/schema";
 import { canEditSession, canPublish } from "@/lib/auth/permissions";
 import { conflict, forbidden, invalidInput, notFound } from "@/lib/errors";
 import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
