@@ -2,6 +2,7 @@ import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
 import { ApiError, invalidInput, notFound, type ErrorBody, type FieldErrors } from "@/lib/errors";
 import { canonicalId } from "@/lib/ids";
+import { runtimeSecurityHeaders, servedOverHttps, withHeaders } from "@/lib/security/headers";
 
 function zodFieldErrors(error: ZodError): FieldErrors {
   const fields: FieldErrors = {};
@@ -53,13 +54,23 @@ export function withApi<P = Record<string, string>>(
   handler: (request: Request, context: RouteContext<P>) => Promise<Response>,
 ) {
   return async (request: Request, context: RouteContext<P>): Promise<Response> => {
+    let response: Response;
     try {
       assertSameOrigin(request);
-      return await handler(request, context);
+      response = await handler(request, context);
     } catch (error) {
-      return errorResponse(error);
+      response = errorResponse(error);
     }
+    return secureApiResponse(response);
   };
+}
+
+/**
+ * The headers every API answer carries that next.config.ts cannot give: HSTS depends on the URL
+ * the app runs at, and requests with a body never pass through proxy.ts.
+ */
+export function secureApiResponse(response: Response): Response {
+  return withHeaders(response, runtimeSecurityHeaders({ api: true, https: servedOverHttps(process.env.NEXTAUTH_URL) }));
 }
 
 /** The largest JSON body any route takes (a 5000-cell sheet save is well under 1 MB). */

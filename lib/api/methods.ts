@@ -1,0 +1,54 @@
+/**
+ * The HTTP methods each address answers, so that any other method gets 405 with the Allow header
+ * (RFC 9110 §15.5.6) before Next.js sees it: from proxy.ts, and for TRACE and TRACK (which Next.js
+ * cannot hand to proxy.ts) from lib/api/refuse-methods.ts.
+ * tests/unit/api-methods.test.ts checks the API list against the route files' exports.
+ */
+export const ROUTE_METHODS = {
+  "auth/[...nextauth]": ["GET", "POST"],
+  me: ["GET"],
+  athletes: ["GET"],
+  "athletes/[athleteId]": ["GET", "PATCH"],
+  "athletes/[athleteId]/results": ["GET"],
+  coaches: ["GET"],
+  squads: ["GET", "POST"],
+  "squads/[squadId]": ["GET", "PATCH"],
+  "squads/[squadId]/athletes": ["GET", "POST"],
+  tests: ["GET", "POST"],
+  "tests/[testId]": ["GET", "PATCH", "DELETE"],
+  sessions: ["GET", "POST"],
+  "sessions/[sessionId]": ["GET", "PATCH"],
+  "sessions/[sessionId]/results": ["PUT"],
+  "sessions/[sessionId]/undo": ["POST"],
+  "sessions/[sessionId]/audit": ["GET"],
+  "sessions/[sessionId]/import": ["POST"],
+} as const satisfies Record<string, readonly string[]>;
+
+const patternOf = (route: string) =>
+  new RegExp(
+    `^/api/${route
+      .split("/")
+      .map((part) => (part.startsWith("[...") ? ".+" : part.startsWith("[") ? "[^/]+" : part))
+      .join("/")}/?$`,
+  );
+
+const ROUTES = Object.entries(ROUTE_METHODS).map(([route, methods]) => ({ pattern: patternOf(route), methods: methods as readonly string[] }));
+
+/**
+ * What the route at this path answers, as Next.js serves it: HEAD wherever there is GET, and
+ * OPTIONS everywhere (Next.js implements both). Null when no API route has this path.
+ */
+export function allowedApiMethods(pathname: string): string[] | null {
+  const route = ROUTES.find((r) => r.pattern.test(pathname));
+  if (!route) return null;
+  const methods = new Set([...route.methods, "OPTIONS", ...(route.methods.includes("GET") ? ["HEAD"] : [])]);
+  return [...methods].sort();
+}
+
+/** Pages answer GET and HEAD (a server action would POST with a Next-Action header; none exist). */
+export const PAGE_METHODS = ["GET", "HEAD"];
+
+/** The methods an address answers: its API route's, or a page's. Null for an unknown API address. */
+export function allowedMethods(pathname: string): string[] | null {
+  return pathname === "/api" || pathname.startsWith("/api/") ? allowedApiMethods(pathname) : PAGE_METHODS;
+}
