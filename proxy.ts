@@ -1,32 +1,22 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { getToken } from "next-auth/jwt";
-import { allowedMethods } from "@/lib/api/methods";
+import { methodRefusal } from "@/lib/api/methods";
 import { contentSecurityPolicy, runtimeSecurityHeaders, servedOverHttps, withHeaders } from "@/lib/security/headers";
 
 /**
  * Runs before Next.js answers, for three jobs and nothing else (authorisation is the guard's):
  * 1. the security headers that depend on the request: a fresh CSP nonce for each page, HSTS;
- * 2. methods an address does not answer get 405 with Allow (TRACE and TRACK never get here:
- *    lib/api/refuse-methods.ts answers them);
+ * 2. methods an address does not answer get 405 with Allow (lib/api/refuse-methods.ts already
+ *    refuses them where Node hands requests over; this is the same rule again, should the app run
+ *    without that hook);
  * 3. signed-out visitors of app pages go to the sign-in page.
  */
-
-const isServerAction = (request: NextRequest) => request.method === "POST" && request.headers.has("next-action");
 
 // Static files, the sign-in page and the API (which answers 401 itself) need no session.
 const PUBLIC_PATH = /^\/(?:_next\/|sign-in(?:\/|$)|icon\.svg$|favicon\.ico$)/;
 
 function nonce(): string {
   return btoa(String.fromCharCode(...crypto.getRandomValues(new Uint8Array(16))));
-}
-
-function methodNotAllowed(allow: string[], api: boolean): NextResponse {
-  const message = "This address does not answer that method.";
-  const response = api
-    ? NextResponse.json({ error: { code: "method_not_allowed", message } }, { status: 405 })
-    : new NextResponse("Method Not Allowed", { status: 405, headers: { "content-type": "text/plain; charset=utf-8" } });
-  response.headers.set("Allow", allow.join(", "));
-  return response;
 }
 
 export async function proxy(request: NextRequest) {
@@ -36,9 +26,12 @@ export async function proxy(request: NextRequest) {
   const headers = runtimeSecurityHeaders({ api, https });
   const answer = (response: NextResponse) => withHeaders(response, headers);
 
-  const allow = allowedMethods(pathname);
-  if (!allow) return answer(NextResponse.json({ error: { code: "not_found", message: "There is no such API address." } }, { status: 404 }));
-  if (!allow.includes(request.method) && !isServerAction(request)) return answer(methodNotAllowed(allow, api));
+  const refusal = methodRefusal(request.method, pathname, { serverAction: request.headers.has("next-action") });
+  if (refusal) {
+    const response = new NextResponse(refusal.body, { status: refusal.status, headers: { "content-type": refusal.contentType } });
+    if (refusal.allow) response.headers.set("Allow", refusal.allow.join(", "));
+    return answer(response);
+  }
   if (api) return answer(NextResponse.next());
 
   // Next.js takes the nonce from the request's policy and puts it on the scripts it renders.

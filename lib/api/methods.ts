@@ -1,8 +1,8 @@
 /**
  * The HTTP methods each address answers, so that any other method gets 405 with the Allow header
- * (RFC 9110 §15.5.6) before Next.js sees it: from proxy.ts, and for TRACE and TRACK (which Next.js
- * cannot hand to proxy.ts) from lib/api/refuse-methods.ts.
- * tests/unit/api-methods.test.ts checks the API list against the route files' exports.
+ * (RFC 9110 §15.5.6) before Next.js routes it: where Node hands requests to Next.js
+ * (lib/api/refuse-methods.ts, which alone sees TRACE and requests with a body) and again in
+ * proxy.ts. tests/unit/api-methods.test.ts checks the API list against the route files' exports.
  */
 export const ROUTE_METHODS = {
   "auth/[...nextauth]": ["GET", "POST"],
@@ -48,7 +48,29 @@ export function allowedApiMethods(pathname: string): string[] | null {
 /** Pages answer GET and HEAD (a server action would POST with a Next-Action header; none exist). */
 export const PAGE_METHODS = ["GET", "HEAD"];
 
+const isApi = (pathname: string) => pathname === "/api" || pathname.startsWith("/api/");
+// Next.js's own addresses (static files, development tools) answer for themselves.
+const isFramework = (pathname: string) => pathname.startsWith("/_next/") || pathname.startsWith("/__nextjs");
+
 /** The methods an address answers: its API route's, or a page's. Null for an unknown API address. */
 export function allowedMethods(pathname: string): string[] | null {
-  return pathname === "/api" || pathname.startsWith("/api/") ? allowedApiMethods(pathname) : PAGE_METHODS;
+  return isApi(pathname) ? allowedApiMethods(pathname) : PAGE_METHODS;
+}
+
+export type Refusal = { status: 404 | 405; allow: string[] | null; contentType: string; body: string };
+
+/**
+ * Whether a request is answered before Next.js routes it: 405 with Allow for a method the address
+ * does not take, 404 for an address no API route has. Null: hand it on.
+ */
+export function methodRefusal(method: string, pathname: string, { serverAction = false } = {}): Refusal | null {
+  if (isFramework(pathname)) return null;
+  const api = isApi(pathname);
+  const allow = allowedMethods(pathname);
+  if (allow && (allow.includes(method) || (!api && serverAction && method === "POST"))) return null;
+  const status = allow ? 405 : 404;
+  const message = allow ? "This address does not answer that method." : "There is no such API address.";
+  return api
+    ? { status, allow, contentType: "application/json", body: JSON.stringify({ error: { code: allow ? "method_not_allowed" : "not_found", message } }) }
+    : { status, allow, contentType: "text/plain; charset=utf-8", body: allow ? "Method Not Allowed" : "Not Found" };
 }

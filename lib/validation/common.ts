@@ -1,4 +1,5 @@
 import { z } from "zod";
+import "./zod-config";
 
 export const idSchema = z.number().int().positive();
 

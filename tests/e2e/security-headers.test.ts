@@ -99,9 +99,13 @@ describe("methods an address does not take", () => {
       expect(answer.headers.get("allow"), method).toBe("GET, HEAD, OPTIONS");
       expectSecurityHeaders(`${method} /api/me`, answer.headers);
     }
-    // With a body the request bypasses proxy.ts (see its matcher): Next.js answers 405 itself.
+    // With a body (which skips proxy.ts) the answer is the same.
     const withBody = await raw("PATCH", "/api/me", { "content-type": "application/json" }, "{}");
     expect(withBody.status).toBe(405);
+    expect(withBody.headers.get("allow")).toBe("GET, HEAD, OPTIONS");
+    const wrongOnWriteRoute = await raw("GET", "/api/sessions/1/results");
+    expect(wrongOnWriteRoute.status).toBe(405);
+    expect(wrongOnWriteRoute.headers.get("allow")).toBe("OPTIONS, PUT");
   });
 
   it("pages take GET and HEAD only", async () => {

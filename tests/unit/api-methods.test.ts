@@ -2,7 +2,7 @@
 import { readdirSync, readFileSync, statSync } from "node:fs";
 import { join, relative } from "node:path";
 import { describe, expect, it } from "vitest";
-import { allowedApiMethods, ROUTE_METHODS } from "@/lib/api/methods";
+import { allowedApiMethods, methodRefusal, ROUTE_METHODS } from "@/lib/api/methods";
 
 const apiDir = join(__dirname, "..", "..", "app", "api");
 const METHODS = ["GET", "HEAD", "OPTIONS", "POST", "PUT", "PATCH", "DELETE"];
@@ -42,5 +42,18 @@ describe("API methods", () => {
     expect(allowedApiMethods("/api/auth/callback/credentials")).toEqual(["GET", "HEAD", "OPTIONS", "POST"]);
     expect(allowedApiMethods("/api/nothing-here")).toBeNull();
     expect(allowedApiMethods("/api/sessions/12/results/extra")).toBeNull();
+  });
+
+  it("refuses what an address does not take, in the API's error shape on the API", () => {
+    expect(methodRefusal("GET", "/api/me")).toBeNull();
+    expect(methodRefusal("PATCH", "/api/me")).toMatchObject({ status: 405, allow: ["GET", "HEAD", "OPTIONS"], contentType: "application/json" });
+    expect(JSON.parse(methodRefusal("TRACE", "/api/me")!.body).error.code).toBe("method_not_allowed");
+    expect(methodRefusal("GET", "/api/nothing-here")).toMatchObject({ status: 404, allow: null });
+    expect(methodRefusal("TRACE", "/sign-in")).toMatchObject({ status: 405, allow: ["GET", "HEAD"], contentType: expect.stringContaining("text/plain") });
+    expect(methodRefusal("POST", "/sessions/4")).toMatchObject({ status: 405 });
+    // A server action posts to its page; Next.js's own addresses answer for themselves.
+    expect(methodRefusal("POST", "/sessions/4", { serverAction: true })).toBeNull();
+    expect(methodRefusal("POST", "/api/me", { serverAction: true })).toMatchObject({ status: 405 });
+    expect(methodRefusal("POST", "/_next/static/chunks/x.js")).toBeNull();
   });
 });

@@ -1,6 +1,7 @@
 /**
- * TRACE is answered 405 with Allow by the HTTP server before Next.js sees it (Next.js would build a
- * fetch Request for proxy.ts, which fetch forbids, and answer 500). TRACK: Node's parser refuses it.
+ * Methods an address does not take are answered 405 with Allow where Node hands requests to Next.js:
+ * TRACE included (Next.js would build a fetch Request for proxy.ts, which fetch forbids, and answer
+ * 500), and requests with a body (which skip proxy.ts). TRACK: Node's parser refuses it.
  */
 import http from "node:http";
 import type { AddressInfo } from "node:net";
@@ -29,15 +30,16 @@ afterAll(async () => {
   await new Promise((resolve) => server.close(resolve));
 });
 
-function send(method: string, path: string): Promise<{ status: number; headers: http.IncomingHttpHeaders; body: string }> {
+function send(method: string, path: string, body?: string): Promise<{ status: number; headers: http.IncomingHttpHeaders; body: string }> {
   return new Promise((resolve, reject) => {
-    const req = http.request({ host: "127.0.0.1", port, method, path }, (res) => {
+    const headers = body === undefined ? {} : { "content-type": "application/json", "content-length": String(Buffer.byteLength(body)) };
+    const req = http.request({ host: "127.0.0.1", port, method, path, headers }, (res) => {
       let body = "";
       res.on("data", (chunk) => (body += chunk));
       res.on("end", () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body }));
     });
     req.on("error", reject);
-    req.end();
+    req.end(body);
   });
 }
 
@@ -59,7 +61,21 @@ describe("refuseUnsupportedMethods", () => {
     expect((await send("TRACK", "/sign-in").catch(() => ({ status: 400 }))).status).toBe(400);
   });
 
-  it("hands every other method to the app", async () => {
-    for (const method of ["GET", "HEAD", "POST", "OPTIONS", "PATCH"]) expect((await send(method, "/api/me")).status, method).toBe(200);
+  it("refuses a method the route does not export even with a body, with the route's Allow list", async () => {
+    const patch = await send("PATCH", "/api/me", JSON.stringify({ name: "x" }));
+    expect(patch.status).toBe(405);
+    expect(patch.headers.allow).toBe("GET, HEAD, OPTIONS");
+    expect(JSON.parse(patch.body).error.code).toBe("method_not_allowed");
+    const get = await send("GET", "/api/sessions/4/results");
+    expect(get.status).toBe(405);
+    expect(get.headers.allow).toBe("OPTIONS, PUT");
+    expect((await send("POST", "/sign-in", "{}")).headers.allow).toBe("GET, HEAD");
+  });
+
+  it("hands the methods an address takes, and Next.js's own addresses, to the app", async () => {
+    for (const method of ["GET", "HEAD", "OPTIONS"]) expect((await send(method, "/api/me")).status, method).toBe(200);
+    expect((await send("PUT", "/api/sessions/4/results", "{}")).status).toBe(200);
+    expect((await send("GET", "/sessions/4?x=1")).status).toBe(200);
+    expect((await send("POST", "/_next/static/chunks/x.js")).status).toBe(200);
   });
 });

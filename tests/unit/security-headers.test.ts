@@ -105,6 +105,7 @@ describe("proxy.ts", () => {
 describe("withApi", () => {
   it("marks every API answer no-store, errors included, and adds HSTS over https", async () => {
     vi.stubEnv("NEXTAUTH_URL", "https://club.example");
+    const log = vi.spyOn(console, "error").mockImplementation(() => undefined);
     const ok = await withApi(async () => json({ ok: true }))(new Request("http://test.local/api/x"), { params: Promise.resolve({}) });
     const failed = await withApi(async () => {
       throw new Error("boom");
@@ -114,5 +115,6 @@ describe("withApi", () => {
       expect(response.headers.get("strict-transport-security")).toContain("max-age=");
       expect(response.headers.get("content-security-policy")).toContain("default-src 'none'");
     }
+    log.mockRestore();
   });
 });
