@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from "next";
+import { connection } from "next/server";
 import "./globals.css";
 
 export const metadata: Metadata = {
@@ -8,7 +9,10 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#1E2A44" };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page is rendered per request, so each carries the nonce of its own Content-Security-
+  // Policy (proxy.ts); a page built ahead of time would hold scripts the policy blocks.
+  await connection();
   return (
     <html lang="en">
       <body className="min-h-screen bg-paper font-sans text-ink antialiased">{children}</body>

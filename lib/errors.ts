@@ -6,6 +6,7 @@ export type ErrorCode =
   | "unauthenticated"
   | "forbidden"
   | "not_found"
+  | "method_not_allowed"
   | "conflict"
   | "invalid_input"
   | "payload_too_large"

@@ -1,6 +1,8 @@
 import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
-import { ApiError, invalidInput, type FieldErrors } from "@/lib/errors";
+import { ApiError, invalidInput, notFound, type FieldErrors } from "@/lib/errors";
+import { canonicalId } from "@/lib/ids";
+import { runtimeSecurityHeaders, servedOverHttps, withHeaders } from "@/lib/security/headers";
 
 function zodFieldErrors(error: ZodError): FieldErrors {
   const fields: FieldErrors = {};
@@ -78,13 +80,23 @@ export function withApi<P = Record<string, string>>(
   handler: (request: Request, context: RouteContext<P>) => Promise<Response>,
 ) {
   return async (request: Request, context: RouteContext<P>): Promise<Response> => {
+    let response: Response;
     try {
       assertSameOrigin(request);
-      return await handler(request, context);
+      response = await handler(request, context);
     } catch (error) {
-      return errorResponse(error);
+      response = errorResponse(error);
     }
+    return secureApiResponse(response);
   };
+}
+
+/**
+ * The headers every API answer carries that next.config.ts cannot give: HSTS depends on the URL
+ * the app runs at, and requests with a body never pass through proxy.ts.
+ */
+export function secureApiResponse(response: Response): Response {
+  return withHeaders(response, runtimeSecurityHeaders({ api: true, https: servedOverHttps(process.env.NEXTAUTH_URL) }));
 }
 
 /** The largest JSON body any route takes (a 5000-cell sheet save is well under 1 MB). */
@@ -136,10 +148,10 @@ export async function readJson<T>(request: Request, schema: ZodType<T>): Promise
   return schema.parse(body);
 }
 
-/** Parses a path segment id; anything that is not a positive integer cannot exist. */
-export function parseId(value: string | undefined, what = "That record"): number {
-  const id = Number(value);
-  if (!Number.isSafeInteger(id) || id <= 0) throw new ApiError(404, "not_found", `${what} was not found.`);
+/** Parses an id from the path or the query string; anything but a canonical positive integer cannot exist. */
+export function parseId(value: string | null | undefined, what = "That record"): number {
+  const id = canonicalId(value);
+  if (id === null) throw notFound(what);
   return id;
 }
 

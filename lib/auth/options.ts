@@ -3,6 +3,7 @@ import type { NextAuthOptions } from "next-auth";
 import type { JWT } from "next-auth/jwt";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { endSession, type SessionClaims } from "@/lib/data/actors";
+import { servedOverHttps } from "@/lib/security/headers";
 import { clientAddress } from "./client-address";
 import { authorizeCredentials, type SignedInUser } from "./credentials";
 
@@ -12,7 +13,7 @@ import { authorizeCredentials, type SignedInUser } from "./credentials";
  * plain http locally the cookie stays usable.
  */
 export function secureCookiesFor(publicUrl: string | undefined): boolean {
-  return publicUrl?.trim().toLowerCase().startsWith("https://") ?? false;
+  return servedOverHttps(publicUrl);
 }
 
 /** The claims a session token carries, or null for a token without them (signed out). */

@@ -1,6 +1,7 @@
 import "server-only";
 import { notFound, redirect } from "next/navigation";
 import { ApiError } from "@/lib/errors";
+import { canonicalId } from "@/lib/ids";
 import { guard, type GuardOptions } from "./guard";
 
 /**
@@ -19,9 +20,9 @@ export async function pageGuard(options: GuardOptions = {}) {
   }
 }
 
-/** A record id from the URL; anything but a positive integer is simply not found. */
+/** A record id from the URL; anything but a canonical positive integer is simply not found. */
 export function pageId(segment: string): number {
-  const id = Number(segment);
-  if (!Number.isSafeInteger(id) || id <= 0) notFound();
+  const id = canonicalId(segment);
+  if (id === null) notFound();
   return id;
 }

@@ -30,6 +30,9 @@ export const canManageSquad = isOwner;
 /** Adding athletes to a squad in reach, editing them, moving them between squads. */
 export const canEditRoster = isStaff;
 
+/** How many results use each test (all athletes of the organisation together): staff only. */
+export const canSeeResultCounts = isStaff;
+
 /** Every member reads the Test library; only these change it. */
 export const canEditTestLibrary = isManager;
 

@@ -20,7 +20,22 @@ const rosterColumns = {
   archived: athletes.archived,
 };
 
-const externalIdTaken = (id: string | null | undefined) => conflict(`Another athlete already has the external id "${id}".`);
+/**
+ * External ids are unique in the organisation, but a coach reaches only their squads: a clash
+ * with an athlete they reach names that athlete; a clash outside their reach says only that the
+ * id cannot be used, neither whose it is nor where.
+ */
+async function externalIdTaken(actor: Actor, externalId: string | null | undefined) {
+  const [holder] = externalId
+    ? await getDb()
+        .select({ id: athletes.id, name: athletes.name })
+        .from(athletes)
+        .where(and(eq(athletes.externalId, externalId), athleteScope(actor)))
+        .limit(1)
+    : [];
+  if (!holder) return conflict("That external id cannot be used. Choose another one.");
+  return conflict(`${holder.name} already has the external id "${externalId}".`, { athleteId: holder.id });
+}
 
 /** The squad's athletes; the caller has the squad in reach (guard). */
 export async function listSquadAthletes(actor: Actor, squadId: number, { includeArchived = false } = {}) {
@@ -58,7 +73,7 @@ export async function addAthleteToSquad(actor: Actor, squadId: number, input: Sq
       return row;
     });
   } catch (error) {
-    if (isUniqueViolation(error)) throw externalIdTaken((input as AthleteCreateInput).externalId);
+    if (isUniqueViolation(error)) throw await externalIdTaken(actor, (input as AthleteCreateInput).externalId);
     throw error;
   }
 }
@@ -91,7 +106,7 @@ export async function updateAthlete(actor: Actor, athleteId: number, input: Athl
       return row;
     });
   } catch (error) {
-    if (isUniqueViolation(error)) throw externalIdTaken(changes.externalId);
+    if (isUniqueViolation(error)) throw await externalIdTaken(actor, changes.externalId);
     throw error;
   }
 }

@@ -6,7 +6,7 @@
 import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
 import { getDb, type Reader, type Transaction as Tx, writeTransaction } from "@/db/client";
-import { athletes, results, squadAthletes, squads, testingSessions, tests, uploads } from "@/db/schema";
+import { athletes, results, squads, testingSessions, tests, uploads } from "@/db/schema";
 import { canEditSession } from "@/lib/auth/permissions";
 import { type Phase, type SessionStatus } from "@/lib/domain";
 import { ApiError, forbidden } from "@/lib/errors";
@@ -20,7 +20,7 @@ import { describeReplacements, type ImportCommitted, type ImportPreview } from "
 import type { ExistingResult, ImportContext } from "@/lib/import/types";
 import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
-import { findSessionInScope } from "./scope";
+import { findSessionInScope, onSessionSheet } from "./scope";
 import { sessionBattery } from "./sessions";
 
 export type ImportSession = {
@@ -55,11 +55,11 @@ export async function loadImportContext(session: ImportSession, db: Reader = get
   const [battery, allTests, roster] = await Promise.all([
     sessionBattery(session.id, db),
     db.select({ id: tests.id, name: tests.name }).from(tests).where(eq(tests.organizationId, session.organizationId)),
+    // The same athletes the Session sheet takes scores for (lib/data/scope.ts, onSessionSheet).
     db
       .select({ id: athletes.id, name: athletes.name, externalId: athletes.externalId })
-      .from(squadAthletes)
-      .innerJoin(athletes, eq(athletes.id, squadAthletes.athleteId))
-      .where(and(eq(squadAthletes.squadId, session.squadId), eq(athletes.organizationId, session.organizationId)))
+      .from(athletes)
+      .where(and(eq(athletes.organizationId, session.organizationId), onSessionSheet(session)))
       .orderBy(asc(athletes.name)),
   ]);
   const inBattery = new Set(battery.map((t) => t.id));

@@ -2,15 +2,15 @@
 import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { writeTransaction, type Reader, type Transaction as Tx } from "@/db/client";
-import { results, sessionTests, squadAthletes, testingSessions, tests, users } from "@/db/schema";
+import { athletes, results, sessionTests, testingSessions, tests, users } from "@/db/schema";
 import { canEditSession } from "@/lib/auth/permissions";
 import type { ResultFlag } from "@/lib/domain";
-import { conflict, forbidden, invalidInput, type RowError } from "@/lib/errors";
+import { ApiError, conflict, forbidden, invalidInput, type RowError } from "@/lib/errors";
 import { reduceTrials, trimTrials } from "@/lib/trials";
 import type { ResultWriteInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
 import { recordAudit, type ResultSnapshot } from "./audit";
-import { findSessionInScope } from "./scope";
+import { findSessionInScope, onSessionSheet } from "./scope";
 
 export type ResultRow = {
   id: number;
@@ -59,7 +59,7 @@ export async function loadWritableSession(tx: Tx, actor: Actor, sessionId: numbe
   return session;
 }
 
-async function validateWrites(tx: Tx, session: { id: number; squadId: number }, inputs: ResultWriteInput[]) {
+async function validateWrites(tx: Tx, organizationId: number, session: { id: number; squadId: number }, inputs: ResultWriteInput[]) {
   const battery = await tx
     .select({ id: tests.id, name: tests.name, trialRule: tests.trialRule, direction: tests.direction, trialsPerSession: tests.trialsPerSession })
     .from(sessionTests)
@@ -67,10 +67,16 @@ async function validateWrites(tx: Tx, session: { id: number; squadId: number }, 
     .where(eq(sessionTests.sessionId, session.id));
   const testById = new Map(battery.map((t) => [t.id, t]));
   const athleteIds = [...new Set(inputs.map((i) => i.athleteId))];
-  const onSheet = new Set([
-    ...(await tx.select({ id: squadAthletes.athleteId }).from(squadAthletes).where(and(eq(squadAthletes.squadId, session.squadId), inArray(squadAthletes.athleteId, athleteIds)))).map((r) => r.id),
-    ...(await tx.select({ id: results.athleteId }).from(results).where(and(eq(results.sessionId, session.id), inArray(results.athleteId, athleteIds)))).map((r) => r.id),
-  ]);
+  const onSheet = new Set(
+    (await tx.select({ id: athletes.id }).from(athletes).where(and(inArray(athletes.id, athleteIds), eq(athletes.organizationId, organizationId), onSessionSheet(session)))).map((r) => r.id),
+  );
+  // Anyone else is not found, as a record outside reach would be: whether they exist elsewhere
+  // (another squad, another organisation) or not at all is never told apart.
+  const missing: RowError[] = [];
+  inputs.forEach((input, index) => {
+    if (!onSheet.has(input.athleteId)) missing.push({ row: index, column: "athleteId", message: "That athlete is not on this session's sheet." });
+  });
+  if (missing.length) throw new ApiError(404, "not_found", "Athlete was not found on this session's sheet. Nothing was saved.", { rows: missing });
   const errors: RowError[] = [];
   const seen = new Set<string>();
   inputs.forEach((input, index) => {
@@ -79,7 +85,6 @@ async function validateWrites(tx: Tx, session: { id: number; squadId: number }, 
     else if (input.trials.length > test.trialsPerSession && trimTrials(input.trials).length > test.trialsPerSession) {
       errors.push({ row: index, column: "trials", message: `${test.name} takes at most ${test.trialsPerSession} trials.` });
     }
-    if (!onSheet.has(input.athleteId)) errors.push({ row: index, column: "athleteId", message: "That athlete is not in this session's squad." });
     const k = key(input.athleteId, input.testId);
     if (seen.has(k)) errors.push({ row: index, column: "testId", message: "The same athlete and test appear twice in one save." });
     seen.add(k);
@@ -95,7 +100,7 @@ async function validateWrites(tx: Tx, session: { id: number; squadId: number }, 
 export async function writeResults(actor: Actor, sessionId: number, inputs: ResultWriteInput[]): Promise<ResultRow[]> {
   return writeTransaction(async (tx) => {
     const session = await loadWritableSession(tx, actor, sessionId);
-    const testById = await validateWrites(tx, session, inputs);
+    const testById = await validateWrites(tx, actor.organizationId, session, inputs);
     const athleteIds = [...new Set(inputs.map((i) => i.athleteId))];
     const current = new Map((await listResultRows(tx, actor, sessionId, athleteIds)).map((r) => [key(r.athleteId, r.testId), r]));
 

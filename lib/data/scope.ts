@@ -3,11 +3,11 @@
  * the organisation always, a coach's own squads, an athlete's own record.
  */
 import "server-only";
-import { and, eq, inArray, sql, type SQL } from "drizzle-orm";
+import { and, eq, inArray, or, sql, type SQL } from "drizzle-orm";
 import type { SelectResultFields } from "drizzle-orm/query-builders/select.types";
 import type { SelectedFields } from "drizzle-orm/sqlite-core";
 import { getDb, type Reader } from "@/db/client";
-import { squadAthletes, squadCoaches, squads, testingSessions, athletes, tests } from "@/db/schema";
+import { results, squadAthletes, squadCoaches, squads, testingSessions, athletes, tests } from "@/db/schema";
 import { isCoach, isManager } from "@/lib/auth/permissions";
 import { notFound } from "@/lib/errors";
 import type { Actor } from "./actors";
@@ -57,6 +57,18 @@ export function sessionScope(actor: Actor): SQL {
     .from(squadAthletes)
     .where(eq(squadAthletes.athleteId, actor.athleteId));
   return and(inOrg, eq(testingSessions.status, "published"), inArray(testingSessions.squadId, ownSquads))!;
+}
+
+/**
+ * The athletes a session's sheet covers: its squad's current members, plus anyone who already
+ * has a result in that session (history stays on the session it was recorded in). The sheet,
+ * its saves and the import all use this one rule; the caller has the session in reach.
+ */
+export function onSessionSheet(session: { id: number; squadId: number }, { activeMembersOnly = false } = {}): SQL {
+  const members = getDb().select({ id: squadAthletes.athleteId }).from(squadAthletes).where(eq(squadAthletes.squadId, session.squadId));
+  const withResult = getDb().select({ id: results.athleteId }).from(results).where(eq(results.sessionId, session.id));
+  const inSquad = activeMembersOnly ? and(inArray(athletes.id, members), eq(athletes.archived, false))! : inArray(athletes.id, members);
+  return or(inSquad, inArray(athletes.id, withResult))!;
 }
 
 /**

@@ -1,14 +1,14 @@
 import "server-only";
-import { and, asc, count, desc, eq, inArray, notInArray, or } from "drizzle-orm";
+import { and, asc, count, desc, eq, inArray, notInArray } from "drizzle-orm";
 import { getDb, writeTransaction, type Reader } from "@/db/client";
-import { athletes, results, sessionTests, squadAthletes, squads, testingSessions, tests } from "@/db/schema";
+import { athletes, results, sessionTests, squads, testingSessions, tests } from "@/db/schema";
 import { canEditSession, canPublish } from "@/lib/auth/permissions";
 import { conflict, forbidden, invalidInput, notFound } from "@/lib/errors";
 import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
 import { listResultRows } from "./results";
-import { findSessionInScope, sessionScope, squadScope } from "./scope";
+import { findSessionInScope, onSessionSheet, sessionScope, squadScope } from "./scope";
 
 const sessionColumns = {
   id: testingSessions.id,
@@ -103,8 +103,6 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
   const db = getDb();
   // The header comes first: it is the scope check for everything read after it.
   const session = await findSessionInScope(db, actor, sessionId, sessionColumns);
-  const squadMembers = db.select({ id: squadAthletes.athleteId }).from(squadAthletes).where(eq(squadAthletes.squadId, session.squadId));
-  const withResult = db.select({ id: results.athleteId }).from(results).where(eq(results.sessionId, sessionId));
   const [battery, resultRows, athleteList] = await Promise.all([
     sessionBattery(sessionId),
     listResultRows(db, actor, sessionId),
@@ -112,12 +110,7 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
     db
       .select({ id: athletes.id, name: athletes.name, position: athletes.position })
       .from(athletes)
-      .where(
-        and(
-          eq(athletes.organizationId, actor.organizationId),
-          or(and(inArray(athletes.id, squadMembers), eq(athletes.archived, false)), inArray(athletes.id, withResult)),
-        ),
-      )
+      .where(and(eq(athletes.organizationId, actor.organizationId), onSessionSheet({ id: sessionId, squadId: session.squadId }, { activeMembersOnly: true })))
       .orderBy(asc(athletes.name)),
   ]);
   return {

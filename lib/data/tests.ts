@@ -2,6 +2,7 @@ import "server-only";
 import { and, asc, count, eq } from "drizzle-orm";
 import { getDb, writeTransaction } from "@/db/client";
 import { results, sessionTests, tests } from "@/db/schema";
+import { canSeeResultCounts } from "@/lib/auth/permissions";
 import { conflict, notFound } from "@/lib/errors";
 import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
 import type { Actor } from "./actors";
@@ -28,18 +29,20 @@ const testColumns = {
   version: tests.version,
 };
 
-
 const nameTaken = (name: string) => conflict(`A test called "${name}" already exists in your library.`);
 
-export async function listTests(actor: Actor, { includeArchived = false } = {}) {
+/** A Test library row; `resultCount` (results across the organisation) only for staff. */
+export type TestListItem = Awaited<ReturnType<typeof getTest>> & { resultCount?: number };
+
+export async function listTests(actor: Actor, { includeArchived = false } = {}): Promise<TestListItem[]> {
   const db = getDb();
   const where = includeArchived
     ? eq(tests.organizationId, actor.organizationId)
     : and(eq(tests.organizationId, actor.organizationId), eq(tests.archived, false));
-  const [rows, counts] = await Promise.all([
-    db.select(testColumns).from(tests).where(where).orderBy(asc(tests.name)),
-    db.select({ testId: results.testId, n: count() }).from(results).where(eq(results.organizationId, actor.organizationId)).groupBy(results.testId),
-  ]);
+  const rows = await db.select(testColumns).from(tests).where(where).orderBy(asc(tests.name));
+  // The counts are about every athlete's results; an athlete learns nothing of the others.
+  if (!canSeeResultCounts(actor)) return rows;
+  const counts = await db.select({ testId: results.testId, n: count() }).from(results).where(eq(results.organizationId, actor.organizationId)).groupBy(results.testId);
   const byTest = new Map(counts.map((c) => [c.testId, c.n]));
   return rows.map((r) => ({ ...r, resultCount: byTest.get(r.id) ?? 0 }));
 }

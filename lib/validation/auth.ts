@@ -1,4 +1,5 @@
 import { z } from "zod";
+import "./zod-config";
 
 export const signInSchema = z.object({
   email: z.string().trim().toLowerCase().email("Enter a valid e-mail address."),

@@ -4,6 +4,7 @@
  * One schema for the route; the Import page sends exactly these field names.
  */
 import { z } from "zod";
+import "./zod-config";
 import type { MappingRequest } from "@/lib/import/mapping";
 import { IMPORT_FORMATS } from "@/lib/import/types";
 

@@ -23,7 +23,7 @@ const athleteFields = {
   sex: z.enum(SEXES).nullish().transform((v) => v ?? null),
   position: optionalText(60, "Position or event"),
   externalId: optionalText(60, "External id"),
-  notes: optionalText(2000, "Notes"),
+  notes: optionalText(2000, "Notes", { multiline: true }),
 };
 
 export const athleteCreateSchema = z.object(athleteFields);

@@ -8,7 +8,7 @@ export const sessionCreateSchema = z.object({
   date: isoDate,
   phase: z.enum(PHASES, { message: "Choose the phase of the block." }),
   testIds: z.array(idSchema).min(1, "Pick at least one test for the battery.").max(30),
-  notes: optionalText(2000, "Notes"),
+  notes: optionalText(2000, "Notes", { multiline: true }),
 });
 export type SessionCreateInput = z.infer<typeof sessionCreateSchema>;
 
@@ -17,7 +17,7 @@ export const sessionUpdateSchema = z.object({
   date: isoDate.optional(),
   phase: z.enum(PHASES).optional(),
   status: z.enum(SESSION_STATUSES).optional(),
-  notes: optionalText(2000, "Notes").optional(),
+  notes: optionalText(2000, "Notes", { multiline: true }).optional(),
   testIds: z.array(idSchema).min(1).max(30).optional(),
 });
 export type SessionUpdateInput = z.infer<typeof sessionUpdateSchema>;

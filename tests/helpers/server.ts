@@ -37,7 +37,7 @@ async function waitFor(url: string, child: ChildProcess, timeoutMs = 60_000) {
 }
 
 const SOURCE_DIRS = ["app", "components", "hooks", "lib", "db", "types"];
-const SOURCE_FILES = ["proxy.ts", "next.config.ts", "tailwind.config.ts", "postcss.config.mjs", "package-lock.json"];
+const SOURCE_FILES = ["proxy.ts", "instrumentation.ts", "next.config.ts", "tailwind.config.ts", "postcss.config.mjs", "package-lock.json"];
 
 function newestSourceChange(): number {
   let newest = 0;

@@ -181,7 +181,7 @@ describe("Testing sessions and the Session sheet API", () => {
     expect((await env.db.select({ n: count() }).from(auditEvents))[0].n).toBe(before);
   });
 
-  it("rejects non-numbers, too many trials and athletes outside the squad with 422", async () => {
+  it("rejects non-numbers and too many trials with 422, athletes not on the sheet with 404", async () => {
     await signInAs("coach@example.com");
     const put = (results: unknown[]) => call(resultsRoute.PUT, { method: "PUT", params: p("sessionId", sessionId), body: { results } });
     const word = await put([{ athleteId: ids.academyAthlete, testId: ids.cmj, trials: ["abc"], flag: null, version: 2 }]);
@@ -191,7 +191,8 @@ describe("Testing sessions and the Session sheet API", () => {
     expect(many.status).toBe(422);
     expect(many.json.error.rows[0]).toMatchObject({ row: 0, column: "trials" });
     const outsider = await put([{ athleteId: ids.seniorAthlete, testId: ids.cmj, trials: [30], flag: null, version: null }]);
-    expect(outsider.status).toBe(422);
+    expect(outsider.status).toBe(404);
+    expect(outsider.json.error.rows[0]).toMatchObject({ row: 0, column: "athleteId" });
     const notInBattery = await put([{ athleteId: ids.academyAthlete, testId: ids.squat, trials: [100], flag: null, version: null }]);
     expect(notInBattery.status).toBe(422);
   });

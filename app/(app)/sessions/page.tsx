@@ -4,6 +4,7 @@ import { SessionList } from "@/components/sessions/session-list";
 import { STAFF } from "@/lib/auth/guard";
 import { canPublish } from "@/lib/auth/permissions";
 import { pageGuard } from "@/lib/auth/page-guard";
+import { canonicalId } from "@/lib/ids";
 import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
 import { listSessions } from "@/lib/data/sessions";
 import { listSquads } from "@/lib/data/squads";
@@ -15,8 +16,8 @@ export const metadata: Metadata = { title: "Sessions" };
 export default async function SessionsPage({ searchParams }: { searchParams: Promise<{ squadId?: string | string[] }> }) {
   const actor = await pageGuard({ roles: STAFF });
   const raw = (await searchParams).squadId;
-  const asked = Number(Array.isArray(raw) ? raw[0] : raw);
-  const squadId = Number.isSafeInteger(asked) && asked > 0 ? asked : null;
+  // A malformed filter shows every session rather than an error page.
+  const squadId = canonicalId(Array.isArray(raw) ? raw[0] : raw);
   const client = serverQueryClient();
   await Promise.all([
     prefetch(client, squadQueries.list(), () => listSquads(actor)),

@@ -1,13 +1,13 @@
 import { authorize, guard, STAFF } from "@/lib/auth/guard";
-import { json, readJson, withApi } from "@/lib/api/handler";
+import { json, parseId, readJson, withApi } from "@/lib/api/handler";
 import { createSession, listSessions } from "@/lib/data/sessions";
 import { sessionCreateSchema } from "@/lib/validation/sessions";
 
 export const GET = withApi(async (request) => {
   const raw = new URL(request.url).searchParams.get("squadId");
-  const squadId = raw === null ? undefined : Number(raw);
-  if (squadId !== undefined && !(Number.isSafeInteger(squadId) && squadId > 0)) return json({ sessions: [] });
-  const actor = await guard({ roles: STAFF, ...(squadId ? { squadId } : {}) });
+  // The same rule as ids in the path: a malformed or unreachable squad is not found.
+  const squadId = raw === null || raw === "" ? undefined : parseId(raw, "Squad");
+  const actor = await guard({ roles: STAFF, squadId });
   return json({ sessions: await listSessions(actor, { squadId }) });
 });
 
