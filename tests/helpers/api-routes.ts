@@ -15,9 +15,18 @@ export type ApiRoute = {
   /** Import specifier for the handler module. */
   module: string;
   methods: HttpMethod[];
-  /** Whether the handler reads a JSON body (calls `readJson`). */
-  readsJson: boolean;
+  /** Methods whose handler reads a JSON body (calls `readJson`). */
+  jsonMethods: HttpMethod[];
 };
+
+/** Methods whose own `export const METHOD = …` block calls readJson. */
+export function jsonReadingMethods(source: string): HttpMethod[] {
+  const starts = [...source.matchAll(/export\s+(?:const|async\s+function|function)\s+([A-Z]+)\b/g)];
+  return starts
+    .filter((m, i) => /\breadJson\s*\(/.test(source.slice(m.index, starts[i + 1]?.index ?? source.length)))
+    .map((m) => m[1] as HttpMethod)
+    .filter((m) => (HTTP_METHODS as readonly string[]).includes(m));
+}
 
 /** Exported method names, whichever way the module writes the export. */
 export function exportedMethods(source: string): HttpMethod[] {
@@ -54,7 +63,7 @@ export function discoverApiRoutes(root = process.cwd()): ApiRoute[] {
       path: `/${folder.join("/")}`,
       module: `@/app/${folder.join("/")}/route`,
       methods: exportedMethods(source),
-      readsJson: /\breadJson\s*\(/.test(source),
+      jsonMethods: jsonReadingMethods(source),
     };
   });
 }
