@@ -216,9 +216,9 @@ export function formatTable(results: readonly BenchResult[]): string {
 
 /** The same table in Markdown, with each figure's one-line description. */
 export function formatMarkdown(results: readonly BenchResult[], heading: string): string {
-  const escape = (text: string) => text.replace(/\|/g, "\\|");
+  const escapePipes = (text: string) => text.replace(/\|/g, "\\|");
   const header = [...HEADER, "what"];
-  const rows = results.map((r) => [...cells(r), r.detail ?? ""].map(escape));
+  const rows = results.map((r) => [...cells(r), r.detail ?? ""].map(escapePipes));
   return [
     heading,
     "",

@@ -25,7 +25,11 @@ type Step = { concurrency: number; rps: number; p50: number; p95: number; reques
 const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.floor(p * sorted.length))];
 
 /** Runs `concurrency` workers for `ms`; each request returns whether it got the answer it should. */
-async function closedLoop(concurrency: number, ms: number, request: (worker: number) => Promise<boolean>): Promise<Step> {
+async function closedLoop(
+  concurrency: number,
+  ms: number,
+  request: (worker: number) => Promise<boolean>,
+): Promise<Step> {
   const latencies: number[] = [];
   let failures = 0;
   const started = performance.now();
@@ -41,7 +45,14 @@ async function closedLoop(concurrency: number, ms: number, request: (worker: num
   );
   const elapsed = (performance.now() - started) / 1000;
   latencies.sort((a, b) => a - b);
-  return { concurrency, rps: latencies.length / elapsed, p50: percentile(latencies, 0.5), p95: percentile(latencies, 0.95), requests: latencies.length, failures };
+  return {
+    concurrency,
+    rps: latencies.length / elapsed,
+    p50: percentile(latencies, 0.5),
+    p95: percentile(latencies, 0.95),
+    requests: latencies.length,
+    failures,
+  };
 }
 
 async function sweep(request: (worker: number) => Promise<boolean>): Promise<Step[]> {
@@ -58,8 +69,19 @@ function report(prefix: string, what: string, steps: Step[]): BenchResult[] {
   const chosen = within.at(-1) ?? steps[0];
   const trail = steps.map((s) => `c${s.concurrency} ${s.rps.toFixed(0)}/s p95 ${s.p95.toFixed(1)}`).join(", ");
   return [
-    { name: `${prefix}-rps`, value: chosen.rps, unit: "req/s", detail: `${what} at concurrency ${chosen.concurrency} (highest with p95 < ${P95_LIMIT_MS} ms); ${trail}` },
-    { name: `${prefix}-p95-ms`, value: chosen.p95, unit: "ms", target: P95_LIMIT_MS, detail: `p95 at concurrency ${chosen.concurrency} (p50 ${chosen.p50.toFixed(1)} ms, ${chosen.requests} requests in ${STEP_MS / 1000} s)` },
+    {
+      name: `${prefix}-rps`,
+      value: chosen.rps,
+      unit: "req/s",
+      detail: `${what} at concurrency ${chosen.concurrency} (highest with p95 < ${P95_LIMIT_MS} ms); ${trail}`,
+    },
+    {
+      name: `${prefix}-p95-ms`,
+      value: chosen.p95,
+      unit: "ms",
+      target: P95_LIMIT_MS,
+      detail: `p95 at concurrency ${chosen.concurrency} (p50 ${chosen.p50.toFixed(1)} ms, ${chosen.requests} requests in ${STEP_MS / 1000} s)`,
+    },
   ];
 }
 
@@ -71,7 +93,9 @@ export default async function load(): Promise<BenchResult[]> {
     const { json } = await http.json("/api/sessions");
     const sessions = json.sessions as { id: number; status: string; resultCount: number }[];
     const busiest = sessions.reduce((a, b) => (b.resultCount > a.resultCount ? b : a));
-    const draft = sessions.filter((s) => s.status === "draft").reduce((a, b) => (b.resultCount > a.resultCount ? b : a));
+    const draft = sessions
+      .filter((s) => s.status === "draft")
+      .reduce((a, b) => (b.resultCount > a.resultCount ? b : a));
 
     const read = await sweep(async () => {
       const response = await http.fetch(`/api/sessions/${busiest.id}`);
@@ -80,17 +104,34 @@ export default async function load(): Promise<BenchResult[]> {
     });
 
     // One cell per worker (different athletes, one test), each with the version it last saw.
-    const sheet = (await http.json(`/api/sessions/${draft.id}`)).json as { results: { athleteId: number; testId: number; version: number }[] };
+    const sheet = (await http.json(`/api/sessions/${draft.id}`)).json as {
+      results: { athleteId: number; testId: number; version: number }[];
+    };
     const testId = sheet.results[0].testId;
     const cells = sheet.results.filter((r) => r.testId === testId).slice(0, Math.max(...LEVELS));
-    if (cells.length < Math.max(...LEVELS)) throw new Error(`session ${draft.id} has only ${cells.length} cells for one test`);
+    if (cells.length < Math.max(...LEVELS))
+      throw new Error(`session ${draft.id} has only ${cells.length} cells for one test`);
     const versions = cells.map((c) => c.version);
     const flips = cells.map(() => 0);
     const save = await sweep(async (worker) => {
       const cell = cells[worker];
       flips[worker] ^= 1;
-      const body = { results: [{ athleteId: cell.athleteId, testId, trials: [flips[worker] ? 31.1 : 31.2], flag: null, version: versions[worker] }] };
-      const response = await http.fetch(`/api/sessions/${draft.id}/results`, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+      const body = {
+        results: [
+          {
+            athleteId: cell.athleteId,
+            testId,
+            trials: [flips[worker] ? 31.1 : 31.2],
+            flag: null,
+            version: versions[worker],
+          },
+        ],
+      };
+      const response = await http.fetch(`/api/sessions/${draft.id}/results`, {
+        method: "PUT",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(body),
+      });
       const answer = (await response.json()) as { results?: { version: number }[] };
       if (response.status !== 200 || !answer.results) return false;
       versions[worker] = answer.results[0].version;

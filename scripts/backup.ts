@@ -16,7 +16,11 @@ import { DatabaseFileError, databaseFilePath, integrityOf, openFile, timestamp }
 
 export type Backup = { path: string; bytes: number; integrity: string; results: number };
 
-export async function backupDatabase({ url = databaseUrl(), dir = process.env.BACKUP_DIR || "backups", now = new Date() } = {}): Promise<Backup> {
+export async function backupDatabase({
+  url = databaseUrl(),
+  dir = process.env.BACKUP_DIR || "backups",
+  now = new Date(),
+} = {}): Promise<Backup> {
   const source = databaseFilePath(url, "back it up");
   // Opening a missing file would create an empty database and "back up" nothing.
   if (!existsSync(source)) throw new DatabaseFileError(`There is no database at ${source}.`);
@@ -47,10 +51,16 @@ if (invokedDirectly) {
   backupDatabase()
     .then((b) => {
       if (b.integrity !== "ok") throw new Error(`The copy at ${b.path} failed its integrity check: ${b.integrity}`);
-      console.log(`Backed up ${databaseUrl()} to ${b.path} (${(b.bytes / 1024 / 1024).toFixed(1)} MB, ${b.results} results, integrity ok).`);
+      console.log(
+        `Backed up ${databaseUrl()} to ${b.path} (${(b.bytes / 1024 / 1024).toFixed(1)} MB, ${b.results} results, integrity ok).`,
+      );
     })
     .catch((error) => {
-      console.error(error instanceof DatabaseFileError ? error.message : `Backup failed: ${error instanceof Error ? error.message : error}`);
+      console.error(
+        error instanceof DatabaseFileError
+          ? error.message
+          : `Backup failed: ${error instanceof Error ? error.message : error}`,
+      );
       process.exit(1);
     });
 }

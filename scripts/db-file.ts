@@ -3,7 +3,7 @@
  * server is not a file on this machine: its own snapshot and backup facility is the way there.
  */
 import { resolve } from "node:path";
-import { createClient, type Client } from "@libsql/client";
+import { type Client, createClient } from "@libsql/client";
 
 export class DatabaseFileError extends Error {}
 
@@ -14,7 +14,10 @@ export function databaseFilePath(url: string, action: string): string {
       `DATABASE_URL points at a libSQL server (${server}), not an embedded file. To ${action}, use the libSQL server's own snapshot/backup facility; these scripts handle only file: databases.`,
     );
   }
-  const path = url.slice("file:".length).split("?")[0].replace(/^\/\/(localhost)?/, "");
+  const path = url
+    .slice("file:".length)
+    .split("?")[0]
+    .replace(/^\/\/(localhost)?/, "");
   if (!path || path === ":memory:") throw new DatabaseFileError(`DATABASE_URL=${url} is not a database file.`);
   return resolve(path);
 }
@@ -29,7 +32,10 @@ export async function integrityOf(path: string): Promise<string> {
   const client = openFile(path);
   try {
     const { rows } = await client.execute("PRAGMA integrity_check");
-    return rows.map((r) => String(r[0])).slice(0, 5).join("; ");
+    return rows
+      .map((r) => String(r[0]))
+      .slice(0, 5)
+      .join("; ");
   } catch (error) {
     return `unreadable: ${error instanceof Error ? error.message : String(error)}`;
   } finally {

@@ -16,11 +16,17 @@ export type Restore = { path: string; previous: string | null };
 
 async function assertChangewiseDatabase(file: string) {
   const integrity = await integrityOf(file);
-  if (integrity !== "ok") throw new DatabaseFileError(`${file} is damaged or not a database (integrity check: ${integrity}). Nothing was restored.`);
+  if (integrity !== "ok")
+    throw new DatabaseFileError(
+      `${file} is damaged or not a database (integrity check: ${integrity}). Nothing was restored.`,
+    );
   const client = openFile(file);
   try {
-    const { rows } = await client.execute("SELECT name FROM sqlite_master WHERE type = 'table' AND name IN ('results', 'testing_sessions', '__drizzle_migrations')");
-    if (rows.length < 3) throw new DatabaseFileError(`${file} is a SQLite file but not a Changewise database. Nothing was restored.`);
+    const { rows } = await client.execute(
+      "SELECT name FROM sqlite_master WHERE type = 'table' AND name IN ('results', 'testing_sessions', '__drizzle_migrations')",
+    );
+    if (rows.length < 3)
+      throw new DatabaseFileError(`${file} is a SQLite file but not a Changewise database. Nothing was restored.`);
   } finally {
     client.close();
   }
@@ -33,15 +39,25 @@ async function assertNotInUse(target: string) {
     const { rows } = await client.execute("PRAGMA journal_mode = DELETE");
     if (String(rows[0][0]).toLowerCase() !== "delete") throw new Error("busy");
   } catch (error) {
-    const busy = error instanceof Error && (error.message === "busy" || /SQLITE_BUSY|locked/i.test(`${(error as { code?: string }).code} ${error.message}`));
-    if (!busy) throw new DatabaseFileError(`${target} could not be opened (${error instanceof Error ? error.message : error}). Nothing was restored.`);
-    throw new DatabaseFileError(`${target} is open in another process (is the app running?). Stop it, then restore. Nothing was restored.`);
+    const busy =
+      error instanceof Error &&
+      (error.message === "busy" || /SQLITE_BUSY|locked/i.test(`${(error as { code?: string }).code} ${error.message}`));
+    if (!busy)
+      throw new DatabaseFileError(
+        `${target} could not be opened (${error instanceof Error ? error.message : error}). Nothing was restored.`,
+      );
+    throw new DatabaseFileError(
+      `${target} is open in another process (is the app running?). Stop it, then restore. Nothing was restored.`,
+    );
   } finally {
     client.close();
   }
 }
 
-export async function restoreDatabase(backup: string, { url = databaseUrl(), now = new Date() } = {}): Promise<Restore> {
+export async function restoreDatabase(
+  backup: string,
+  { url = databaseUrl(), now = new Date() } = {},
+): Promise<Restore> {
   const target = databaseFilePath(url, "restore it");
   const source = resolve(backup);
   if (!existsSync(source)) throw new DatabaseFileError(`There is no backup at ${source}.`);
@@ -68,7 +84,8 @@ export async function restoreDatabase(backup: string, { url = databaseUrl(), now
     client.close();
   }
   const integrity = await integrityOf(target);
-  if (integrity !== "ok") throw new DatabaseFileError(`The restored database failed its integrity check: ${integrity}.`);
+  if (integrity !== "ok")
+    throw new DatabaseFileError(`The restored database failed its integrity check: ${integrity}.`);
   return { path: target, previous };
 }
 
@@ -85,7 +102,11 @@ if (invokedDirectly) {
       if (r.previous) console.log(`The database it replaced is kept at ${r.previous}.`);
     })
     .catch((error) => {
-      console.error(error instanceof DatabaseFileError ? error.message : `Restore failed: ${error instanceof Error ? error.message : error}`);
+      console.error(
+        error instanceof DatabaseFileError
+          ? error.message
+          : `Restore failed: ${error instanceof Error ? error.message : error}`,
+      );
       process.exit(1);
     });
 }

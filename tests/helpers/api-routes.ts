@@ -38,7 +38,12 @@ export function exportedMethods(source: string): HttpMethod[] {
   // `export { handler as GET, handler as POST }` and `export { GET }`
   for (const block of source.matchAll(/export\s*\{([^}]*)\}/g)) {
     for (const part of block[1].split(",")) {
-      const name = part.trim().split(/\s+as\s+/).pop()?.trim() ?? "";
+      const name =
+        part
+          .trim()
+          .split(/\s+as\s+/)
+          .pop()
+          ?.trim() ?? "";
       if (isMethod(name)) found.add(name);
     }
   }

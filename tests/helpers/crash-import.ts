@@ -56,6 +56,11 @@ if (!actor) throw new Error(`No member with user id ${userId}`);
 const bytes = new Uint8Array(readFileSync(csvPath));
 const options = importOptionsSchema.parse({ mode: "commit", replace: "yes" });
 say("committing");
-const answer = await runImport(actor, Number(sessionId), { bytes, filename: "crash.csv", contentType: "text/csv" }, options);
+const answer = await runImport(
+  actor,
+  Number(sessionId),
+  { bytes, filename: "crash.csv", contentType: "text/csv" },
+  options,
+);
 say(`done ${JSON.stringify("counts" in answer ? answer.counts : null)}`);
 client.close();

@@ -51,7 +51,7 @@ export async function snapshotTo(path: string, client: Client = getClient()): Pr
 let copies = 0;
 
 /** Points the app at a fresh copy of `template` (closing the current connection first). */
-export function useFreshCopy(template: string, dir: string): string {
+export function switchToFreshCopy(template: string, dir: string): string {
   getClient().close();
   const path = `${dir}/copy-${++copies}.db`;
   copyFileSync(template, path);

@@ -40,7 +40,9 @@ export function toJson(value: unknown): string {
   if (value instanceof Raw) return value.text;
   if (Array.isArray(value)) return `[${value.map(toJson).join(",")}]`;
   if (value && typeof value === "object") {
-    return `{${Object.keys(value).map((k) => `${JSON.stringify(k)}:${toJson((value as Record<string, unknown>)[k])}`).join(",")}}`;
+    return `{${Object.keys(value)
+      .map((k) => `${JSON.stringify(k)}:${toJson((value as Record<string, unknown>)[k])}`)
+      .join(",")}}`;
   }
   return JSON.stringify(value) ?? "null";
 }
@@ -161,10 +163,19 @@ export function mutate(base: Record<string, unknown>, rng: Rng): FuzzCase {
   if (roll <= 10) {
     const [name, make] = rng.pick(EXTRA_KEYS);
     const body = clone(base);
-    const target = path && typeof getAt(body, path.slice(0, -1)) === "object" && !Array.isArray(getAt(body, path.slice(0, -1))) ? path.slice(0, -1) : [];
+    const target =
+      path && typeof getAt(body, path.slice(0, -1)) === "object" && !Array.isArray(getAt(body, path.slice(0, -1)))
+        ? path.slice(0, -1)
+        : [];
     // defineProperty, not assignment: `__proto__` must become an own key, as JSON.parse makes it.
     const extra = make();
-    for (const k of Object.keys(extra)) Object.defineProperty(getAt(body, target), k, { value: extra[k], enumerable: true, configurable: true, writable: true });
+    for (const k of Object.keys(extra))
+      Object.defineProperty(getAt(body, target), k, {
+        value: extra[k],
+        enumerable: true,
+        configurable: true,
+        writable: true,
+      });
     return json(`${name} at ${target.join(".") || "body"}`, body);
   }
   if (roll === 11 && path) {
@@ -188,13 +199,20 @@ export function mutate(base: Record<string, unknown>, rng: Rng): FuzzCase {
       "undefined",
       "{",
       `\ufeff${good}`,
-      good.replace(":", ": NaN, \"x\":"),
+      good.replace(":", ': NaN, "x":'),
       "",
     ]);
     return { kind: "invalid-json", text: broken, contentType: "application/json" };
   }
   if (roll === 16) {
-    const contentType = rng.pick<string | null>([null, "text/plain", "application/x-www-form-urlencoded", "multipart/form-data; boundary=x", "application/xml", "application/jso"]);
+    const contentType = rng.pick<string | null>([
+      null,
+      "text/plain",
+      "application/x-www-form-urlencoded",
+      "multipart/form-data; boundary=x",
+      "application/xml",
+      "application/jso",
+    ]);
     return { kind: `content-type ${contentType ?? "(none)"}`, text: toJson(base), contentType, value: base };
   }
   if (roll === 17) {

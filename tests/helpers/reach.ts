@@ -13,27 +13,56 @@ export type World = {
   tests: { id: number; name: string; org: number }[];
 };
 
-const rowsOf = async (client: Client, sql: string) => (await client.execute(sql)).rows as unknown as Record<string, unknown>[];
+const rowsOf = async (client: Client, sql: string) =>
+  (await client.execute(sql)).rows as unknown as Record<string, unknown>[];
 const ids = (csv: unknown) => (csv ? String(csv).split(",").map(Number) : []);
 
 export async function loadWorld(client: Client): Promise<World> {
   return {
-    orgs: (await rowsOf(client, "SELECT id, name FROM organizations")).map((r) => ({ id: Number(r.id), name: String(r.name) })),
+    orgs: (await rowsOf(client, "SELECT id, name FROM organizations")).map((r) => ({
+      id: Number(r.id),
+      name: String(r.name),
+    })),
     users: (
       await rowsOf(
         client,
         `SELECT u.id, u.name, u.email, m.organization_id AS org, m.role, a.id AS athlete_id
          FROM users u JOIN memberships m ON m.user_id = u.id LEFT JOIN athletes a ON a.user_id = u.id`,
       )
-    ).map((r) => ({ id: Number(r.id), name: String(r.name), email: String(r.email), org: Number(r.org), role: String(r.role), athleteId: r.athlete_id === null ? null : Number(r.athlete_id) })),
+    ).map((r) => ({
+      id: Number(r.id),
+      name: String(r.name),
+      email: String(r.email),
+      org: Number(r.org),
+      role: String(r.role),
+      athleteId: r.athlete_id === null ? null : Number(r.athlete_id),
+    })),
     squads: (
-      await rowsOf(client, "SELECT s.id, s.name, s.organization_id AS org, (SELECT group_concat(user_id) FROM squad_coaches c WHERE c.squad_id = s.id) AS coaches FROM squads s")
+      await rowsOf(
+        client,
+        "SELECT s.id, s.name, s.organization_id AS org, (SELECT group_concat(user_id) FROM squad_coaches c WHERE c.squad_id = s.id) AS coaches FROM squads s",
+      )
     ).map((r) => ({ id: Number(r.id), name: String(r.name), org: Number(r.org), coachIds: ids(r.coaches) })),
     athletes: (
-      await rowsOf(client, "SELECT a.id, a.name, a.external_id, a.organization_id AS org, (SELECT group_concat(squad_id) FROM squad_athletes x WHERE x.athlete_id = a.id) AS squads FROM athletes a")
-    ).map((r) => ({ id: Number(r.id), name: String(r.name), externalId: r.external_id === null ? null : String(r.external_id), org: Number(r.org), squadIds: ids(r.squads) })),
-    sessions: (await rowsOf(client, "SELECT id, organization_id AS org, squad_id, status FROM testing_sessions")).map((r) => ({ id: Number(r.id), org: Number(r.org), squadId: Number(r.squad_id), status: String(r.status) })),
-    tests: (await rowsOf(client, "SELECT id, name, organization_id AS org FROM tests")).map((r) => ({ id: Number(r.id), name: String(r.name), org: Number(r.org) })),
+      await rowsOf(
+        client,
+        "SELECT a.id, a.name, a.external_id, a.organization_id AS org, (SELECT group_concat(squad_id) FROM squad_athletes x WHERE x.athlete_id = a.id) AS squads FROM athletes a",
+      )
+    ).map((r) => ({
+      id: Number(r.id),
+      name: String(r.name),
+      externalId: r.external_id === null ? null : String(r.external_id),
+      org: Number(r.org),
+      squadIds: ids(r.squads),
+    })),
+    sessions: (await rowsOf(client, "SELECT id, organization_id AS org, squad_id, status FROM testing_sessions")).map(
+      (r) => ({ id: Number(r.id), org: Number(r.org), squadId: Number(r.squad_id), status: String(r.status) }),
+    ),
+    tests: (await rowsOf(client, "SELECT id, name, organization_id AS org FROM tests")).map((r) => ({
+      id: Number(r.id),
+      name: String(r.name),
+      org: Number(r.org),
+    })),
   };
 }
 
@@ -51,10 +80,16 @@ export function forbiddenFor(world: World, email: string | null): Visibility {
   const role = user?.role ?? "none";
   const manager = role === "owner" || role === "scientist";
   const squadOk = (s: World["squads"][number]) =>
-    s.org === org && (manager || (role === "coach" && s.coachIds.includes(user!.id)) || (role === "athlete" && world.athletes.some((a) => a.id === user!.athleteId && a.squadIds.includes(s.id))));
+    s.org === org &&
+    (manager ||
+      (role === "coach" && s.coachIds.includes(user!.id)) ||
+      (role === "athlete" && world.athletes.some((a) => a.id === user!.athleteId && a.squadIds.includes(s.id))));
   const visibleSquads = new Set(world.squads.filter(squadOk).map((s) => s.id));
   const athleteOk = (a: World["athletes"][number]) =>
-    a.org === org && (manager || (role === "coach" && a.squadIds.some((id) => visibleSquads.has(id))) || (role === "athlete" && a.id === user!.athleteId));
+    a.org === org &&
+    (manager ||
+      (role === "coach" && a.squadIds.some((id) => visibleSquads.has(id))) ||
+      (role === "athlete" && a.id === user!.athleteId));
   const sessionOk = (s: World["sessions"][number]) =>
     s.org === org && visibleSquads.has(s.squadId) && (role !== "athlete" || s.status === "published");
 
@@ -83,10 +118,23 @@ export function forbiddenFor(world: World, email: string | null): Visibility {
 }
 
 const ID_KEYS: Record<string, Entity> = {
-  athleteId: "athlete", athleteIds: "athlete", squadId: "squad", squadIds: "squad", sessionId: "session", testId: "test", testIds: "test",
+  athleteId: "athlete",
+  athleteIds: "athlete",
+  squadId: "squad",
+  squadIds: "squad",
+  sessionId: "session",
+  testId: "test",
+  testIds: "test",
 };
 const CONTAINERS: Record<string, Entity> = {
-  athlete: "athlete", athletes: "athlete", squad: "squad", squads: "squad", session: "session", sessions: "session", test: "test", tests: "test",
+  athlete: "athlete",
+  athletes: "athlete",
+  squad: "squad",
+  squads: "squad",
+  session: "session",
+  sessions: "session",
+  test: "test",
+  tests: "test",
 };
 
 /** Every (entity, id) an answer names, by key: `athleteId`, or `id` inside `athletes: [...]`. */
@@ -108,7 +156,7 @@ export function idsIn(value: unknown, context?: Entity, found: [Entity, number][
  * contents echoed in an error message) is not news to it.
  */
 export function leaksIn(answer: unknown, forbidden: Visibility, sentIds: Set<number>, sentText = ""): string[] {
-  const text = typeof answer === "string" ? answer : JSON.stringify(answer) ?? "";
+  const text = typeof answer === "string" ? answer : (JSON.stringify(answer) ?? "");
   const leaks = forbidden.strings.filter((s) => text.includes(s) && !sentText.includes(s)).map((s) => `"${s}"`);
   for (const [entity, id] of idsIn(answer)) {
     if (forbidden.ids[entity].has(id) && !sentIds.has(id)) leaks.push(`${entity} #${id}`);

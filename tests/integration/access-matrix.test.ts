@@ -10,7 +10,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { getClient } from "@/db/client";
 import { discoverApiRoutes, routeKeys } from "../helpers/api-routes";
 import { setupTestDatabase, userIdOf } from "../helpers/db";
-import { fingerprint, snapshotTo, useFreshCopy } from "../helpers/db-state";
+import { fingerprint, snapshotTo, switchToFreshCopy } from "../helpers/db-state";
 import { forbiddenFor, leaksIn, loadWorld, numbersIn, type World } from "../helpers/reach";
 import { call, sessionMock, signInAs } from "../helpers/session";
 
@@ -123,7 +123,7 @@ beforeAll(async () => {
   rowing = { squad: rowingSquad.id, athlete: rower.id, session: world.sessions.find((s) => s.squadId === rowingSquad.id)!.id, test: erg.id, cell: { athleteId: rower.id, testId: erg.id, value: 451.2 }, csv: `${rower.externalId},2000 m ergometer,1,451.2` };
   template = `${dirname(env.url.slice("file:".length))}/template.db`;
   await snapshotTo(template);
-  useFreshCopy(template, dirname(template));
+  switchToFreshCopy(template, dirname(template));
   pristine = await fingerprint();
 });
 afterAll(() => env.cleanup());
@@ -152,7 +152,7 @@ async function check(cell: Cell) {
   if (write) {
     const after = await fingerprint();
     if (status >= 400 && after !== before) tally.changedWhenRefused.push(`${where}: refused with ${status} but the database changed`);
-    if (after !== pristine) useFreshCopy(template, dirname(template));
+    if (after !== pristine) switchToFreshCopy(template, dirname(template));
   }
 }
 

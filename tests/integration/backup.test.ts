@@ -4,8 +4,18 @@
  * it holds exactly what the backup holds. A damaged file, a database still in use and a libSQL
  * server URL are refused without touching anything.
  */
-import { spawn, type ChildProcessWithoutNullStreams } from "node:child_process";
-import { copyFileSync, existsSync, mkdtempSync, openSync, readFileSync, rmSync, writeFileSync, writeSync, closeSync } from "node:fs";
+import { type ChildProcessWithoutNullStreams, spawn } from "node:child_process";
+import {
+  closeSync,
+  copyFileSync,
+  existsSync,
+  mkdtempSync,
+  openSync,
+  readFileSync,
+  rmSync,
+  writeFileSync,
+  writeSync,
+} from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { createClient } from "@libsql/client";
@@ -23,7 +33,9 @@ let sessionId = 0;
 beforeAll(async () => {
   env = await setupTestDatabase();
   dir = mkdtempSync(join(tmpdir(), "changewise-backup-"));
-  const { rows } = await getClient().execute("SELECT session_id FROM results GROUP BY session_id ORDER BY count(*) DESC LIMIT 1");
+  const { rows } = await getClient().execute(
+    "SELECT session_id FROM results GROUP BY session_id ORDER BY count(*) DESC LIMIT 1",
+  );
   sessionId = Number(rows[0][0]);
   // A season of raw uploads (24 MB), so copying takes long enough for the writer to get in.
   for (let i = 0; i < 6; i++) {
@@ -34,7 +46,8 @@ beforeAll(async () => {
   }
 });
 
-const writerCommits = async () => Number((await getClient().execute("SELECT count(*) FROM audit_events WHERE after LIKE '%busy-writer%'")).rows[0][0]);
+const writerCommits = async () =>
+  Number((await getClient().execute("SELECT count(*) FROM audit_events WHERE after LIKE '%busy-writer%'")).rows[0][0]);
 afterAll(() => {
   env.cleanup();
   rmSync(dir, { recursive: true, force: true });
@@ -104,8 +117,12 @@ describe("backup while writing, restore into a fresh path", () => {
     // One instant: every result of the session carries the same version, 1 + the writer's
     // transactions the copy saw; those number between what was written before and after it.
     const client = createClient({ url: `file:${restoredPath}` });
-    const versions = (await client.execute({ sql: "SELECT DISTINCT version FROM results WHERE session_id = ?", args: [sessionId] })).rows.map((r) => Number(r[0]));
-    const seen = Number((await client.execute("SELECT count(*) FROM audit_events WHERE after LIKE '%busy-writer%'")).rows[0][0]);
+    const versions = (
+      await client.execute({ sql: "SELECT DISTINCT version FROM results WHERE session_id = ?", args: [sessionId] })
+    ).rows.map((r) => Number(r[0]));
+    const seen = Number(
+      (await client.execute("SELECT count(*) FROM audit_events WHERE after LIKE '%busy-writer%'")).rows[0][0],
+    );
     const mode = String((await client.execute("PRAGMA journal_mode")).rows[0][0]);
     client.close();
     expect(versions).toEqual([1 + seen]);
@@ -118,7 +135,9 @@ describe("backup while writing, restore into a fresh path", () => {
     for (const table of Object.keys(liveHashes).filter((t) => t !== "results" && t !== "audit_events")) {
       expect([table, restoredHashes[table]]).toEqual([table, liveHashes[table]]);
     }
-    console.log(`backup: ${(backup.bytes / 1024 / 1024).toFixed(0)} MB copied while a second process committed transactions ${writtenBefore}→${writtenAfter} (of ${total}); the copy holds ${seen}, every version = ${1 + seen}; restored copy identical (${Object.keys(restoredHashes).length} tables), integrity ok`);
+    console.log(
+      `backup: ${(backup.bytes / 1024 / 1024).toFixed(0)} MB copied while a second process committed transactions ${writtenBefore}→${writtenAfter} (of ${total}); the copy holds ${seen}, every version = ${1 + seen}; restored copy identical (${Object.keys(restoredHashes).length} tables), integrity ok`,
+    );
     expect(existsSync(live)).toBe(true);
   }, 60_000);
 
@@ -151,8 +170,12 @@ describe("backup while writing, restore into a fresh path", () => {
     await getClient().execute("SELECT 1");
     await expect(restoreDatabase(backup.path, { url: env.url })).rejects.toThrow(/open in another process/);
 
-    await expect(backupDatabase({ url: "libsql://127.0.0.1:8080", dir: join(dir, "backups") })).rejects.toThrow(/libSQL server's own snapshot\/backup facility/);
-    await expect(restoreDatabase(backup.path, { url: "libsql://127.0.0.1:8080" })).rejects.toThrow(/libSQL server's own snapshot\/backup facility/);
+    await expect(backupDatabase({ url: "libsql://127.0.0.1:8080", dir: join(dir, "backups") })).rejects.toThrow(
+      /libSQL server's own snapshot\/backup facility/,
+    );
+    await expect(restoreDatabase(backup.path, { url: "libsql://127.0.0.1:8080" })).rejects.toThrow(
+      /libSQL server's own snapshot\/backup facility/,
+    );
     expect(await hashesOf(target)).toEqual(untouched);
 
     // Onto a closed database it works, and keeps the one it replaced.

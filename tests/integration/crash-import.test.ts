@@ -9,7 +9,7 @@ import { spawn } from "node:child_process";
 import { copyFileSync, existsSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { createClient, type Client } from "@libsql/client";
+import { type Client, createClient } from "@libsql/client";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { buildDatabase, generate } from "@/bench/import.bench";
 import { getClient } from "@/db/client";
@@ -44,7 +44,12 @@ async function importInProcess(url: string, csv: string) {
   process.env.DATABASE_URL = url;
   const actor = (await loadActor(fixture.userId))!;
   const options = importOptionsSchema.parse({ mode: "commit", replace: "yes" });
-  await runImport(actor, fixture.sessionId, { bytes: new TextEncoder().encode(csv), filename: "setup.csv", contentType: "text/csv" }, options);
+  await runImport(
+    actor,
+    fixture.sessionId,
+    { bytes: new TextEncoder().encode(csv), filename: "setup.csv", contentType: "text/csv" },
+    options,
+  );
   getClient().close();
 }
 
@@ -74,7 +79,12 @@ beforeAll(async () => {
   // Some results already stored, so "before" is not simply empty: the first 1 000 athletes' worth
   // of rows, one unit off, which the full import then replaces.
   const lines = csv.trimEnd().split("\n");
-  const partial = [lines[0], ...lines.slice(1, 1 + 1000 * 17 * 3).map((l) => l.replace(/,([\d.]+)$/, (_, v) => `,${(Number(v) + 1).toFixed(2)}`))];
+  const partial = [
+    lines[0],
+    ...lines
+      .slice(1, 1 + 1000 * 17 * 3)
+      .map((l) => l.replace(/,([\d.]+)$/, (_, v) => `,${(Number(v) + 1).toFixed(2)}`)),
+  ];
   await importInProcess(`file:${base}`, `${partial.join("\n")}\n`);
   before = (await inspect(base)).state;
   copyClosed(base, join(dir, "reference.db"));
@@ -86,7 +96,15 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 /** Runs the child on a copy of the base and kills it as `kill` says; what did it print? */
 function runAndKill(path: string, kill: Kill): Promise<{ lines: string[]; killed: boolean }> {
   return new Promise((resolve, reject) => {
-    const args = ["--conditions=react-server", "tests/helpers/crash-import.ts", `file:${path}`, `${fixture.userId}`, `${fixture.sessionId}`, csvPath, kill.pause ?? ""];
+    const args = [
+      "--conditions=react-server",
+      "tests/helpers/crash-import.ts",
+      `file:${path}`,
+      `${fixture.userId}`,
+      `${fixture.sessionId}`,
+      csvPath,
+      kill.pause ?? "",
+    ];
     const child = spawn("node_modules/.bin/tsx", args, { stdio: ["ignore", "pipe", "pipe"] });
     const lines: string[] = [];
     let killed = false;
@@ -110,7 +128,8 @@ function runAndKill(path: string, kill: Kill): Promise<{ lines: string[]; killed
     child.stderr.on("data", (chunk: Buffer) => (stderr += chunk.toString()));
     child.on("error", reject);
     child.on("exit", (code, signal) => {
-      if (signal !== "SIGKILL" && code !== 0) reject(new Error(`import child failed (${code}): ${stderr.slice(0, 500)}`));
+      if (signal !== "SIGKILL" && code !== 0)
+        reject(new Error(`import child failed (${code}): ${stderr.slice(0, 500)}`));
       else resolve({ lines, killed: signal === "SIGKILL" });
     });
   });
@@ -135,9 +154,13 @@ describe("a process killed in the middle of an import", () => {
       if (after === before) outcomes.rolledBack++;
       else if (after === full) outcomes.complete++;
       else outcomes.partial++;
-      console.log(`  kill ${kill.label}: ${killed ? "killed" : "finished first"} after "${lines.at(-1)}" → ${after === before ? "nothing imported" : after === full ? "whole import" : "PARTIAL"}, integrity ${integrity}`);
+      console.log(
+        `  kill ${kill.label}: ${killed ? "killed" : "finished first"} after "${lines.at(-1)}" → ${after === before ? "nothing imported" : after === full ? "whole import" : "PARTIAL"}, integrity ${integrity}`,
+      );
     }
-    console.log(`crash during import: ${KILLS.length} runs, ${outcomes.killed} killed with SIGKILL, ${outcomes.rolledBack} rolled back, ${outcomes.complete} complete, ${outcomes.partial} partial, integrity ok ${KILLS.length - outcomes.notIntact}/${KILLS.length}`);
+    console.log(
+      `crash during import: ${KILLS.length} runs, ${outcomes.killed} killed with SIGKILL, ${outcomes.rolledBack} rolled back, ${outcomes.complete} complete, ${outcomes.partial} partial, integrity ok ${KILLS.length - outcomes.notIntact}/${KILLS.length}`,
+    );
     expect(outcomes.partial).toBe(0);
     expect(outcomes.notIntact).toBe(0);
     // Every kill at a pause point is inside the transaction: those must all have rolled back.
