@@ -185,20 +185,48 @@ export function discoverBenchFiles(dir: string, filters: readonly string[] = [])
     .map((file) => join(dir, file));
 }
 
-/** Fixed-width table of results for the terminal. */
-export function formatTable(results: readonly BenchResult[]): string {
-  const header = ["name", "value", "unit", "baseline", "ratio", "target"];
-  const rows = results.map((r) => [
+/** "pass" or "FAIL" against the target (an upper bound), or "" when the figure has none. */
+export function verdict(r: BenchResult): string {
+  if (r.target === undefined) return "";
+  return r.value <= r.target ? "pass" : "FAIL";
+}
+
+/** The cells of one row, shared by the terminal and the Markdown table. */
+function cells(r: BenchResult): string[] {
+  return [
     r.name,
     formatNumber(r.value),
     r.unit,
     r.baseline === undefined ? "" : `${formatNumber(r.baseline)}${r.baselineUnit ? ` ${r.baselineUnit}` : ""}`,
     r.ratio === undefined ? "" : formatNumber(r.ratio),
-    r.target === undefined ? "" : `≤ ${formatNumber(r.target)}${r.value > r.target ? "  ABOVE TARGET" : ""}`,
-  ]);
-  const widths = header.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
-  const line = (cells: string[]) => cells.map((c, i) => c.padEnd(widths[i])).join("  ").trimEnd();
-  return [line(header), line(widths.map((w) => "-".repeat(w))), ...rows.map(line)].join("\n");
+    r.target === undefined ? "" : `≤ ${formatNumber(r.target)}`,
+    verdict(r),
+  ];
+}
+
+const HEADER = ["name", "value", "unit", "baseline", "ratio", "target", "ok"];
+
+/** Fixed-width table of results for the terminal. */
+export function formatTable(results: readonly BenchResult[]): string {
+  const rows = results.map(cells);
+  const widths = HEADER.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
+  const line = (row: string[]) => row.map((c, i) => c.padEnd(widths[i])).join("  ").trimEnd();
+  return [line(HEADER), line(widths.map((w) => "-".repeat(w))), ...rows.map(line)].join("\n");
+}
+
+/** The same table in Markdown, with each figure's one-line description. */
+export function formatMarkdown(results: readonly BenchResult[], heading: string): string {
+  const escapePipes = (text: string) => text.replace(/\|/g, "\\|");
+  const header = [...HEADER, "what"];
+  const rows = results.map((r) => [...cells(r), r.detail ?? ""].map(escapePipes));
+  return [
+    heading,
+    "",
+    `| ${header.join(" | ")} |`,
+    `|${header.map((_, i) => (i === 1 || i === 4 ? "---:" : "---")).join("|")}|`,
+    ...rows.map((row) => `| ${row.join(" | ")} |`),
+    "",
+  ].join("\n");
 }
 
 function formatNumber(value: number): string {

@@ -1,6 +1,6 @@
 /**
  * Runs every `bench/*.bench.ts` (see harness.ts), prints a table and writes
- * `bench/results/latest.json`.
+ * `bench/results/latest.json` and the same table in Markdown, `bench/results/latest.md`.
  *
  *   npm run bench            # all benchmark files
  *   npm run bench -- stats   # only files whose name contains "stats"
@@ -9,12 +9,14 @@
  * others kept); a full run rewrites it.
  */
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import { cpus } from "node:os";
 import { dirname, basename, join } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
-import { discoverBenchFiles, formatTable, type BenchModule, type BenchResult } from "./harness";
+import { discoverBenchFiles, formatMarkdown, formatTable, verdict, type BenchModule, type BenchResult } from "./harness";
 
 const benchDir = dirname(fileURLToPath(import.meta.url));
 const resultsFile = join(benchDir, "results", "latest.json");
+const markdownFile = join(benchDir, "results", "latest.md");
 
 async function main(): Promise<void> {
   const filters = process.argv.slice(2).filter((arg) => !arg.startsWith("-"));
@@ -39,7 +41,12 @@ async function main(): Promise<void> {
   const written = filters.length > 0 ? mergeWithPrevious(results) : results;
   mkdirSync(dirname(resultsFile), { recursive: true });
   writeFileSync(resultsFile, `${JSON.stringify(written, null, 2)}\n`);
-  console.log(`wrote ${written.length} results to ${resultsFile}`);
+  const cpu = cpus();
+  const machine = `${new Date().toISOString().slice(0, 10)}, Node ${process.version}, ${cpu.length} × ${cpu[0]?.model.trim() ?? "CPU"}`;
+  writeFileSync(markdownFile, formatMarkdown(written, `Benchmarks (\`npm run bench\`; ${machine})`));
+  console.log(`wrote ${written.length} results to ${resultsFile} and ${markdownFile}`);
+  const failed = written.filter((r) => verdict(r) === "FAIL").map((r) => r.name);
+  if (failed.length) console.log(`above target: ${failed.join(", ")}`);
 }
 
 async function runFile(file: string): Promise<BenchResult[]> {

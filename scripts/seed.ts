@@ -11,6 +11,9 @@ import {
 import { migrateDatabase } from "../db/migrate";
 import * as s from "../db/schema";
 
+/** Athletes who sign in, by name: both run in Senior Women. */
+const ATHLETE_ACCOUNTS: Record<string, string> = { "Tessa Lindqvist": "athlete@example.com", "Priya Damaschke": "athlete2@example.com" };
+
 type SessionPlan = { squad: "senior" | "academy"; date: string; phase: s.Phase; status: s.SessionStatus; tests: string[]; notes?: string };
 
 const SESSIONS: SessionPlan[] = [
@@ -47,6 +50,10 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
       { email: "coach@example.com", name: "Gus Adebayo", passwordHash },
       { email: "athlete@example.com", name: "Tessa Lindqvist", passwordHash },
       { email: "owner@other.example.com", name: "Marguerite Hale", passwordHash },
+      // A second coach and a second athlete account, so reach is visible between peers too:
+      // a coach of one squad beside a coach of the other, an athlete beside a squad-mate.
+      { email: "coach2@example.com", name: "Ilse Marchetti", passwordHash },
+      { email: "athlete2@example.com", name: "Priya Damaschke", passwordHash },
     ])
     .returning({ id: s.users.id, email: s.users.email });
   const userId = (email: string) => people.find((p) => p.email === email)!.id;
@@ -57,6 +64,8 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
     { userId: userId("coach@example.com"), organizationId: club.id, role: "coach" },
     { userId: userId("athlete@example.com"), organizationId: club.id, role: "athlete" },
     { userId: userId("owner@other.example.com"), organizationId: other.id, role: "owner" },
+    { userId: userId("coach2@example.com"), organizationId: club.id, role: "coach" },
+    { userId: userId("athlete2@example.com"), organizationId: club.id, role: "athlete" },
   ]);
 
   const [senior, academy] = await db
@@ -66,7 +75,10 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
       { organizationId: club.id, name: ACADEMY_SQUAD.name, sport: ACADEMY_SQUAD.sport },
     ])
     .returning({ id: s.squads.id });
-  await db.insert(s.squadCoaches).values({ squadId: academy.id, userId: userId("coach@example.com") });
+  await db.insert(s.squadCoaches).values([
+    { squadId: academy.id, userId: userId("coach@example.com") },
+    { squadId: senior.id, userId: userId("coach2@example.com") },
+  ]);
 
   async function addAthletes(squadId: number, organizationId: number, names: string[], positions: string[], prefix: string, sex: "female" | "male", birthYear: number) {
     const rows = await db
@@ -79,7 +91,7 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
           position: positions[i] ?? null,
           externalId: `${prefix}${String(i + 1).padStart(3, "0")}`,
           dateOfBirth: `${birthYear + (i % 4)}-${String((i % 12) + 1).padStart(2, "0")}-${String(((i * 7) % 27) + 1).padStart(2, "0")}`,
-          userId: name === "Tessa Lindqvist" ? userId("athlete@example.com") : null,
+          userId: ATHLETE_ACCOUNTS[name] ? userId(ATHLETE_ACCOUNTS[name]) : null,
         })),
       )
       .returning({ id: s.athletes.id });

@@ -1,114 +1,253 @@
 /**
- * Every API route × every role × a second organisation: nothing leaks.
- * Each route is called with ids of the demo club; the answer must be a refusal or
- * contain nothing the caller may not see (checked by looking for other athletes' names).
+ * The authorisation matrix: every API route × method (found on disk) × eight callers, against
+ * the demo club's records and against another organisation's, plus ids smuggled in bodies.
+ * Each cell checks the exact status, that the answer names nothing the caller may not see
+ * (names, external ids, record ids), and that a refused write changed nothing in the database.
+ * A write that was allowed is undone by moving the app to a fresh copy of the seeded file.
  */
+import { dirname } from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { eq } from "drizzle-orm";
-import { athletes, squads, testingSessions, tests } from "@/db/schema";
-import { setupTestDatabase } from "../helpers/db";
+import { getClient } from "@/db/client";
+import { discoverApiRoutes, routeKeys } from "../helpers/api-routes";
+import { setupTestDatabase, userIdOf } from "../helpers/db";
+import { fingerprint, snapshotTo, switchToFreshCopy } from "../helpers/db-state";
+import { forbiddenFor, leaksIn, loadWorld, numbersIn, type World } from "../helpers/reach";
 import { call, sessionMock, signInAs } from "../helpers/session";
 
 vi.mock("@/lib/auth/session", () => sessionMock);
 
-type Route = { name: string; module: string; method: string; params?: (ids: Ids) => Record<string, string>; body?: (ids: Ids) => unknown };
-type Ids = { squad: number; athlete: number; session: number; test: number };
+/** The callers, in the column order of the table below. */
+const CALLERS = [
+  ["anonymous", null],
+  ["owner", "owner@example.com"],
+  ["scientist", "scientist@example.com"],
+  ["coach of the squad", "coach2@example.com"],
+  ["coach of another squad", "coach@example.com"],
+  ["athlete (self)", "athlete@example.com"],
+  ["athlete (other)", "athlete2@example.com"],
+  ["other organisation's owner", "owner@other.example.com"],
+] as const;
+type Status = number;
+type Row = [Status, Status, Status, Status, Status, Status, Status, Status];
 
-const ROUTES: Route[] = [
-  { name: "GET /api/me", module: "@/app/api/me/route", method: "GET" },
-  { name: "GET /api/squads", module: "@/app/api/squads/route", method: "GET" },
-  { name: "POST /api/squads", module: "@/app/api/squads/route", method: "POST", body: () => ({ name: "Intruders" }) },
-  { name: "GET /api/squads/[id]", module: "@/app/api/squads/[squadId]/route", method: "GET", params: (i) => ({ squadId: String(i.squad) }) },
-  { name: "PATCH /api/squads/[id]", module: "@/app/api/squads/[squadId]/route", method: "PATCH", params: (i) => ({ squadId: String(i.squad) }), body: () => ({ name: "Renamed" }) },
-  { name: "GET /api/squads/[id]/athletes", module: "@/app/api/squads/[squadId]/athletes/route", method: "GET", params: (i) => ({ squadId: String(i.squad) }) },
-  { name: "POST /api/squads/[id]/athletes", module: "@/app/api/squads/[squadId]/athletes/route", method: "POST", params: (i) => ({ squadId: String(i.squad) }), body: () => ({ name: "Mole" }) },
-  { name: "GET /api/athletes", module: "@/app/api/athletes/route", method: "GET" },
-  { name: "PATCH /api/athletes/[id]", module: "@/app/api/athletes/[athleteId]/route", method: "PATCH", params: (i) => ({ athleteId: String(i.athlete) }), body: () => ({ name: "Renamed" }) },
-  { name: "GET /api/athletes/[id]/results", module: "@/app/api/athletes/[athleteId]/results/route", method: "GET", params: (i) => ({ athleteId: String(i.athlete) }) },
-  { name: "GET /api/coaches", module: "@/app/api/coaches/route", method: "GET" },
-  { name: "GET /api/tests", module: "@/app/api/tests/route", method: "GET" },
-  { name: "POST /api/tests", module: "@/app/api/tests/route", method: "POST", body: () => ({ name: "Sneaky", unit: "cm", direction: "higher" }) },
-  { name: "GET /api/tests/[id]", module: "@/app/api/tests/[testId]/route", method: "GET", params: (i) => ({ testId: String(i.test) }) },
-  { name: "PATCH /api/tests/[id]", module: "@/app/api/tests/[testId]/route", method: "PATCH", params: (i) => ({ testId: String(i.test) }), body: () => ({ version: 1, name: "Renamed" }) },
-  { name: "DELETE /api/tests/[id]", module: "@/app/api/tests/[testId]/route", method: "DELETE", params: (i) => ({ testId: String(i.test) }) },
-  { name: "GET /api/sessions", module: "@/app/api/sessions/route", method: "GET" },
-  { name: "POST /api/sessions", module: "@/app/api/sessions/route", method: "POST", body: (i) => ({ squadId: i.squad, date: "2026-12-01", phase: "retest", testIds: [i.test] }) },
-  { name: "GET /api/sessions/[id]", module: "@/app/api/sessions/[sessionId]/route", method: "GET", params: (i) => ({ sessionId: String(i.session) }) },
-  { name: "PATCH /api/sessions/[id]", module: "@/app/api/sessions/[sessionId]/route", method: "PATCH", params: (i) => ({ sessionId: String(i.session) }), body: () => ({ version: 1, notes: "x" }) },
-  { name: "PUT /api/sessions/[id]/results", module: "@/app/api/sessions/[sessionId]/results/route", method: "PUT", params: (i) => ({ sessionId: String(i.session) }), body: (i) => ({ results: [{ athleteId: i.athlete, testId: i.test, trials: [1], flag: null, version: 1 }] }) },
-  { name: "POST /api/sessions/[id]/undo", module: "@/app/api/sessions/[sessionId]/undo/route", method: "POST", params: (i) => ({ sessionId: String(i.session) }) },
-  {
-    name: "POST /api/sessions/[id]/import", module: "@/app/api/sessions/[sessionId]/import/route", method: "POST", params: (i) => ({ sessionId: String(i.session) }),
-    body: () => {
-      const form = new FormData();
-      form.set("file", new File(["athlete,test,trial,value\nNHW001,Countermovement jump,1,30\n"], "x.csv", { type: "text/csv" }));
-      return form;
-    },
+/** The records a row is aimed at: the demo club's Senior Women, or the other organisation's rowers. */
+type Target = {
+  squad: number; athlete: number; session: number; test: number;
+  /** A cell that holds a result (version 1) on `session`'s sheet, and a score for it. */
+  cell: { athleteId: number; testId: number; value: number };
+  csv: string;
+};
+
+type Request = { params?: Record<string, string>; body?: unknown; url?: string };
+type Entry =
+  | { exempt: string }
+  | {
+      expect: Row;
+      request: (t: Target) => Request;
+      /** Runs as the caller first (e.g. a change for undo to revert); its answer is not checked. */
+      setup?: (t: Target) => Promise<unknown>;
+      /** The row also runs against the other organisation's records (ids in the path or body). */
+      aimed?: boolean;
+    };
+
+const sheetWrite = (t: Target) => ({ results: [{ athleteId: t.cell.athleteId, testId: t.cell.testId, trials: [t.cell.value], flag: null, version: 1 }] });
+const csvForm = (t: Target) => {
+  const form = new FormData();
+  form.set("file", new File([`athlete,test,trial,value\n${t.csv}\n`], "scores.csv", { type: "text/csv" }));
+  return form;
+};
+const route = (path: string) => import(/* @vite-ignore */ `@/app/api${path}/route`);
+
+//                                                anon owner sci coach coach2 self other otherOrg
+const MATRIX: Record<string, Entry> = {
+  "GET /api/me":                                   { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
+  "GET /api/squads":                               { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
+  "POST /api/squads":                              { expect: [401, 201, 403, 403, 403, 403, 403, 201], request: () => ({ body: { name: "Matrix squad" } }) },
+  "GET /api/squads/[squadId]":                     { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { squadId: `${t.squad}` } }) },
+  "PATCH /api/squads/[squadId]":                   { expect: [401, 200, 403, 403, 403, 403, 403, 404], aimed: true, request: (t) => ({ params: { squadId: `${t.squad}` }, body: { sport: "Mixed" } }) },
+  "GET /api/squads/[squadId]/athletes":            { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { squadId: `${t.squad}` } }) },
+  "POST /api/squads/[squadId]/athletes":           { expect: [401, 201, 201, 201, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { squadId: `${t.squad}` }, body: { name: "Matrix Newcomer" } }) },
+  "GET /api/athletes":                             { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
+  "GET /api/athletes/[athleteId]":                 { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { athleteId: `${t.athlete}` } }) },
+  "PATCH /api/athletes/[athleteId]":               { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { athleteId: `${t.athlete}` }, body: { position: "MF" } }) },
+  "GET /api/athletes/[athleteId]/results":         { expect: [401, 200, 200, 200, 404, 200, 404, 404], aimed: true, request: (t) => ({ params: { athleteId: `${t.athlete}` } }) },
+  "GET /api/coaches":                              { expect: [401, 200, 200, 403, 403, 403, 403, 200], request: () => ({}) },
+  "GET /api/tests":                                { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
+  "POST /api/tests":                               { expect: [401, 201, 201, 403, 403, 403, 403, 201], request: () => ({ body: { name: "Matrix hop", unit: "cm", direction: "higher" } }) },
+  "GET /api/tests/[testId]":                       { expect: [401, 200, 200, 200, 200, 200, 200, 404], aimed: true, request: (t) => ({ params: { testId: `${t.test}` } }) },
+  "PATCH /api/tests/[testId]":                     { expect: [401, 200, 200, 403, 403, 403, 403, 404], aimed: true, request: (t) => ({ params: { testId: `${t.test}` }, body: { version: 1, typicalErrorSource: "Matrix" } }) },
+  "DELETE /api/tests/[testId]":                    { expect: [401, 200, 200, 403, 403, 403, 403, 404], aimed: true, request: (t) => ({ params: { testId: `${t.test}` } }) },
+  "GET /api/sessions":                             { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
+  "POST /api/sessions":                            { expect: [401, 201, 201, 201, 404, 403, 403, 404], aimed: true, request: (t) => ({ body: { squadId: t.squad, date: "2026-12-01", phase: "retest", testIds: [t.test] } }) },
+  "GET /api/sessions/[sessionId]":                 { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` } }) },
+  "PATCH /api/sessions/[sessionId]":               { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` }, body: { version: 1, notes: "Matrix" } }) },
+  "PUT /api/sessions/[sessionId]/results":         { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` }, body: sheetWrite(t) }) },
+  "POST /api/sessions/[sessionId]/undo": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true,
+    // Something of the caller's own to undo, where the caller may write at all.
+    setup: async (t) => call((await route("/sessions/[sessionId]/results")).PUT, { method: "PUT", params: { sessionId: `${t.session}` }, body: sheetWrite(t) }),
+    request: (t) => ({ params: { sessionId: `${t.session}` } }),
   },
-  { name: "GET /api/sessions/[id]/audit", module: "@/app/api/sessions/[sessionId]/audit/route", method: "GET", params: (i) => ({ sessionId: String(i.session) }) },
-];
+  "GET /api/sessions/[sessionId]/audit":           { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` } }) },
+  "POST /api/sessions/[sessionId]/import":         { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` }, body: csvForm(t), url: "http://test.local/api?mode=preview" }) },
+  "GET /api/auth/[...nextauth]": { exempt: "next-auth's own endpoints (csrf, providers, session): public by design; sign-in throttling and sign-out have their own tests" },
+  "POST /api/auth/[...nextauth]": { exempt: "next-auth's sign-in and sign-out callbacks: public by design; covered by throttle.test.ts and sign-out.test.ts" },
+};
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
-let senior: Ids;
-let clubNames: string[] = [];
+let world: World;
+let template = "";
+let pristine = "";
+let club: Target;
+let rowing: Target;
+const tally = { cells: 0, leaks: [] as string[], wrong: [] as string[], changedWhenRefused: [] as string[] };
+
+const byName = <T extends { name: string }>(list: T[], name: string) => {
+  const found = list.find((x) => x.name === name);
+  if (!found) throw new Error(`No demo record ${name}`);
+  return found;
+};
 
 beforeAll(async () => {
   env = await setupTestDatabase();
-  const [squad] = await env.db.select({ id: squads.id }).from(squads).where(eq(squads.name, "Senior Women"));
-  const [athlete] = await env.db.select({ id: athletes.id }).from(athletes).where(eq(athletes.name, "Maren Oduya"));
-  const [session] = await env.db.select({ id: testingSessions.id }).from(testingSessions).where(eq(testingSessions.squadId, squad.id));
-  const [test] = await env.db.select({ id: tests.id }).from(tests).where(eq(tests.name, "Countermovement jump"));
-  senior = { squad: squad.id, athlete: athlete.id, session: session.id, test: test.id };
-  clubNames = (await env.db.select({ name: athletes.name }).from(athletes).where(eq(athletes.organizationId, 1))).map((a) => a.name);
+  world = await loadWorld(getClient());
+  const tessa = byName(world.athletes, "Tessa Lindqvist");
+  const senior = byName(world.squads, "Senior Women");
+  const cmj = byName(world.tests, "Countermovement jump");
+  // The Senior Women post-block session: a draft, so its coach may write to it.
+  const seniorDraft = world.sessions.filter((s) => s.squadId === senior.id && s.status === "draft").at(-1)!;
+  club = { squad: senior.id, athlete: tessa.id, session: seniorDraft.id, test: cmj.id, cell: { athleteId: tessa.id, testId: cmj.id, value: 31.5 }, csv: `${tessa.externalId},Countermovement jump,1,31.5` };
+  const rower = byName(world.athletes, "Wren Abernathy");
+  const erg = byName(world.tests, "2000 m ergometer");
+  const rowingSquad = byName(world.squads, "Junior Sculling");
+  rowing = { squad: rowingSquad.id, athlete: rower.id, session: world.sessions.find((s) => s.squadId === rowingSquad.id)!.id, test: erg.id, cell: { athleteId: rower.id, testId: erg.id, value: 451.2 }, csv: `${rower.externalId},2000 m ergometer,1,451.2` };
+  template = `${dirname(env.url.slice("file:".length))}/template.db`;
+  await snapshotTo(template);
+  switchToFreshCopy(template, dirname(template));
+  pristine = await fingerprint();
 });
 afterAll(() => env.cleanup());
 
-async function run(route: Route, ids: Ids) {
-  const mod = await import(/* @vite-ignore */ route.module);
-  return call(mod[route.method], { method: route.method, params: route.params?.(ids) ?? {}, body: route.body?.(ids) });
+type Cell = { label: string; caller: (typeof CALLERS)[number]; method: string; path: string; request: Request; expected: Status; setup?: () => Promise<unknown> };
+
+/** Runs one cell and records a wrong status, a leak, or a refused write that changed something. */
+async function check(cell: Cell) {
+  const [who, email] = cell.caller;
+  await signInAs(email);
+  if (cell.setup) await cell.setup();
+  const write = cell.method !== "GET";
+  const before = write ? await fingerprint() : "";
+  const handler = (await route(cell.path.replace(/^\/api/, "")))[cell.method];
+  const { params = {}, body, url } = cell.request;
+  const { status, json } = await call(handler, { method: cell.method, params, body, url });
+  tally.cells++;
+  const where = `${cell.label} as ${who}`;
+  if (status !== cell.expected) tally.wrong.push(`${where}: ${status}, expected ${cell.expected} ${JSON.stringify(json).slice(0, 160)}`);
+  if (status >= 400 && !(json?.error && typeof json.error.code === "string" && typeof json.error.message === "string")) {
+    tally.wrong.push(`${where}: ${status} without the error shape`);
+  }
+  const file = body instanceof FormData ? body.get("file") : null;
+  const sentText = file instanceof File ? await file.text() : JSON.stringify(body ?? null);
+  for (const leak of leaksIn(json, forbiddenFor(world, email), numbersIn(params, body), sentText)) tally.leaks.push(`${where}: ${leak}`);
+  if (write) {
+    const after = await fingerprint();
+    if (status >= 400 && after !== before) tally.changedWhenRefused.push(`${where}: refused with ${status} but the database changed`);
+    if (after !== pristine) switchToFreshCopy(template, dirname(template));
+  }
 }
 
-const leaked = (json: unknown, allowed: string[]) =>
-  clubNames.filter((name) => !allowed.includes(name) && JSON.stringify(json).includes(name));
+const expectClean = () => {
+  expect(tally.wrong).toEqual([]);
+  expect(tally.changedWhenRefused).toEqual([]);
+  expect(tally.leaks).toEqual([]);
+};
 
-describe("access matrix", () => {
-  it("anonymous: 401 on every route", async () => {
-    await signInAs(null);
-    for (const route of ROUTES) expect([route.name, (await run(route, senior)).status]).toEqual([route.name, 401]);
+describe("authorisation matrix", () => {
+  it("has an entry for every route and method on disk, and none for routes that are gone", () => {
+    const onDisk = routeKeys(discoverApiRoutes());
+    expect(onDisk.length).toBeGreaterThan(20);
+    expect(onDisk.filter((key) => !(key in MATRIX))).toEqual([]);
+    expect(Object.keys(MATRIX).filter((key) => !onDisk.includes(key))).toEqual([]);
   });
 
-  it("another organisation's owner: 404 or an empty answer for every demo-club record, and no names leak", async () => {
-    await signInAs("owner@other.example.com");
-    for (const route of ROUTES) {
-      const { status, json } = await run(route, senior);
-      expect([route.name, leaked(json, [])]).toEqual([route.name, []]);
-      if (route.params || route.name.startsWith("POST /api/sessions") || route.name.startsWith("PUT")) {
-        expect([route.name, status]).toEqual([route.name, 404]);
+  it("every caller × every route, aimed at the demo club's Senior Women records", async () => {
+    for (const [key, entry] of Object.entries(MATRIX)) {
+      if ("exempt" in entry) continue;
+      const [method, path] = key.split(" ");
+      for (const [i, caller] of CALLERS.entries()) {
+        await check({ label: key, caller, method, path, request: entry.request(club), expected: entry.expect[i], setup: entry.setup && (() => entry.setup!(club)) });
       }
     }
+    expectClean();
   });
 
-  it("the athlete: refused on every staff route, and sees no other athlete anywhere", async () => {
-    await signInAs("athlete@example.com");
-    for (const route of ROUTES) {
-      const { status, json } = await run(route, senior);
-      expect([route.name, leaked(json, ["Tessa Lindqvist"])]).toEqual([route.name, []]);
-      const readsOwnData = ["GET /api/me", "GET /api/athletes", "GET /api/tests", "GET /api/tests/[id]"].includes(route.name);
-      if (!readsOwnData) expect([route.name, [403, 404].includes(status)]).toEqual([route.name, true]);
-    }
-  });
-
-  it("the coach of Academy U18: refused or 404 for every Senior Women record, and no senior names leak", async () => {
-    await signInAs("coach@example.com");
-    const seniorNames = clubNames.slice(0, 18);
-    for (const route of ROUTES) {
-      const { status, json } = await run(route, senior);
-      const seen = seniorNames.filter((n) => JSON.stringify(json).includes(n));
-      expect([route.name, seen]).toEqual([route.name, []]);
-      // The test library is organisation-wide: a coach reads every test.
-      if ((route.params && route.name !== "GET /api/tests/[id]") || route.name.startsWith("POST /api/sessions")) {
-        expect([route.name, [403, 404].includes(status)]).toEqual([route.name, true]);
+  it("every caller × every route with an id, aimed at the other organisation's records", async () => {
+    for (const [key, entry] of Object.entries(MATRIX)) {
+      if ("exempt" in entry || !entry.aimed) continue;
+      const [method, path] = key.split(" ");
+      for (const [i, caller] of CALLERS.entries()) {
+        const own = caller[1] === "owner@other.example.com";
+        // Their own records answer the other owner as the club's answer its owner; to everyone
+        // else in the club they do not exist (unless the role is refused before any lookup).
+        const expected = own ? entry.expect[1] : [401, 403].includes(entry.expect[i]) ? entry.expect[i] : 404;
+        await check({ label: `${key} (other organisation)`, caller, method, path, request: entry.request(rowing), expected, setup: entry.setup && (() => entry.setup!(rowing)) });
       }
     }
+    expectClean();
+  });
+
+  it("ids of other organisations and other squads sent in bodies and queries are refused", async () => {
+    const academy = byName(world.squads, "Academy U18");
+    const theo = byName(world.athletes, "Theo Varga");
+    const seniorPublished = world.sessions.find((s) => s.squadId === club.squad && s.status === "published")!;
+    const otherOwner = await userIdOf("owner@other.example.com");
+    const coachId = await userIdOf("coach@example.com");
+    const write = (t: Target, cell: Partial<Target["cell"]>) => ({ results: [{ ...t.cell, ...cell, trials: [30], flag: null, version: null }] });
+    const [, owner, , coach2, , , , other] = CALLERS;
+    const cases: [typeof CALLERS[number], string, string, Request, Status][] = [
+      [owner, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: rowing.athlete }) }, 422],
+      [owner, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { testId: rowing.test }) }, 422],
+      [coach2, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: theo.id }) }, 422],
+      [coach2, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${seniorPublished.id}` }, body: sheetWrite(club) }, 403],
+      [other, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${rowing.session}` }, body: write(rowing, { athleteId: club.athlete }) }, 422],
+      [other, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${rowing.session}` }, body: write(rowing, { testId: club.test }) }, 422],
+      [owner, "POST", "/api/squads/[squadId]/athletes", { params: { squadId: `${club.squad}` }, body: { athleteId: rowing.athlete } }, 404],
+      [coach2, "POST", "/api/squads/[squadId]/athletes", { params: { squadId: `${club.squad}` }, body: { athleteId: theo.id } }, 404],
+      [other, "POST", "/api/squads/[squadId]/athletes", { params: { squadId: `${rowing.squad}` }, body: { athleteId: club.athlete } }, 404],
+      [owner, "POST", "/api/sessions", { body: { squadId: rowing.squad, date: "2026-12-01", phase: "retest", testIds: [club.test] } }, 404],
+      [owner, "POST", "/api/sessions", { body: { squadId: club.squad, date: "2026-12-01", phase: "retest", testIds: [club.test, rowing.test] } }, 422],
+      [coach2, "POST", "/api/sessions", { body: { squadId: academy.id, date: "2026-12-01", phase: "retest", testIds: [club.test] } }, 404],
+      [other, "POST", "/api/sessions", { body: { squadId: rowing.squad, date: "2026-12-01", phase: "retest", testIds: [club.test] } }, 422],
+      [other, "POST", "/api/sessions", { body: { squadId: club.squad, date: "2026-12-01", phase: "retest", testIds: [rowing.test] } }, 404],
+      [owner, "PATCH", "/api/squads/[squadId]", { params: { squadId: `${club.squad}` }, body: { coachUserIds: [otherOwner] } }, 422],
+      [other, "PATCH", "/api/squads/[squadId]", { params: { squadId: `${rowing.squad}` }, body: { coachUserIds: [coachId] } }, 422],
+      [owner, "PATCH", "/api/athletes/[athleteId]", { params: { athleteId: `${club.athlete}` }, body: { squadIds: [rowing.squad] } }, 422],
+      [coach2, "PATCH", "/api/athletes/[athleteId]", { params: { athleteId: `${club.athlete}` }, body: { squadIds: [academy.id] } }, 422],
+      [owner, "PATCH", "/api/sessions/[sessionId]", { params: { sessionId: `${club.session}` }, body: { version: 1, testIds: [club.test, rowing.test] } }, 422],
+      [coach2, "PATCH", "/api/sessions/[sessionId]", { params: { sessionId: `${club.session}` }, body: { version: 1, status: "published" } }, 403],
+      [owner, "POST", "/api/sessions/[sessionId]/import", { params: { sessionId: `${club.session}` }, body: csvForm({ ...club, csv: rowing.csv }), url: "http://test.local/api?mode=commit" }, 422],
+      [coach2, "POST", "/api/sessions/[sessionId]/import", { params: { sessionId: `${club.session}` }, body: csvForm({ ...club, csv: `${theo.externalId},Countermovement jump,1,30` }), url: "http://test.local/api?mode=commit" }, 422],
+      [owner, "GET", "/api/sessions", { url: `http://test.local/api?squadId=${rowing.squad}` }, 404],
+      [CALLERS[4], "GET", "/api/sessions", { url: `http://test.local/api?squadId=${club.squad}` }, 404],
+    ];
+    for (const [caller, method, path, request, expected] of cases) {
+      await check({ label: `${method} ${path} with ${JSON.stringify(request.body instanceof FormData ? "csv" : (request.body ?? request.url)).slice(0, 90)}`, caller, method, path, request, expected });
+    }
+    expectClean();
+  });
+
+  it("the leak finder has teeth: the Senior Women roster, as the Academy coach would see it, is all leaks", async () => {
+    await signInAs("owner@example.com");
+    const { json } = await call((await route("/squads/[squadId]/athletes")).GET, { params: { squadId: `${club.squad}` } });
+    const leaks = leaksIn(json, forbiddenFor(world, "coach@example.com"), new Set());
+    expect(leaks).toContain('"Tessa Lindqvist"');
+    expect(leaks).toContain(`athlete #${club.athlete}`);
+    expect(leaksIn(json, forbiddenFor(world, "coach2@example.com"), new Set())).toEqual([]);
+  });
+
+  it("adds up", () => {
+    console.log(`authorisation matrix: ${tally.cells} cells checked, ${tally.leaks.length} leaks`);
+    expect(tally.cells).toBeGreaterThan(300);
+    expect(tally.leaks).toHaveLength(0);
   });
 });
