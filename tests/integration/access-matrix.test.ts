@@ -33,6 +33,8 @@ type Row = [Status, Status, Status, Status, Status, Status, Status, Status];
 /** The records a row is aimed at: the demo club's Senior Women, or the other organisation's rowers. */
 type Target = {
   squad: number; athlete: number; session: number; test: number;
+  /** An earlier session of the same squad that measured `test` too (the Change report's pair). */
+  preSession: number;
   /** A cell that holds a result (version 1) on `session`'s sheet, and a score for it. */
   cell: { athleteId: number; testId: number; value: number };
   csv: string;
@@ -90,6 +92,10 @@ const MATRIX: Record<string, Entry> = {
   },
   "GET /api/sessions/[sessionId]/audit":           { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` } }) },
   "POST /api/sessions/[sessionId]/import":         { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` }, body: csvForm(t), url: "http://test.local/api?mode=preview" }) },
+  "GET /api/reports/change": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    request: () => ({ url: `http://test.local/api/reports/change?testId=${club.test}&fromSessionId=${club.preSession}&toSessionId=${club.session}` }),
+  },
   "GET /api/auth/[...nextauth]": { exempt: "next-auth's own endpoints (csrf, providers, session): public by design; sign-in throttling and sign-out have their own tests" },
   "POST /api/auth/[...nextauth]": { exempt: "next-auth's sign-in and sign-out callbacks: public by design; covered by throttle.test.ts and sign-out.test.ts" },
 };
@@ -116,11 +122,13 @@ beforeAll(async () => {
   const cmj = byName(world.tests, "Countermovement jump");
   // The Senior Women post-block session: a draft, so its coach may write to it.
   const seniorDraft = world.sessions.filter((s) => s.squadId === senior.id && s.status === "draft").at(-1)!;
-  club = { squad: senior.id, athlete: tessa.id, session: seniorDraft.id, test: cmj.id, cell: { athleteId: tessa.id, testId: cmj.id, value: 31.5 }, csv: `${tessa.externalId},Countermovement jump,1,31.5` };
+  const seniorPre = world.sessions.find((s) => s.squadId === senior.id && s.status === "published")!;
+  club = { squad: senior.id, athlete: tessa.id, session: seniorDraft.id, preSession: seniorPre.id, test: cmj.id, cell: { athleteId: tessa.id, testId: cmj.id, value: 31.5 }, csv: `${tessa.externalId},Countermovement jump,1,31.5` };
   const rower = byName(world.athletes, "Wren Abernathy");
   const erg = byName(world.tests, "2000 m ergometer");
   const rowingSquad = byName(world.squads, "Junior Sculling");
-  rowing = { squad: rowingSquad.id, athlete: rower.id, session: world.sessions.find((s) => s.squadId === rowingSquad.id)!.id, test: erg.id, cell: { athleteId: rower.id, testId: erg.id, value: 451.2 }, csv: `${rower.externalId},2000 m ergometer,1,451.2` };
+  const rowingSession = world.sessions.find((s) => s.squadId === rowingSquad.id)!.id;
+  rowing = { squad: rowingSquad.id, athlete: rower.id, session: rowingSession, preSession: rowingSession, test: erg.id, cell: { athleteId: rower.id, testId: erg.id, value: 451.2 }, csv: `${rower.externalId},2000 m ergometer,1,451.2` };
   template = `${dirname(env.url.slice("file:".length))}/template.db`;
   await snapshotTo(template);
   switchToFreshCopy(template, dirname(template));
@@ -205,11 +213,11 @@ describe("authorisation matrix", () => {
     const write = (t: Target, cell: Partial<Target["cell"]>) => ({ results: [{ ...t.cell, ...cell, trials: [30], flag: null, version: null }] });
     const [, owner, , coach2, , , , other] = CALLERS;
     const cases: [typeof CALLERS[number], string, string, Request, Status][] = [
-      [owner, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: rowing.athlete }) }, 422],
+      [owner, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: rowing.athlete }) }, 404],
       [owner, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { testId: rowing.test }) }, 422],
-      [coach2, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: theo.id }) }, 422],
+      [coach2, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: theo.id }) }, 404],
       [coach2, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${seniorPublished.id}` }, body: sheetWrite(club) }, 403],
-      [other, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${rowing.session}` }, body: write(rowing, { athleteId: club.athlete }) }, 422],
+      [other, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${rowing.session}` }, body: write(rowing, { athleteId: club.athlete }) }, 404],
       [other, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${rowing.session}` }, body: write(rowing, { testId: club.test }) }, 422],
       [owner, "POST", "/api/squads/[squadId]/athletes", { params: { squadId: `${club.squad}` }, body: { athleteId: rowing.athlete } }, 404],
       [coach2, "POST", "/api/squads/[squadId]/athletes", { params: { squadId: `${club.squad}` }, body: { athleteId: theo.id } }, 404],

@@ -187,17 +187,6 @@ const BASES: Record<string, Base> = {
   },
 };
 
-/** The one 5xx another branch is fixing: the mean of finite trials overflows to Infinity. */
-const NON_FINITE_MEAN = "non-finite mean (fixed on the import branch)";
-const isNonFiniteMean = (key: string, c: FuzzCase, ids: Ids) =>
-  key === "PUT /api/sessions/[sessionId]/results" &&
-  Array.isArray((c.value as any)?.results) &&
-  (c.value as any).results.some(
-    (r: any) =>
-      r?.testId === ids.mean &&
-      Array.isArray(r.trials) &&
-      !Number.isFinite(r.trials.filter(Number.isFinite).reduce((a: number, b: number) => a + b, 0)),
-  );
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
 let template = "";
@@ -276,7 +265,6 @@ const tally = {
   requests: 0,
   byStatus: {} as Record<number, number>,
   serverErrors: [] as string[],
-  known: [] as string[],
   badShape: [] as string[],
   changedWhenRefused: [] as string[],
 };
@@ -325,7 +313,7 @@ describe("JSON fuzzing", () => {
           const where = `${key} as ${email}: ${c.kind}`;
           if (status >= 500) {
             const line = `${where} → ${status} ${text.slice(0, 200)} (body: ${(c.text ?? "").slice(0, 200)})`;
-            (isNonFiniteMean(key, c, ids) ? tally.known : tally.serverErrors).push(line);
+            tally.serverErrors.push(line);
           }
           if (status >= 400 && !hasErrorShape(json)) tally.badShape.push(`${where} → ${status} ${text.slice(0, 120)}`);
           if (status < 400 && (json === null || typeof json !== "object"))
@@ -336,20 +324,19 @@ describe("JSON fuzzing", () => {
       }
     }
     const byStatus = Object.fromEntries(Object.entries(tally.byStatus).sort());
-    const fiveXx = tally.serverErrors.length + tally.known.length;
+    const fiveXx = tally.serverErrors.length;
     console.log(
-      `json fuzz: ${tally.requests} requests, by status ${JSON.stringify(byStatus)}, ${fiveXx} 5xx${tally.known.length ? ` (${tally.known.length} known: ${NON_FINITE_MEAN})` : ""}`,
+      `json fuzz: ${tally.requests} requests, by status ${JSON.stringify(byStatus)}, ${fiveXx} 5xx`,
     );
-    for (const line of [...tally.serverErrors, ...tally.known]) console.log(`  5xx: ${line}`);
+    for (const line of tally.serverErrors) console.log(`  5xx: ${line}`);
     expect(tally.requests).toBeGreaterThanOrEqual(1000);
     expect(tally.serverErrors).toEqual([]);
     expect(tally.badShape).toEqual([]);
     expect(tally.changedWhenRefused).toEqual([]);
   }, 180_000);
 
-  // Kept apart so the fuzz run above stays green while the fix is on its way; when it lands this
-  // starts to "fail" (the save no longer 500s) and the `.fails` marker should simply be removed.
-  it.fails(`trials [1e308, 1e308] on a mean-of-trials test answer without a 5xx — ${NON_FINITE_MEAN}`, async () => {
+  // Once a 500: the mean of two finite trials overflowed to Infinity, which libSQL refused to store.
+  it("trials [1e308, 1e308] on a mean-of-trials test answer 422 and store nothing", async () => {
     switchToFreshCopy(template, dirname(template));
     await signInAs("owner@example.com");
     const handler = (await import("@/app/api/sessions/[sessionId]/results/route")).PUT;
@@ -361,7 +348,7 @@ describe("JSON fuzzing", () => {
         results: [{ athleteId: ids.tessa, testId: ids.mean, trials: [1e308, 1e308], flag: null, version: null }],
       },
     });
-    expect(status).toBeLessThan(500);
+    expect(status).toBe(422);
     expect(await resultsChecksum()).toBe(before);
   });
 });
