@@ -38,9 +38,15 @@ const nextConfig: NextConfig = {
     return [
       {
         source: "/:path*",
-        headers: entries({ ...STATIC_SECURITY_HEADERS, "Content-Security-Policy": contentSecurityPolicy({ dev: process.env.NODE_ENV === "development" }) }),
+        headers: entries({
+          ...STATIC_SECURITY_HEADERS,
+          "Content-Security-Policy": contentSecurityPolicy({ dev: process.env.NODE_ENV === "development" }),
+        }),
       },
-      { source: "/api/:path*", headers: entries({ "Content-Security-Policy": API_CONTENT_SECURITY_POLICY, "Cache-Control": "no-store" }) },
+      {
+        source: "/api/:path*",
+        headers: entries({ "Content-Security-Policy": API_CONTENT_SECURITY_POLICY, "Cache-Control": "no-store" }),
+      },
     ];
   },
 };

@@ -1,4 +1,4 @@
-import { NextResponse, type NextRequest } from "next/server";
+import { type NextRequest, NextResponse } from "next/server";
 import { getToken } from "next-auth/jwt";
 import { methodRefusal } from "@/lib/api/methods";
 import { contentSecurityPolicy, runtimeSecurityHeaders, servedOverHttps, withHeaders } from "@/lib/security/headers";
@@ -28,7 +28,10 @@ export async function proxy(request: NextRequest) {
 
   const refusal = methodRefusal(request.method, pathname, { serverAction: request.headers.has("next-action") });
   if (refusal) {
-    const response = new NextResponse(refusal.body, { status: refusal.status, headers: { "content-type": refusal.contentType } });
+    const response = new NextResponse(refusal.body, {
+      status: refusal.status,
+      headers: { "content-type": refusal.contentType },
+    });
     if (refusal.allow) response.headers.set("Allow", refusal.allow.join(", "));
     return answer(response);
   }

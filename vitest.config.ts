@@ -1,5 +1,5 @@
-import { defineConfig } from "vitest/config";
 import { fileURLToPath } from "node:url";
+import { defineConfig } from "vitest/config";
 
 const alias = {
   "@": fileURLToPath(new URL("./", import.meta.url)),
@@ -19,7 +19,15 @@ export default defineConfig({
     projects: [
       {
         extends: true,
-        test: { name: "unit", include: ["tests/stats/**/*.test.ts", "tests/unit/**/*.test.ts", "tests/integration/**/*.test.ts", "lib/**/*.test.ts"] },
+        test: {
+          name: "unit",
+          include: [
+            "tests/stats/**/*.test.ts",
+            "tests/unit/**/*.test.ts",
+            "tests/integration/**/*.test.ts",
+            "lib/**/*.test.ts",
+          ],
+        },
       },
       {
         extends: true,

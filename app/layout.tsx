@@ -4,7 +4,8 @@ import "./globals.css";
 
 export const metadata: Metadata = {
   title: { default: "Changewise", template: "%s · Changewise" },
-  description: "Pre/post testing for strength and conditioning: real change against test noise and the smallest worthwhile change.",
+  description:
+    "Pre/post testing for strength and conditioning: real change against test noise and the smallest worthwhile change.",
 };
 
 export const viewport: Viewport = { width: "device-width", initialScale: 1, themeColor: "#1E2A44" };

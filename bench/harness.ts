@@ -67,9 +67,13 @@ export function measure(fn: () => unknown, options: MeasureOptions = {}): Measur
   const minTimeMs = options.minTimeMs ?? 500;
   const warmup = options.warmup ?? 200;
   const minSamples = options.minSamples ?? 15;
-  warm(() => {
-    sink = fn();
-  }, warmup, options.warmupMs ?? 300);
+  warm(
+    () => {
+      sink = fn();
+    },
+    warmup,
+    options.warmupMs ?? 300,
+  );
 
   const callsPerSample = calibrate(fn);
   const perCall: number[] = [];
@@ -92,18 +96,18 @@ export interface Comparison {
  * that load from other processes hits both alike; the ratio is the median of
  * the per-round ratios.
  */
-export function compare(
-  fn: () => unknown,
-  baseline: () => unknown,
-  options: MeasureOptions = {},
-): Comparison {
+export function compare(fn: () => unknown, baseline: () => unknown, options: MeasureOptions = {}): Comparison {
   const minTimeMs = options.minTimeMs ?? 500;
   const warmup = options.warmup ?? 200;
   const minSamples = options.minSamples ?? 15;
-  warm(() => {
-    sink = fn();
-    sink = baseline();
-  }, warmup, options.warmupMs ?? 300);
+  warm(
+    () => {
+      sink = fn();
+      sink = baseline();
+    },
+    warmup,
+    options.warmupMs ?? 300,
+  );
   const callsFn = calibrate(fn);
   const callsBase = calibrate(baseline);
   const fnTimes: number[] = [];
@@ -210,7 +214,11 @@ const HEADER = ["name", "value", "unit", "baseline", "ratio", "target", "ok"];
 export function formatTable(results: readonly BenchResult[]): string {
   const rows = results.map(cells);
   const widths = HEADER.map((h, i) => Math.max(h.length, ...rows.map((row) => row[i].length)));
-  const line = (row: string[]) => row.map((c, i) => c.padEnd(widths[i])).join("  ").trimEnd();
+  const line = (row: string[]) =>
+    row
+      .map((c, i) => c.padEnd(widths[i]))
+      .join("  ")
+      .trimEnd();
   return [line(HEADER), line(widths.map((w) => "-".repeat(w))), ...rows.map(line)].join("\n");
 }
 

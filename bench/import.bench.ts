@@ -14,21 +14,28 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Client } from "@libsql/client";
 import { getClient } from "../db/client";
-import { openDatabase, enableWriteAheadLog } from "../db/connection";
+import { enableWriteAheadLog, openDatabase } from "../db/connection";
 import { migrateDatabase } from "../db/migrate";
 import * as s from "../db/schema";
 import { loadActor } from "../lib/data/actors";
 import { runImport } from "../lib/data/import";
-import { importOptionsSchema } from "../lib/validation/import";
 import { reduceTrials } from "../lib/trials";
-import { seededRandom, type BenchResult } from "./harness";
+import { importOptionsSchema } from "../lib/validation/import";
+import { type BenchResult, seededRandom } from "./harness";
 
 const ATHLETES = 2000;
 const TESTS = 17;
 const TRIALS = 3;
 const ROUNDS = 3;
 
-type Fixture = { url: string; sessionId: number; userId: number; organizationId: number; athleteIds: number[]; testIds: number[] };
+type Fixture = {
+  url: string;
+  sessionId: number;
+  userId: number;
+  organizationId: number;
+  athleteIds: number[];
+  testIds: number[];
+};
 
 /** The same club in every database: one squad of 2 000 athletes, 17 tests, one session with all of them. */
 export async function buildDatabase(url: string): Promise<Fixture> {
@@ -36,9 +43,15 @@ export async function buildDatabase(url: string): Promise<Fixture> {
   const { client, db } = openDatabase(url);
   try {
     const [org] = await db.insert(s.organizations).values({ name: "Bench club" }).returning({ id: s.organizations.id });
-    const [user] = await db.insert(s.users).values({ email: "bench@example.com", name: "Bench scientist" }).returning({ id: s.users.id });
+    const [user] = await db
+      .insert(s.users)
+      .values({ email: "bench@example.com", name: "Bench scientist" })
+      .returning({ id: s.users.id });
     await db.insert(s.memberships).values({ userId: user.id, organizationId: org.id, role: "scientist" });
-    const [squad] = await db.insert(s.squads).values({ organizationId: org.id, name: "Bench squad" }).returning({ id: s.squads.id });
+    const [squad] = await db
+      .insert(s.squads)
+      .values({ organizationId: org.id, name: "Bench squad" })
+      .returning({ id: s.squads.id });
     const athleteIds: number[] = [];
     for (let i = 0; i < ATHLETES; i += 500) {
       const chunk = Array.from({ length: Math.min(500, ATHLETES - i) }, (_, k) => ({
@@ -49,7 +62,9 @@ export async function buildDatabase(url: string): Promise<Fixture> {
       athleteIds.push(...(await db.insert(s.athletes).values(chunk).returning({ id: s.athletes.id })).map((r) => r.id));
     }
     for (let i = 0; i < athleteIds.length; i += 500) {
-      await db.insert(s.squadAthletes).values(athleteIds.slice(i, i + 500).map((athleteId) => ({ squadId: squad.id, athleteId })));
+      await db
+        .insert(s.squadAthletes)
+        .values(athleteIds.slice(i, i + 500).map((athleteId) => ({ squadId: squad.id, athleteId })));
     }
     const testRows = await db
       .insert(s.tests)
@@ -68,8 +83,17 @@ export async function buildDatabase(url: string): Promise<Fixture> {
       .insert(s.testingSessions)
       .values({ organizationId: org.id, squadId: squad.id, date: "2026-09-01", phase: "pre-block" })
       .returning({ id: s.testingSessions.id });
-    await db.insert(s.sessionTests).values(testRows.map((t, position) => ({ sessionId: session.id, testId: t.id, position })));
-    return { url, sessionId: session.id, userId: user.id, organizationId: org.id, athleteIds, testIds: testRows.map((t) => t.id) };
+    await db
+      .insert(s.sessionTests)
+      .values(testRows.map((t, position) => ({ sessionId: session.id, testId: t.id, position })));
+    return {
+      url,
+      sessionId: session.id,
+      userId: user.id,
+      organizationId: org.id,
+      athleteIds,
+      testIds: testRows.map((t) => t.id),
+    };
   } finally {
     client.close();
   }
@@ -84,7 +108,8 @@ export function generate() {
   for (let a = 0; a < ATHLETES; a++) {
     const athlete = `B${String(a + 1).padStart(5, "0")}`;
     for (let t = 0; t < TESTS; t++) {
-      for (let k = 0; k < TRIALS; k++) lines.push(`${athlete},Bench test ${t + 1},${k + 1},${scores[(a * TESTS + t) * TRIALS + k]}`);
+      for (let k = 0; k < TRIALS; k++)
+        lines.push(`${athlete},Bench test ${t + 1},${k + 1},${scores[(a * TESTS + t) * TRIALS + k]}`);
     }
   }
   return { scores, csv: `${lines.join("\n")}\n` };
@@ -95,9 +120,15 @@ async function timeImport(fixture: Fixture, bytes: Uint8Array): Promise<number> 
   const actor = (await loadActor(fixture.userId))!;
   const options = importOptionsSchema.parse({ mode: "commit" });
   const started = process.hrtime.bigint();
-  const answer = await runImport(actor, fixture.sessionId, { bytes, filename: "bench.csv", contentType: "text/csv" }, options);
+  const answer = await runImport(
+    actor,
+    fixture.sessionId,
+    { bytes, filename: "bench.csv", contentType: "text/csv" },
+    options,
+  );
   const seconds = Number(process.hrtime.bigint() - started) / 1e9;
-  if (answer.mode !== "commit" || answer.counts.resultsCreated !== ATHLETES * TESTS) throw new Error("The import did not write every result.");
+  if (answer.mode !== "commit" || answer.counts.resultsCreated !== ATHLETES * TESTS)
+    throw new Error("The import did not write every result.");
   getClient().close();
   return seconds;
 }
@@ -106,10 +137,14 @@ async function timeImport(fixture: Fixture, bytes: Uint8Array): Promise<number> 
 async function timeBareInsert(fixture: Fixture, scores: Float64Array): Promise<number> {
   const { client } = openDatabase(fixture.url);
   await enableWriteAheadLog(client, fixture.url);
-  const rules = Array.from({ length: TESTS }, (_, t) => ({ rule: t % 3 ? ("best" as const) : ("mean" as const), direction: t % 2 ? ("lower" as const) : ("higher" as const) }));
+  const rules = Array.from({ length: TESTS }, (_, t) => ({
+    rule: t % 3 ? ("best" as const) : ("mean" as const),
+    direction: t % 2 ? ("lower" as const) : ("higher" as const),
+  }));
   const started = process.hrtime.bigint();
   const now = Date.now();
-  const columns = "(organization_id, session_id, athlete_id, test_id, trials, value, flag, updated_by, updated_at, version)";
+  const columns =
+    "(organization_id, session_id, athlete_id, test_id, trials, value, flag, updated_by, updated_at, version)";
   const batch = 3000;
   const tx = await client.transaction("write");
   try {
@@ -122,7 +157,18 @@ async function timeBareInsert(fixture: Fixture, scores: Float64Array): Promise<n
         const t = r % TESTS;
         const base = r * TRIALS;
         const trials = [scores[base], scores[base + 1], scores[base + 2]];
-        args.push(fixture.organizationId, fixture.sessionId, fixture.athleteIds[a], fixture.testIds[t], JSON.stringify(trials), reduceTrials(trials, rules[t].rule, rules[t].direction), null, fixture.userId, now, 1);
+        args.push(
+          fixture.organizationId,
+          fixture.sessionId,
+          fixture.athleteIds[a],
+          fixture.testIds[t],
+          JSON.stringify(trials),
+          reduceTrials(trials, rules[t].rule, rules[t].direction),
+          null,
+          fixture.userId,
+          now,
+          1,
+        );
       }
       const placeholders = new Array(end - start).fill("(?, ?, ?, ?, ?, ?, ?, ?, ?, ?)").join(", ");
       await tx.execute({ sql: `INSERT INTO results ${columns} VALUES ${placeholders}`, args });

@@ -48,7 +48,14 @@ export default async function pages(): Promise<BenchResult[]> {
   const server = await startProductionServer();
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
-    args: ["--no-sandbox", "--disable-gpu", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--no-first-run"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+      "--no-first-run",
+    ],
   });
   try {
     const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });

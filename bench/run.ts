@@ -10,9 +10,16 @@
  */
 import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { cpus } from "node:os";
-import { dirname, basename, join } from "node:path";
+import { basename, dirname, join } from "node:path";
 import { fileURLToPath, pathToFileURL } from "node:url";
-import { discoverBenchFiles, formatMarkdown, formatTable, verdict, type BenchModule, type BenchResult } from "./harness";
+import {
+  type BenchModule,
+  type BenchResult,
+  discoverBenchFiles,
+  formatMarkdown,
+  formatTable,
+  verdict,
+} from "./harness";
 
 const benchDir = dirname(fileURLToPath(import.meta.url));
 const resultsFile = join(benchDir, "results", "latest.json");

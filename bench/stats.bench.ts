@@ -8,7 +8,7 @@
  *   Target ≤ 3.
  */
 import { pairedChange } from "../lib/stats";
-import { compare, measure, seededRandom, type BenchResult } from "./harness";
+import { type BenchResult, compare, measure, seededRandom } from "./harness";
 
 function squad(n: number, seed: number): { pre: number[]; post: number[] } {
   const random = seededRandom(seed);
@@ -43,9 +43,13 @@ export default async function statsBench(): Promise<BenchResult[]> {
   const pre64 = Float64Array.from(large.pre);
   const post64 = Float64Array.from(large.post);
   // Interleaved, so that load from other processes affects both sides alike.
-  const vs = compare(() => pairedChange(large.pre, large.post), () => bareMeanSd(pre64, post64), {
-    minTimeMs: 1000,
-  });
+  const vs = compare(
+    () => pairedChange(large.pre, large.post),
+    () => bareMeanSd(pre64, post64),
+    {
+      minTimeMs: 1000,
+    },
+  );
   const { ratio, fn: full, baseline: bare } = vs;
 
   return [

@@ -9,7 +9,9 @@ export function AppShell({ actor, children }: { actor: Actor; children: React.Re
     <div className="min-h-screen">
       <header className="bg-ink text-white">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
-          <Link href="/" className="text-lg font-bold tracking-tight">Changewise</Link>
+          <Link href="/" className="text-lg font-bold tracking-tight">
+            Changewise
+          </Link>
           <nav aria-label="Main" className="flex-1">
             <NavLinks items={navFor(actor.role)} />
           </nav>

@@ -45,7 +45,12 @@ export function Dialog({
             <h2 id={titleId} className="text-lg font-bold">
               {title}
             </h2>
-            <button type="button" className="rounded px-2 text-xl leading-none text-ink-faint hover:text-ink" aria-label="Close" onClick={onClose}>
+            <button
+              type="button"
+              className="rounded px-2 text-xl leading-none text-ink-faint hover:text-ink"
+              aria-label="Close"
+              onClick={onClose}
+            >
               ×
             </button>
           </div>

@@ -38,7 +38,9 @@ export function Field({
 }) {
   return (
     <div className={className}>
-      <label htmlFor={id} className="label">{label}</label>
+      <label htmlFor={id} className="label">
+        {label}
+      </label>
       {children}
       <FieldError id={`${id}-error`} message={error} />
     </div>
@@ -80,7 +82,8 @@ export function applyServerErrors<T extends FieldValues>(
   setError: UseFormSetError<T>,
   formFields: readonly string[],
 ): string {
-  if (!(error instanceof ApiClientError)) return error instanceof Error ? error.message : "The change could not be saved.";
+  if (!(error instanceof ApiClientError))
+    return error instanceof Error ? error.message : "The change could not be saved.";
   const fields = (error.body as ErrorBody | null)?.error?.fields ?? {};
   const leftover: string[] = [];
   for (const [key, message] of Object.entries(fields)) {

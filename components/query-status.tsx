@@ -9,8 +9,12 @@ export type QueryState = { isPending: boolean; error: Error | null; refetch: () 
 export function LoadFailure({ failure, error, onRetry }: { failure: string; error: Error; onRetry: () => unknown }) {
   return (
     <div role="alert" className="card p-4">
-      <p className="font-semibold">{failure}: {error.message}</p>
-      <button className="btn-quiet mt-2" onClick={() => onRetry()}>Try again</button>
+      <p className="font-semibold">
+        {failure}: {error.message}
+      </p>
+      <button className="btn-quiet mt-2" onClick={() => onRetry()}>
+        Try again
+      </button>
     </div>
   );
 }
@@ -33,7 +37,11 @@ export function QueryStatus({
 }) {
   return (
     <>
-      {query.isPending && <p role="status" className="text-ink-soft">{loading}</p>}
+      {query.isPending && (
+        <p role="status" className="text-ink-soft">
+          {loading}
+        </p>
+      )}
       {query.error && <LoadFailure failure={failure} error={query.error} onRetry={query.refetch} />}
       {empty && <p className="card p-6 text-ink-soft">{empty}</p>}
     </>

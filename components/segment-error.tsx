@@ -3,15 +3,7 @@
 import Link from "next/link";
 
 /** The error boundary body for every staff segment: says nothing was changed, offers to try again. */
-export function SegmentError({
-  what,
-  error,
-  retry,
-}: {
-  what: string;
-  error: unknown;
-  retry: () => void;
-}) {
+export function SegmentError({ what, error, retry }: { what: string; error: unknown; retry: () => void }) {
   const digest = error instanceof Error && "digest" in error ? String((error as { digest?: string }).digest ?? "") : "";
   return (
     <div role="alert" className="card mx-auto max-w-lg p-6 text-center">

@@ -1,13 +1,13 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { signIn } from "next-auth/react";
 import { useRouter, useSearchParams } from "next/navigation";
+import { signIn } from "next-auth/react";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Field, FormAlert } from "@/components/form-bits";
 import { safeNextPath } from "@/lib/safe-next";
-import { signInSchema, type SignInInput } from "@/lib/validation/auth";
+import { type SignInInput, signInSchema } from "@/lib/validation/auth";
 
 export function SignInForm() {
   const router = useRouter();
@@ -40,7 +40,13 @@ export function SignInForm() {
         <input id="email" type="email" autoComplete="username" className="field" {...register("email")} />
       </Field>
       <Field id="password" label="Password" error={errors.password?.message}>
-        <input id="password" type="password" autoComplete="current-password" className="field" {...register("password")} />
+        <input
+          id="password"
+          type="password"
+          autoComplete="current-password"
+          className="field"
+          {...register("password")}
+        />
       </Field>
       <FormAlert message={failure} />
       <button type="submit" className="btn-primary w-full" disabled={isSubmitting}>

@@ -1,15 +1,20 @@
 "use client";
 
+import { useSuspenseQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { SquadsStatus } from "@/components/squads/squads-status";
-import { TableCard, type Column } from "@/components/table-card";
+import { type Column, TableCard } from "@/components/table-card";
 import { isCoach } from "@/lib/auth/permissions";
-import type { Role } from "@/lib/domain";
-import { useSuspenseQuery } from "@tanstack/react-query";
 import { squadQueries } from "@/lib/client/queries";
-import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
+import type { Role } from "@/lib/domain";
+import { formatDate, PHASE_LABELS, STATUS_LABELS } from "@/lib/labels";
 
-const COLUMNS: Column[] = [{ label: "Squad" }, { label: "Athletes", align: "right" }, { label: "Latest session" }, { label: "Status" }];
+const COLUMNS: Column[] = [
+  { label: "Squad" },
+  { label: "Athletes", align: "right" },
+  { label: "Latest session" },
+  { label: "Status" },
+];
 
 export function SquadsOverview({ role }: { role: Role }) {
   const squads = useSuspenseQuery(squadQueries.list());
@@ -17,7 +22,9 @@ export function SquadsOverview({ role }: { role: Role }) {
   return (
     <section aria-labelledby="squads-heading">
       <div className="mb-4 flex items-baseline justify-between">
-        <h1 id="squads-heading" className="text-2xl font-bold">Squads</h1>
+        <h1 id="squads-heading" className="text-2xl font-bold">
+          Squads
+        </h1>
         <p className="text-sm text-ink-soft">
           {isCoach({ role }) ? "The squads you coach" : "Every squad in your organisation"}
         </p>
@@ -43,9 +50,7 @@ export function SquadsOverview({ role }: { role: Role }) {
                   <span className="text-ink-faint">No sessions yet</span>
                 )}
               </td>
-              <td className="px-4 py-3">
-                {squad.latestSession ? STATUS_LABELS[squad.latestSession.status] : "–"}
-              </td>
+              <td className="px-4 py-3">{squad.latestSession ? STATUS_LABELS[squad.latestSession.status] : "–"}</td>
             </tr>
           ))}
         </TableCard>

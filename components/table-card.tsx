@@ -34,7 +34,12 @@ export function TableCard({
         <thead className={`border-b border-line text-xs text-ink-faint${asWritten ? "" : " uppercase tracking-wide"}`}>
           <tr>
             {columns.map(({ label, align, srOnly, className, ...th }, i) => (
-              <th key={i} scope="col" {...th} className={[headCellClass, align === "right" && "text-right", className].filter(Boolean).join(" ")}>
+              <th
+                key={i}
+                scope="col"
+                {...th}
+                className={[headCellClass, align === "right" && "text-right", className].filter(Boolean).join(" ")}
+              >
                 {srOnly ? <span className="sr-only">{label}</span> : label}
               </th>
             ))}

@@ -18,7 +18,11 @@ function cached(): Cached {
   const current = globalCache.__changewiseDb;
   if (current && current.url === url) return current;
   // WAL is a property of the file, set once by the migrator; nothing to tune per connection.
-  const entry = { url, ...openDatabase(url, process.env.DATABASE_AUTH_TOKEN), writes: Promise.resolve() as Promise<unknown> };
+  const entry = {
+    url,
+    ...openDatabase(url, process.env.DATABASE_AUTH_TOKEN),
+    writes: Promise.resolve() as Promise<unknown>,
+  };
   globalCache.__changewiseDb = entry;
   return entry;
 }

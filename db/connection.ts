@@ -2,7 +2,7 @@
  * Opening a database: the embedded SQLite file or a libSQL server. Plain, so scripts (migrate,
  * seed, bench) can use it; the app reaches the database through `db/client.ts`.
  */
-import { createClient, type Client } from "@libsql/client";
+import { type Client, createClient } from "@libsql/client";
 import { drizzle, type LibSQLDatabase } from "drizzle-orm/libsql";
 import * as schema from "./schema";
 
@@ -37,4 +37,3 @@ export function openDatabase(url: string, authToken?: string): { client: Client;
 export async function enableWriteAheadLog(client: Client, url: string): Promise<void> {
   if (url.startsWith("file:")) await client.execute("PRAGMA journal_mode = WAL");
 }
-

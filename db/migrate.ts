@@ -2,7 +2,7 @@ import { mkdirSync } from "node:fs";
 import { dirname, resolve } from "node:path";
 import { fileURLToPath } from "node:url";
 import { migrate } from "drizzle-orm/libsql/migrator";
-import { databaseUrl, openDatabase, enableWriteAheadLog } from "./connection";
+import { databaseUrl, enableWriteAheadLog, openDatabase } from "./connection";
 
 const migrationsFolder = resolve(dirname(fileURLToPath(import.meta.url)), "../drizzle");
 

@@ -3,16 +3,7 @@
  * organization id, so every query can be scoped to one tenant in its WHERE clause.
  */
 import { sql } from "drizzle-orm";
-import {
-  blob,
-  index,
-  integer,
-  primaryKey,
-  real,
-  sqliteTable,
-  text,
-  uniqueIndex,
-} from "drizzle-orm/sqlite-core";
+import { blob, index, integer, primaryKey, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
 
 import {
   AUDIT_ACTIONS,
@@ -30,9 +21,7 @@ import {
 export type { Direction, Phase, ResultFlag, Role, SessionStatus, Sex, SwcMethod, TrialRule } from "../lib/domain";
 
 const createdAt = () =>
-  integer("created_at", { mode: "timestamp_ms" })
-    .notNull()
-    .default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
+  integer("created_at", { mode: "timestamp_ms" }).notNull().default(sql`(cast(unixepoch('subsec') * 1000 as integer))`);
 
 export const organizations = sqliteTable("organizations", {
   id: integer("id").primaryKey({ autoIncrement: true }),

@@ -11,8 +11,8 @@ import { useResultSaver } from "./sheet/use-result-saver";
 import { useSheetCache } from "./sheet/use-sheet-cache";
 import { useSheetUndo } from "./sheet/use-sheet-undo";
 
-export type { CellState } from "./sheet/use-result-saver";
 export type { InvalidEntry } from "./sheet/use-invalid-entries";
+export type { CellState } from "./sheet/use-result-saver";
 
 type TrialEntry = { athleteId: number; testId: number; index: number; text: string };
 
@@ -98,7 +98,8 @@ export function useSessionSheet(sessionId: number) {
     setFlag,
     takeTheirs,
     retry: saver.retry,
-    revertTrial: (athleteId: number, testId: number, index: number) => entries.clear([trialKey(athleteId, testId, index)]),
+    revertTrial: (athleteId: number, testId: number, index: number) =>
+      entries.clear([trialKey(athleteId, testId, index)]),
     undo,
     busy: Object.values(cells).some((c) => c.status === "saving"),
   };

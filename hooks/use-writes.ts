@@ -18,7 +18,12 @@ import {
   updateSquadRequest,
   updateTestRequest,
 } from "@/lib/client/writes";
-import type { AthleteUpdateInput, SquadAthleteAddInput, SquadCreateInput, SquadUpdateInput } from "@/lib/validation/roster";
+import type {
+  AthleteUpdateInput,
+  SquadAthleteAddInput,
+  SquadCreateInput,
+  SquadUpdateInput,
+} from "@/lib/validation/roster";
 import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
 import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
 
@@ -33,7 +38,8 @@ function useWrite<V, R>(request: (vars: V) => Promise<R>, refresh: readonly Quer
 const ROSTER_FAMILIES = [queryKeys.squads, queryKeys.athletes] as const;
 const SESSION_FAMILIES = [queryKeys.sessions, queryKeys.squads] as const;
 
-export const useCreateSquad = () => useWrite((input: SquadCreateInput) => createSquadRequest(input), [queryKeys.squads]);
+export const useCreateSquad = () =>
+  useWrite((input: SquadCreateInput) => createSquadRequest(input), [queryKeys.squads]);
 
 export const useUpdateSquad = (squadId: number) =>
   useWrite((input: SquadUpdateInput) => updateSquadRequest(squadId, input), [queryKeys.squads]);
@@ -42,22 +48,23 @@ export const useAddAthlete = (squadId: number) =>
   useWrite((input: SquadAthleteAddInput) => addAthleteRequest(squadId, input), ROSTER_FAMILIES);
 
 export const useUpdateAthlete = () =>
-  useWrite(({ athleteId, input }: { athleteId: number; input: AthleteUpdateInput }) => updateAthleteRequest(athleteId, input), [
-    ...ROSTER_FAMILIES,
-    queryKeys.sessions,
-  ]);
+  useWrite(
+    ({ athleteId, input }: { athleteId: number; input: AthleteUpdateInput }) => updateAthleteRequest(athleteId, input),
+    [...ROSTER_FAMILIES, queryKeys.sessions],
+  );
 
 export const useCreateTest = () => useWrite((input: TestCreateInput) => createTestRequest(input), [queryKeys.tests]);
 
 export const useUpdateTest = () =>
-  useWrite(({ testId, input }: { testId: number; input: TestUpdateInput }) => updateTestRequest(testId, input), [
-    queryKeys.tests,
-    queryKeys.sessions,
-  ]);
+  useWrite(
+    ({ testId, input }: { testId: number; input: TestUpdateInput }) => updateTestRequest(testId, input),
+    [queryKeys.tests, queryKeys.sessions],
+  );
 
 export const useDeleteTest = () => useWrite((testId: number) => deleteTestRequest(testId), [queryKeys.tests]);
 
-export const useCreateSession = () => useWrite((input: SessionCreateInput) => createSessionRequest(input), SESSION_FAMILIES);
+export const useCreateSession = () =>
+  useWrite((input: SessionCreateInput) => createSessionRequest(input), SESSION_FAMILIES);
 
 export const useUpdateSession = () =>
   useWrite(

@@ -59,5 +59,10 @@ export const AUDIT_ENTITY_TYPES = ["session", "result", "upload", "squad", "athl
 export type AuditEntityType = (typeof AUDIT_ENTITY_TYPES)[number];
 
 /** The changes a Session sheet lists under Recent changes: its scores, typed or imported. */
-export const SHEET_AUDIT_ACTIONS = ["result.create", "result.update", "result.undo", "results.import"] as const satisfies readonly AuditAction[];
+export const SHEET_AUDIT_ACTIONS = [
+  "result.create",
+  "result.update",
+  "result.undo",
+  "results.import",
+] as const satisfies readonly AuditAction[];
 export type SheetAuditAction = (typeof SHEET_AUDIT_ACTIONS)[number];

@@ -38,7 +38,10 @@ run("Preparing the database (migrate, seed the demo club if empty)", "npx", ["ts
 if (process.env.SKIP_BUILD !== "1") run("Building Changewise", "npx", ["next", "build"]);
 
 console.log(`\n▸ Starting Changewise on ${env.NEXTAUTH_URL}`);
-const server = spawn("npx", ["next", "start", "-p", port, "-H", bindHost], { stdio: ["ignore", "pipe", "inherit"], env });
+const server = spawn("npx", ["next", "start", "-p", port, "-H", bindHost], {
+  stdio: ["ignore", "pipe", "inherit"],
+  env,
+});
 server.stdout.on("data", (chunk) => {
   process.stdout.write(chunk);
   if (String(chunk).includes("Ready")) {

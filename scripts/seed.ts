@@ -3,26 +3,83 @@ import { fileURLToPath } from "node:url";
 import { count } from "drizzle-orm";
 import { hashPassword } from "@/lib/auth/password";
 import { reduceTrials } from "@/lib/trials";
-import { databaseUrl, openDatabase, type Database } from "../db/connection";
-import {
-  ACADEMY_SQUAD, DEMO_ORG, DEMO_PASSWORD, DEMO_TESTS, OTHER_ORG, OTHER_SQUAD, SENIOR_SQUAD, roundTo, seededRandom,
-  type DemoTest,
-} from "./demo-data";
+import { type Database, databaseUrl, openDatabase } from "../db/connection";
 import { migrateDatabase } from "../db/migrate";
 import * as s from "../db/schema";
+import {
+  ACADEMY_SQUAD,
+  DEMO_ORG,
+  DEMO_PASSWORD,
+  DEMO_TESTS,
+  type DemoTest,
+  OTHER_ORG,
+  OTHER_SQUAD,
+  roundTo,
+  SENIOR_SQUAD,
+  seededRandom,
+} from "./demo-data";
 
 /** Athletes who sign in, by name: both run in Senior Women. */
-const ATHLETE_ACCOUNTS: Record<string, string> = { "Tessa Lindqvist": "athlete@example.com", "Priya Damaschke": "athlete2@example.com" };
+const ATHLETE_ACCOUNTS: Record<string, string> = {
+  "Tessa Lindqvist": "athlete@example.com",
+  "Priya Damaschke": "athlete2@example.com",
+};
 
-type SessionPlan = { squad: "senior" | "academy"; date: string; phase: s.Phase; status: s.SessionStatus; tests: string[]; notes?: string };
+type SessionPlan = {
+  squad: "senior" | "academy";
+  date: string;
+  phase: s.Phase;
+  status: s.SessionStatus;
+  tests: string[];
+  notes?: string;
+};
 
 const SESSIONS: SessionPlan[] = [
-  { squad: "senior", date: "2026-08-24", phase: "baseline", status: "draft", tests: ["cmj", "sprint10"], notes: "Test–retest day 1: familiarised, same warm-up, same gates." },
-  { squad: "senior", date: "2026-08-27", phase: "retest", status: "draft", tests: ["cmj", "sprint10"], notes: "Test–retest day 2: no training between the two days." },
-  { squad: "senior", date: "2026-09-07", phase: "pre-block", status: "published", tests: ["cmj", "sprint10", "sprint30", "ir1", "squat"] },
-  { squad: "senior", date: "2026-11-02", phase: "post-block", status: "draft", tests: ["cmj", "sprint10", "sprint30", "ir1", "squat"], notes: "End of the 8-week power block." },
-  { squad: "academy", date: "2026-09-14", phase: "pre-block", status: "published", tests: ["cmj", "sprint10", "sprint30", "ir1", "squat"] },
-  { squad: "academy", date: "2026-11-09", phase: "post-block", status: "draft", tests: ["cmj", "sprint10", "sprint30", "ir1", "squat"] },
+  {
+    squad: "senior",
+    date: "2026-08-24",
+    phase: "baseline",
+    status: "draft",
+    tests: ["cmj", "sprint10"],
+    notes: "Test–retest day 1: familiarised, same warm-up, same gates.",
+  },
+  {
+    squad: "senior",
+    date: "2026-08-27",
+    phase: "retest",
+    status: "draft",
+    tests: ["cmj", "sprint10"],
+    notes: "Test–retest day 2: no training between the two days.",
+  },
+  {
+    squad: "senior",
+    date: "2026-09-07",
+    phase: "pre-block",
+    status: "published",
+    tests: ["cmj", "sprint10", "sprint30", "ir1", "squat"],
+  },
+  {
+    squad: "senior",
+    date: "2026-11-02",
+    phase: "post-block",
+    status: "draft",
+    tests: ["cmj", "sprint10", "sprint30", "ir1", "squat"],
+    notes: "End of the 8-week power block.",
+  },
+  {
+    squad: "academy",
+    date: "2026-09-14",
+    phase: "pre-block",
+    status: "published",
+    tests: ["cmj", "sprint10", "sprint30", "ir1", "squat"],
+  },
+  {
+    squad: "academy",
+    date: "2026-11-09",
+    phase: "post-block",
+    status: "draft",
+    tests: ["cmj", "sprint10", "sprint30", "ir1", "squat"],
+  },
 ];
 
 async function insertChunks<T>(items: T[], size: number, write: (chunk: T[]) => Promise<unknown>) {
@@ -80,7 +137,15 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
     { squadId: senior.id, userId: userId("coach2@example.com") },
   ]);
 
-  async function addAthletes(squadId: number, organizationId: number, names: string[], positions: string[], prefix: string, sex: "female" | "male", birthYear: number) {
+  async function addAthletes(
+    squadId: number,
+    organizationId: number,
+    names: string[],
+    positions: string[],
+    prefix: string,
+    sex: "female" | "male",
+    birthYear: number,
+  ) {
     const rows = await db
       .insert(s.athletes)
       .values(
@@ -98,8 +163,24 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
     await db.insert(s.squadAthletes).values(rows.map((r) => ({ squadId, athleteId: r.id })));
     return rows.map((r) => r.id);
   }
-  const seniorIds = await addAthletes(senior.id, club.id, SENIOR_SQUAD.athletes, SENIOR_SQUAD.positions, "NHW", "female", 1994);
-  const academyIds = await addAthletes(academy.id, club.id, ACADEMY_SQUAD.athletes, ACADEMY_SQUAD.positions, "NHA", "male", 2008);
+  const seniorIds = await addAthletes(
+    senior.id,
+    club.id,
+    SENIOR_SQUAD.athletes,
+    SENIOR_SQUAD.positions,
+    "NHW",
+    "female",
+    1994,
+  );
+  const academyIds = await addAthletes(
+    academy.id,
+    club.id,
+    ACADEMY_SQUAD.athletes,
+    ACADEMY_SQUAD.positions,
+    "NHA",
+    "male",
+    2008,
+  );
 
   const testRows = await db
     .insert(s.tests)
@@ -154,7 +235,9 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
         publishedAt: plan.status === "published" ? new Date(`${plan.date}T18:00:00Z`) : null,
       })
       .returning({ id: s.testingSessions.id });
-    await db.insert(s.sessionTests).values(plan.tests.map((key, position) => ({ sessionId: session.id, testId: testByKey.get(key)!.id, position })));
+    await db
+      .insert(s.sessionTests)
+      .values(plan.tests.map((key, position) => ({ sessionId: session.id, testId: testByKey.get(key)!.id, position })));
 
     const afterBlock = plan.phase === "post-block";
     const rows: (typeof s.results.$inferInsert)[] = [];
@@ -166,26 +249,64 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
         const t = testByKey.get(key)!;
         const a = ability.get(`${athleteId}:${key}`)!;
         if (plan.phase === "pre-block" && index === 9 && key === "squat") {
-          rows.push({ organizationId: club.id, sessionId: session.id, athleteId, testId: t.id, trials: [], value: null, flag: "injured", note: "Sore lower back; skipped the lift.", updatedBy: scientist });
+          rows.push({
+            organizationId: club.id,
+            sessionId: session.id,
+            athleteId,
+            testId: t.id,
+            trials: [],
+            value: null,
+            flag: "injured",
+            note: "Sore lower back; skipped the lift.",
+            updatedBy: scientist,
+          });
           continue;
         }
         const trials = trialsFor(t, a.base + (afterBlock ? a.response : 0));
-        rows.push({ organizationId: club.id, sessionId: session.id, athleteId, testId: t.id, trials, value: reduceTrials(trials, t.trialRule, t.direction), updatedBy: scientist });
+        rows.push({
+          organizationId: club.id,
+          sessionId: session.id,
+          athleteId,
+          testId: t.id,
+          trials,
+          value: reduceTrials(trials, t.trialRule, t.direction),
+          updatedBy: scientist,
+        });
       }
     });
     await insertChunks(rows, 200, (chunk) => db.insert(s.results).values(chunk));
   }
 
   // The second organisation: its own squad, athletes, test and session, never visible to the club.
-  const [rowing] = await db.insert(s.squads).values({ organizationId: other.id, name: OTHER_SQUAD.name, sport: OTHER_SQUAD.sport }).returning({ id: s.squads.id });
+  const [rowing] = await db
+    .insert(s.squads)
+    .values({ organizationId: other.id, name: OTHER_SQUAD.name, sport: OTHER_SQUAD.sport })
+    .returning({ id: s.squads.id });
   const rowers = await addAthletes(rowing.id, other.id, OTHER_SQUAD.athletes, [], "KBR", "female", 2007);
   const [erg] = await db
     .insert(s.tests)
-    .values({ organizationId: other.id, name: "2000 m ergometer", unit: "s", decimals: 1, direction: "lower", trialRule: "best", trialsPerSession: 1, plausibleMin: 360, plausibleMax: 600 })
+    .values({
+      organizationId: other.id,
+      name: "2000 m ergometer",
+      unit: "s",
+      decimals: 1,
+      direction: "lower",
+      trialRule: "best",
+      trialsPerSession: 1,
+      plausibleMin: 360,
+      plausibleMax: 600,
+    })
     .returning({ id: s.tests.id });
   const [ergSession] = await db
     .insert(s.testingSessions)
-    .values({ organizationId: other.id, squadId: rowing.id, date: "2026-10-05", phase: "baseline", status: "published", createdBy: userId("owner@other.example.com") })
+    .values({
+      organizationId: other.id,
+      squadId: rowing.id,
+      date: "2026-10-05",
+      phase: "baseline",
+      status: "published",
+      createdBy: userId("owner@other.example.com"),
+    })
     .returning({ id: s.testingSessions.id });
   await db.insert(s.sessionTests).values({ sessionId: ergSession.id, testId: erg.id, position: 0 });
   await db.insert(s.results).values(

@@ -1,10 +1,13 @@
 import { chromium } from "playwright-core";
 import { startProductionServer } from "/work/main/tests/helpers/server";
+
 const server = await startProductionServer();
-const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ["--no-sandbox","--disable-gpu"] });
+const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ["--no-sandbox", "--disable-gpu"] });
 const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
 const errors: string[] = [];
-page.on("console", (m) => { if (m.type() === "error") errors.push(m.text()); });
+page.on("console", (m) => {
+  if (m.type() === "error") errors.push(m.text());
+});
 page.on("pageerror", (e) => errors.push(String(e)));
 await page.goto(`${server.baseUrl}/sign-in`);
 await page.getByLabel("E-mail").fill("scientist@example.com");
@@ -24,4 +27,5 @@ await page.setViewportSize({ width: 820, height: 1100 });
 await page.waitForTimeout(500);
 await page.screenshot({ path: "/tmp/report-820.png", fullPage: true });
 console.log("errors:", errors);
-await browser.close(); await server.stop();
+await browser.close();
+await server.stop();

@@ -1,12 +1,12 @@
-import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { AthleteHome } from "@/components/athlete-home";
 import { SquadsOverview } from "@/components/squads-overview";
 import { pageGuard } from "@/lib/auth/page-guard";
 import { isAthlete } from "@/lib/auth/permissions";
+import { athleteQueries, squadQueries } from "@/lib/client/queries";
 import { listAthleteResults } from "@/lib/data/athlete-results";
 import { listSquads } from "@/lib/data/squads";
-import { athleteQueries, squadQueries } from "@/lib/client/queries";
 import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
 
 export const metadata: Metadata = { title: "Home" };
@@ -16,7 +16,8 @@ export default async function HomePage() {
   const client = serverQueryClient();
   if (isAthlete(actor)) {
     const { athleteId } = actor;
-    if (athleteId) await prefetch(client, athleteQueries.results(athleteId), () => listAthleteResults(actor, athleteId));
+    if (athleteId)
+      await prefetch(client, athleteQueries.results(athleteId), () => listAthleteResults(actor, athleteId));
     return (
       <HydrationBoundary state={dehydrate(client)}>
         <AthleteHome athleteId={athleteId} name={actor.name} />

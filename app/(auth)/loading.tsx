@@ -1,3 +1,7 @@
 export default function Loading() {
-  return <p className="text-center text-sm text-ink-soft" role="status">Loading…</p>;
+  return (
+    <p className="text-center text-sm text-ink-soft" role="status">
+      Loading…
+    </p>
+  );
 }

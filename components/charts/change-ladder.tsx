@@ -67,7 +67,10 @@ export default function ChangeLadder({ report }: Props) {
     },
     scales: {
       x: {
-        title: { display: true, text: `Change in ${test.unit} — ${test.direction === "higher" ? "higher" : "lower (faster)"} is to the right` },
+        title: {
+          display: true,
+          text: `Change in ${test.unit} — ${test.direction === "higher" ? "higher" : "lower (faster)"} is to the right`,
+        },
         grid: { color: COLOURS.grid },
       },
       y: { grid: { display: false }, ticks: { autoSkip: false } },

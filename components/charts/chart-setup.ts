@@ -19,7 +19,18 @@ import {
 } from "chart.js";
 import type { Verdict } from "@/lib/stats";
 
-Chart.register(BarController, BarElement, CategoryScale, LinearScale, LineController, LineElement, PointElement, ScatterController, Tooltip, Legend);
+Chart.register(
+  BarController,
+  BarElement,
+  CategoryScale,
+  LinearScale,
+  LineController,
+  LineElement,
+  PointElement,
+  ScatterController,
+  Tooltip,
+  Legend,
+);
 Chart.defaults.font.family = "Barlow, system-ui, sans-serif";
 Chart.defaults.font.size = 13;
 Chart.defaults.color = "#3B4866";
@@ -37,7 +48,11 @@ export const COLOURS = {
 };
 
 /** Colour and point shape of a verdict: the shape carries it too, so colour is never alone. */
-export function verdictMark(verdict: Verdict | null): { colour: string; shape: "triangle" | "rectRot" | "circle" | "crossRot"; rotation: number } {
+export function verdictMark(verdict: Verdict | null): {
+  colour: string;
+  shape: "triangle" | "rectRot" | "circle" | "crossRot";
+  rotation: number;
+} {
   switch (verdict) {
     case "clear-gain":
     case "gain":

@@ -24,7 +24,14 @@ export default function PrePostLines({ report }: { report: ChangeReportData }) {
           pointRadius: 3,
         };
       }),
-      { label: "Squad mean", data: [squad.meanPre, squad.meanPost], borderColor: COLOURS.ink, backgroundColor: COLOURS.ink, borderWidth: 4, pointRadius: 5 },
+      {
+        label: "Squad mean",
+        data: [squad.meanPre, squad.meanPost],
+        borderColor: COLOURS.ink,
+        backgroundColor: COLOURS.ink,
+        borderWidth: 4,
+        pointRadius: 5,
+      },
     ],
   };
   const options: ChartOptions<"line"> = {
@@ -32,10 +39,20 @@ export default function PrePostLines({ report }: { report: ChangeReportData }) {
     maintainAspectRatio: false,
     plugins: {
       legend: { display: false },
-      tooltip: { callbacks: { label: (item) => `${item.dataset.label}: ${Number(item.raw).toFixed(test.decimals)} ${test.unit}` } },
+      tooltip: {
+        callbacks: {
+          label: (item) => `${item.dataset.label}: ${Number(item.raw).toFixed(test.decimals)} ${test.unit}`,
+        },
+      },
     },
     scales: {
-      y: { title: { display: true, text: `${test.name} (${test.unit}) — ${test.direction === "higher" ? "higher" : "lower"} is better` }, grid: { color: COLOURS.grid } },
+      y: {
+        title: {
+          display: true,
+          text: `${test.name} (${test.unit}) — ${test.direction === "higher" ? "higher" : "lower"} is better`,
+        },
+        grid: { color: COLOURS.grid },
+      },
       x: { grid: { display: false }, offset: true },
     },
   };

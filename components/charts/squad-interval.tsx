@@ -16,7 +16,15 @@ export default function SquadInterval({ report }: { report: ChangeReportData }) 
   const data: ChartData<"bar" | "line", (number | [number, number])[], string> = {
     labels: ["Squad"],
     datasets: [
-      { type: "bar", label: "Interval", data: [bar], backgroundColor: `${mark.colour}55`, borderColor: mark.colour, borderWidth: 1.5, barPercentage: 0.45 },
+      {
+        type: "bar",
+        label: "Interval",
+        data: [bar],
+        backgroundColor: `${mark.colour}55`,
+        borderColor: mark.colour,
+        borderWidth: 1.5,
+        barPercentage: 0.45,
+      },
       {
         type: "line",
         label: "Mean change",
@@ -46,7 +54,12 @@ export default function SquadInterval({ report }: { report: ChangeReportData }) 
       },
     },
     scales: {
-      x: { min: -reach, max: reach, title: { display: true, text: `Change in ${test.unit}, better to the right` }, grid: { color: COLOURS.grid } },
+      x: {
+        min: -reach,
+        max: reach,
+        title: { display: true, text: `Change in ${test.unit}, better to the right` },
+        grid: { color: COLOURS.grid },
+      },
       y: { grid: { display: false } },
     },
   };

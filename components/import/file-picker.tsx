@@ -1,11 +1,19 @@
 "use client";
 
 import { useId, useState } from "react";
-import { MAX_IMPORT_BYTES, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
 import { formatBytes } from "@/lib/client/upload";
+import { MAX_IMPORT_BYTES, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
 
 /** Choose or drop one CSV file; files over the limit are refused here, before any upload. */
-export function FilePicker({ onFile, disabled, current }: { onFile: (file: File) => void; disabled?: boolean; current: File | null }) {
+export function FilePicker({
+  onFile,
+  disabled,
+  current,
+}: {
+  onFile: (file: File) => void;
+  disabled?: boolean;
+  current: File | null;
+}) {
   const id = useId();
   const [problem, setProblem] = useState<string | null>(null);
   const [over, setOver] = useState(false);
@@ -52,7 +60,8 @@ export function FilePicker({ onFile, disabled, current }: { onFile: (file: File)
         <p className="text-sm text-ink-soft">
           {current ? (
             <>
-              <span className="font-semibold text-ink">{current.name}</span> · <span className="num">{formatBytes(current.size)}</span>
+              <span className="font-semibold text-ink">{current.name}</span> ·{" "}
+              <span className="num">{formatBytes(current.size)}</span>
             </>
           ) : (
             <>or drop it here. UTF-8 CSV, separated by , ; or tab, up to 10 MB.</>

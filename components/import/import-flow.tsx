@@ -4,20 +4,21 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { ApiClientError } from "@/lib/client/fetch-json";
 import { queryKeys } from "@/lib/client/queries";
-import type { ImportCommitted, ImportPreview, ReplacementRow } from "@/lib/import/summary";
+import { type UploadProgress, uploadImport } from "@/lib/client/upload";
 import type { RowError } from "@/lib/errors";
+import { draftFromPreview, fieldsOf, type MappingDraft } from "@/lib/import/mapping-draft";
+import type { ImportCommitted, ImportPreview, ReplacementRow } from "@/lib/import/summary";
 import { FilePicker } from "./file-picker";
 import { ImportDone, PreviewFacts } from "./import-summary";
-import { draftFromPreview, fieldsOf, type MappingDraft } from "@/lib/import/mapping-draft";
 import { MappingStep } from "./mapping-step";
 import { ParsedValues, PreviewTable } from "./preview-table";
 import { ProblemList, ReplacementList, WarningList } from "./problem-list";
 import { ProgressBar } from "./progress-bar";
-import { uploadImport, type UploadProgress } from "@/lib/client/upload";
 
 type ErrorBody = { error?: { rows?: RowError[]; details?: { replacements?: ReplacementRow[]; errorCount?: number } } };
 
-const bodyOf = (error: unknown): ErrorBody | null => (error instanceof ApiClientError ? (error.body as ErrorBody | null) : null);
+const bodyOf = (error: unknown): ErrorBody | null =>
+  error instanceof ApiClientError ? (error.body as ErrorBody | null) : null;
 
 /** The Import screen: choose a file → preview and mapping → import, all or nothing. */
 export function ImportFlow({ sessionId }: { sessionId: number }) {
@@ -73,8 +74,12 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
   const data = preview.data;
   const busy = preview.isPending || commit.isPending;
   const commitBody = bodyOf(commit.error);
-  const conflictRows = commit.error instanceof ApiClientError && commit.error.status === 409 ? commitBody?.error?.details?.replacements ?? [] : [];
-  const commitProblems = commit.error instanceof ApiClientError && commit.error.status === 422 ? commitBody?.error?.rows ?? [] : [];
+  const conflictRows =
+    commit.error instanceof ApiClientError && commit.error.status === 409
+      ? (commitBody?.error?.details?.replacements ?? [])
+      : [];
+  const commitProblems =
+    commit.error instanceof ApiClientError && commit.error.status === 422 ? (commitBody?.error?.rows ?? []) : [];
   const replacements = data ? Math.max(data.counts.trialsReplaced, conflictRows.length) : 0;
   const toWrite = data ? data.counts.resultsCreated + data.counts.resultsUpdated : 0;
   const canCommit = !!data && data.canCommit && !dirty && !busy && toWrite > 0 && (replacements === 0 || replace);
@@ -104,17 +109,42 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
           />
           {dirty && (
             <div className="flex flex-wrap items-center gap-3">
-              <button type="button" className="btn-primary" disabled={busy || !file} onClick={() => file && preview.mutate({ file, fields: fieldsOf(draft) })}>
+              <button
+                type="button"
+                className="btn-primary"
+                disabled={busy || !file}
+                onClick={() => file && preview.mutate({ file, fields: fieldsOf(draft) })}
+              >
                 Check the file with this mapping
               </button>
-              <button type="button" className="btn-quiet" disabled={busy} onClick={() => { setDraft(draftFromPreview(data)); setDirty(false); }}>
+              <button
+                type="button"
+                className="btn-quiet"
+                disabled={busy}
+                onClick={() => {
+                  setDraft(draftFromPreview(data));
+                  setDirty(false);
+                }}
+              >
                 Undo mapping changes
               </button>
             </div>
           )}
-          <ProblemList errors={data.errors} errorCount={data.errorCount} unknownAthletes={data.unknownAthletes} unknownAthleteCount={data.unknownAthleteCount} unknownTests={data.unknownTests} />
+          <ProblemList
+            errors={data.errors}
+            errorCount={data.errorCount}
+            unknownAthletes={data.unknownAthletes}
+            unknownAthleteCount={data.unknownAthleteCount}
+            unknownTests={data.unknownTests}
+          />
           {commitProblems.length > 0 && (
-            <ProblemList title="The import was refused" errors={commitProblems} errorCount={commitBody?.error?.details?.errorCount ?? commitProblems.length} unknownAthletes={[]} unknownTests={[]} />
+            <ProblemList
+              title="The import was refused"
+              errors={commitProblems}
+              errorCount={commitBody?.error?.details?.errorCount ?? commitProblems.length}
+              unknownAthletes={[]}
+              unknownTests={[]}
+            />
           )}
           <ReplacementList rows={conflictRows.length ? conflictRows : data.replacements} count={replacements} />
           <WarningList warnings={data.warnings} count={data.warningCount} />
@@ -124,7 +154,12 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
           <section aria-label="Import" className="card flex flex-wrap items-center gap-4 p-4">
             {replacements > 0 && (
               <label className="flex items-center gap-2 text-sm">
-                <input type="checkbox" className="h-4 w-4 accent-ink" checked={replace} onChange={(e) => setReplace(e.target.checked)} />
+                <input
+                  type="checkbox"
+                  className="h-4 w-4 accent-ink"
+                  checked={replace}
+                  onChange={(e) => setReplace(e.target.checked)}
+                />
                 Replace the {replacements} stored {replacements === 1 ? "value" : "values"} listed above
               </label>
             )}
@@ -132,7 +167,9 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
               type="button"
               className="btn-primary"
               disabled={!canCommit}
-              onClick={() => file && commit.mutate({ file, fields: { ...sentFields, ...(replace ? { replace: "yes" } : {}) } })}
+              onClick={() =>
+                file && commit.mutate({ file, fields: { ...sentFields, ...(replace ? { replace: "yes" } : {}) } })
+              }
             >
               Import {toWrite} {toWrite === 1 ? "result" : "results"}
             </button>
@@ -148,7 +185,9 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
                       : "All or nothing: if anything fails, nothing is written."}
             </p>
             {commit.error && conflictRows.length === 0 && commitProblems.length === 0 && (
-              <p role="alert" className="w-full rounded-md border border-decline bg-decline-soft px-3 py-2 text-sm">{commit.error.message}</p>
+              <p role="alert" className="w-full rounded-md border border-decline bg-decline-soft px-3 py-2 text-sm">
+                {commit.error.message}
+              </p>
             )}
           </section>
         </>

@@ -11,8 +11,14 @@ export function PreviewFacts({ preview }: { preview: ImportPreview }) {
   return (
     <dl className="card grid gap-x-6 gap-y-2 p-4 text-sm sm:grid-cols-3 lg:grid-cols-6">
       <Fact term="File" value={preview.file.name} />
-      <Fact term="Layout" value={`${preview.format === "long" ? "Long" : "Wide"}${preview.format !== preview.detectedFormat ? " (chosen)" : " (detected)"}`} />
-      <Fact term="Delimiter" value={`${DELIMITERS[preview.delimiter] ?? preview.delimiter}${preview.decimalComma ? " · decimal comma" : ""}`} />
+      <Fact
+        term="Layout"
+        value={`${preview.format === "long" ? "Long" : "Wide"}${preview.format !== preview.detectedFormat ? " (chosen)" : " (detected)"}`}
+      />
+      <Fact
+        term="Delimiter"
+        value={`${DELIMITERS[preview.delimiter] ?? preview.delimiter}${preview.decimalComma ? " · decimal comma" : ""}`}
+      />
       <Fact term="Rows" value={String(preview.rowCount)} num />
       <Fact term="Scores in the file" value={String(c.values)} num />
       <Fact
@@ -33,7 +39,15 @@ function Fact({ term, value, num }: { term: string; value: string; num?: boolean
   );
 }
 
-export function ImportDone({ result, sessionId, onAnother }: { result: ImportCommitted; sessionId: number; onAnother: () => void }) {
+export function ImportDone({
+  result,
+  sessionId,
+  onAnother,
+}: {
+  result: ImportCommitted;
+  sessionId: number;
+  onAnother: () => void;
+}) {
   const c = result.counts;
   const written = c.resultsCreated + c.resultsUpdated;
   return (
@@ -42,16 +56,32 @@ export function ImportDone({ result, sessionId, onAnother }: { result: ImportCom
         Imported {written} {written === 1 ? "result" : "results"}
       </h2>
       <p className="mt-1 text-ink-soft">
-        From <span className="font-semibold text-ink">{result.filename}</span>: <span className="num">{c.values}</span> scores in{" "}
-        <span className="num">{result.rowsImported}</span> {result.rowsImported === 1 ? "row" : "rows"} · <span className="num">{c.resultsCreated}</span> new results,{" "}
-        <span className="num">{c.resultsUpdated}</span> updated
-        {c.trialsReplaced ? <>, <span className="num">{c.trialsReplaced}</span> stored values replaced</> : null}
-        {c.resultsUnchanged ? <>, <span className="num">{c.resultsUnchanged}</span> already stored as they are</> : null}.
+        From <span className="font-semibold text-ink">{result.filename}</span>: <span className="num">{c.values}</span>{" "}
+        scores in <span className="num">{result.rowsImported}</span> {result.rowsImported === 1 ? "row" : "rows"} ·{" "}
+        <span className="num">{c.resultsCreated}</span> new results, <span className="num">{c.resultsUpdated}</span>{" "}
+        updated
+        {c.trialsReplaced ? (
+          <>
+            , <span className="num">{c.trialsReplaced}</span> stored values replaced
+          </>
+        ) : null}
+        {c.resultsUnchanged ? (
+          <>
+            , <span className="num">{c.resultsUnchanged}</span> already stored as they are
+          </>
+        ) : null}
+        .
       </p>
-      <p className="mt-1 text-sm text-ink-soft">The file itself is kept with the session (upload {result.uploadId}), so every value can be traced back to it.</p>
+      <p className="mt-1 text-sm text-ink-soft">
+        The file itself is kept with the session (upload {result.uploadId}), so every value can be traced back to it.
+      </p>
       <div className="mt-4 flex flex-wrap gap-2">
-        <Link href={`/sessions/${sessionId}`} className="btn-primary">Back to the Session sheet</Link>
-        <button type="button" className="btn-quiet" onClick={onAnother}>Import another file</button>
+        <Link href={`/sessions/${sessionId}`} className="btn-primary">
+          Back to the Session sheet
+        </Link>
+        <button type="button" className="btn-quiet" onClick={onAnother}>
+          Import another file
+        </button>
       </div>
     </section>
   );

@@ -1,9 +1,9 @@
 "use client";
 
 import { useId } from "react";
+import { defaultDraft, type MappingDraft, withAthleteColumn } from "@/lib/import/mapping-draft";
 import type { ImportPreview } from "@/lib/import/summary";
 import type { WideColumnStatus } from "@/lib/import/types";
-import { defaultDraft, withAthleteColumn, type MappingDraft } from "@/lib/import/mapping-draft";
 
 const STATUS_WORDS: Record<WideColumnStatus, { text: string; className: string }> = {
   athlete: { text: "athlete", className: "bg-ink text-white" },
@@ -13,23 +13,55 @@ const STATUS_WORDS: Record<WideColumnStatus, { text: string; className: string }
   "not-in-battery": { text: "not in this battery", className: "bg-decline-soft text-ink" },
 };
 
-function ColumnSelect({ label, value, headers, onChange, optional }: { label: string; value: string; headers: string[]; onChange: (v: string) => void; optional?: string }) {
+function ColumnSelect({
+  label,
+  value,
+  headers,
+  onChange,
+  optional,
+}: {
+  label: string;
+  value: string;
+  headers: string[];
+  onChange: (v: string) => void;
+  optional?: string;
+}) {
   const id = useId();
   return (
     <div>
-      <label htmlFor={id} className="label">{label}</label>
+      <label htmlFor={id} className="label">
+        {label}
+      </label>
       <select id={id} className="field" value={value} onChange={(e) => onChange(e.target.value)}>
-        {optional !== undefined ? <option value="">{optional}</option> : <option value="" disabled>Choose a column</option>}
-        {headers.filter((h) => h !== "").map((h) => (
-          <option key={h} value={h}>{h}</option>
-        ))}
+        {optional !== undefined ? (
+          <option value="">{optional}</option>
+        ) : (
+          <option value="" disabled>
+            Choose a column
+          </option>
+        )}
+        {headers
+          .filter((h) => h !== "")
+          .map((h) => (
+            <option key={h} value={h}>
+              {h}
+            </option>
+          ))}
       </select>
     </div>
   );
 }
 
 /** How the file's columns are read: long (one row per trial) or wide (one column per test-trial). */
-export function MappingStep({ preview, draft, onChange }: { preview: ImportPreview; draft: MappingDraft; onChange: (draft: MappingDraft) => void }) {
+export function MappingStep({
+  preview,
+  draft,
+  onChange,
+}: {
+  preview: ImportPreview;
+  draft: MappingDraft;
+  onChange: (draft: MappingDraft) => void;
+}) {
   const formatId = useId();
   const testsById = new Map(preview.tests.map((t) => [t.id, t]));
   const suggestion = new Map(preview.suggestions.map((s) => [s.header, s.status]));
@@ -38,11 +70,15 @@ export function MappingStep({ preview, draft, onChange }: { preview: ImportPrevi
     <section aria-labelledby={`${formatId}-h`} className="card space-y-4 p-4">
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
-          <h2 id={`${formatId}-h`} className="text-lg font-bold">Mapping</h2>
+          <h2 id={`${formatId}-h`} className="text-lg font-bold">
+            Mapping
+          </h2>
           <p className="text-sm text-ink-soft">How the columns are read. Change a choice, then check the file again.</p>
         </div>
         <div className="w-72">
-          <label htmlFor={formatId} className="label">Layout of the file</label>
+          <label htmlFor={formatId} className="label">
+            Layout of the file
+          </label>
           <select
             id={formatId}
             className="field"
@@ -57,10 +93,31 @@ export function MappingStep({ preview, draft, onChange }: { preview: ImportPrevi
 
       {draft.format === "long" ? (
         <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
-          <ColumnSelect label="Athlete (name or external id)" value={draft.athlete} headers={preview.headers} onChange={(v) => onChange({ ...draft, athlete: v })} />
-          <ColumnSelect label="Test (name)" value={draft.test} headers={preview.headers} onChange={(v) => onChange({ ...draft, test: v })} />
-          <ColumnSelect label="Trial (1, 2, 3…)" value={draft.trial} headers={preview.headers} optional="No trial column: all trial 1" onChange={(v) => onChange({ ...draft, trial: v })} />
-          <ColumnSelect label="Score" value={draft.value} headers={preview.headers} onChange={(v) => onChange({ ...draft, value: v })} />
+          <ColumnSelect
+            label="Athlete (name or external id)"
+            value={draft.athlete}
+            headers={preview.headers}
+            onChange={(v) => onChange({ ...draft, athlete: v })}
+          />
+          <ColumnSelect
+            label="Test (name)"
+            value={draft.test}
+            headers={preview.headers}
+            onChange={(v) => onChange({ ...draft, test: v })}
+          />
+          <ColumnSelect
+            label="Trial (1, 2, 3…)"
+            value={draft.trial}
+            headers={preview.headers}
+            optional="No trial column: all trial 1"
+            onChange={(v) => onChange({ ...draft, trial: v })}
+          />
+          <ColumnSelect
+            label="Score"
+            value={draft.value}
+            headers={preview.headers}
+            onChange={(v) => onChange({ ...draft, value: v })}
+          />
         </div>
       ) : (
         <>
@@ -77,10 +134,18 @@ export function MappingStep({ preview, draft, onChange }: { preview: ImportPrevi
               <caption className="sr-only">What each column of the file holds</caption>
               <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">
                 <tr>
-                  <th scope="col" className="px-2 py-2 font-semibold">Column in the file</th>
-                  <th scope="col" className="px-2 py-2 font-semibold">Read as</th>
-                  <th scope="col" className="px-2 py-2 font-semibold">Test</th>
-                  <th scope="col" className="px-2 py-2 font-semibold">Trial</th>
+                  <th scope="col" className="px-2 py-2 font-semibold">
+                    Column in the file
+                  </th>
+                  <th scope="col" className="px-2 py-2 font-semibold">
+                    Read as
+                  </th>
+                  <th scope="col" className="px-2 py-2 font-semibold">
+                    Test
+                  </th>
+                  <th scope="col" className="px-2 py-2 font-semibold">
+                    Trial
+                  </th>
                 </tr>
               </thead>
               <tbody>
@@ -88,23 +153,32 @@ export function MappingStep({ preview, draft, onChange }: { preview: ImportPrevi
                   const status = suggestion.get(header) ?? "unknown";
                   const words = STATUS_WORDS[status];
                   const test = target ? testsById.get(target.testId) : undefined;
-                  const set = (next: typeof target) => onChange({ ...draft, columns: { ...draft.columns, [header]: next } });
+                  const set = (next: typeof target) =>
+                    onChange({ ...draft, columns: { ...draft.columns, [header]: next } });
                   return (
                     <tr key={header} className="border-b border-line last:border-0">
-                      <th scope="row" className="px-2 py-1.5 font-semibold">{header}</th>
+                      <th scope="row" className="px-2 py-1.5 font-semibold">
+                        {header}
+                      </th>
                       <td className="px-2 py-1.5">
-                        <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${words.className}`}>{words.text}</span>
+                        <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${words.className}`}>
+                          {words.text}
+                        </span>
                       </td>
                       <td className="px-2 py-1.5">
                         <select
                           aria-label={`Test for column ${header}`}
                           className="field py-1"
                           value={target ? String(target.testId) : ""}
-                          onChange={(e) => set(e.target.value ? { testId: Number(e.target.value), trial: target?.trial ?? 1 } : null)}
+                          onChange={(e) =>
+                            set(e.target.value ? { testId: Number(e.target.value), trial: target?.trial ?? 1 } : null)
+                          }
                         >
                           <option value="">Ignore this column</option>
                           {preview.tests.map((t) => (
-                            <option key={t.id} value={t.id}>{t.name} ({t.unit})</option>
+                            <option key={t.id} value={t.id}>
+                              {t.name} ({t.unit})
+                            </option>
                           ))}
                         </select>
                       </td>
@@ -117,7 +191,9 @@ export function MappingStep({ preview, draft, onChange }: { preview: ImportPrevi
                             onChange={(e) => set({ testId: target.testId, trial: Number(e.target.value) })}
                           >
                             {Array.from({ length: Math.max(test.trialsPerSession, target.trial) }, (_, i) => (
-                              <option key={i + 1} value={i + 1}>{i + 1}</option>
+                              <option key={i + 1} value={i + 1}>
+                                {i + 1}
+                              </option>
                             ))}
                           </select>
                         ) : (

@@ -1,6 +1,6 @@
 "use client";
 
-import { TableCard, type Column } from "@/components/table-card";
+import { type Column, TableCard } from "@/components/table-card";
 import type { ImportPreview } from "@/lib/import/summary";
 
 const PARSED_COLUMNS: Column[] = [
@@ -20,16 +20,22 @@ export function PreviewTable({ preview }: { preview: ImportPreview }) {
     else rowProblems.set(e.row, e.message);
   }
   const warnings = new Map(preview.warnings.map((w) => [`${w.row}|${w.column}`, w.message]));
-  const headerProblems = new Set(preview.errors.filter((e) => e.row === preview.headerRow && e.column).map((e) => e.column));
+  const headerProblems = new Set(
+    preview.errors.filter((e) => e.row === preview.headerRow && e.column).map((e) => e.column),
+  );
   // A long file's value errors sit on the value column, a wide file's on its own column.
   const cellKey = (row: number, header: string) => `${row}|${header}`;
   const columns: Column[] = [
     { label: "Row", align: "right" },
-    ...preview.headers.map((h): Column => ({
-      label: h || <span className="italic">(no header)</span>,
-      className: headerProblems.has(h) ? "bg-decline-soft text-ink" : "",
-      title: headerProblems.has(h) ? preview.errors.find((e) => e.column === h && e.row === preview.headerRow)?.message : undefined,
-    })),
+    ...preview.headers.map(
+      (h): Column => ({
+        label: h || <span className="italic">(no header)</span>,
+        className: headerProblems.has(h) ? "bg-decline-soft text-ink" : "",
+        title: headerProblems.has(h)
+          ? preview.errors.find((e) => e.column === h && e.row === preview.headerRow)?.message
+          : undefined,
+      }),
+    ),
   ];
 
   return (
@@ -38,14 +44,19 @@ export function PreviewTable({ preview }: { preview: ImportPreview }) {
       headCellClass="px-3 py-2 font-semibold"
       caption={
         <>
-          The first {preview.sample.length} of <span className="num">{preview.rowCount}</span> rows as written in the file. Marked cells have a problem, listed below.
+          The first {preview.sample.length} of <span className="num">{preview.rowCount}</span> rows as written in the
+          file. Marked cells have a problem, listed below.
         </>
       }
       columns={columns}
     >
       {preview.sample.map(({ row, cells }) => (
         <tr key={row} className="border-b border-line last:border-0">
-          <th scope="row" className={`num px-3 py-1.5 text-right font-normal text-ink-faint ${rowProblems.has(row) ? "bg-decline-soft text-ink" : ""}`} title={rowProblems.get(row)}>
+          <th
+            scope="row"
+            className={`num px-3 py-1.5 text-right font-normal text-ink-faint ${rowProblems.has(row) ? "bg-decline-soft text-ink" : ""}`}
+            title={rowProblems.get(row)}
+          >
             {row}
           </th>
           {preview.headers.map((h, i) => {

@@ -1,9 +1,9 @@
 "use client";
 
 import { useState } from "react";
+import type { RowError } from "@/lib/errors";
 import type { ReplacementRow } from "@/lib/import/summary";
 import type { UnknownAthlete, UnknownTest } from "@/lib/import/types";
-import type { RowError } from "@/lib/errors";
 
 const rowsText = (rows: number[], count: number) =>
   `${rows.length === 1 ? "row" : "rows"} ${rows.join(", ")}${count > rows.length ? ` and ${count - rows.length} more` : ""}`;
@@ -32,7 +32,9 @@ export function ProblemList({
       <h2 id="problems-h" className="text-lg font-bold">
         {title ?? `${errorCount} ${errorCount === 1 ? "problem" : "problems"} to fix before importing`}
       </h2>
-      <p className="text-sm text-ink-soft">Nothing is imported while any remain. Row numbers are as a spreadsheet shows them (the header is row 1).</p>
+      <p className="text-sm text-ink-soft">
+        Nothing is imported while any remain. Row numbers are as a spreadsheet shows them (the header is row 1).
+      </p>
 
       {unknownAthletes.length > 0 && (
         <div className="mt-3">
@@ -61,8 +63,10 @@ export function ProblemList({
               <li key={`${t.name}|${t.column ?? ""}`} className="rounded border border-line bg-paper px-2 py-0.5">
                 <span className="font-semibold">{t.name}</span>{" "}
                 <span className="text-ink-soft">
-                  {t.reason === "not-in-battery" ? "in the Test library, not in this battery" : "not in the Test library"} ·{" "}
-                  {t.column ? "column header" : rowsText(t.rows, t.count)}
+                  {t.reason === "not-in-battery"
+                    ? "in the Test library, not in this battery"
+                    : "not in the Test library"}{" "}
+                  · {t.column ? "column header" : rowsText(t.rows, t.count)}
                 </span>
               </li>
             ))}
@@ -74,9 +78,15 @@ export function ProblemList({
         <caption className="sr-only">Problems by row and column</caption>
         <thead className="border-b border-line text-xs text-ink-faint">
           <tr>
-            <th scope="col" className="w-16 py-1.5 pr-3 text-right font-semibold">Row</th>
-            <th scope="col" className="w-48 py-1.5 pr-3 font-semibold">Column</th>
-            <th scope="col" className="py-1.5 font-semibold">Problem</th>
+            <th scope="col" className="w-16 py-1.5 pr-3 text-right font-semibold">
+              Row
+            </th>
+            <th scope="col" className="w-48 py-1.5 pr-3 font-semibold">
+              Column
+            </th>
+            <th scope="col" className="py-1.5 font-semibold">
+              Problem
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -96,7 +106,8 @@ export function ProblemList({
       )}
       {errorCount > errors.length && (
         <p className="mt-2 text-sm text-ink-soft">
-          The first {errors.length} of <span className="num">{errorCount}</span> are listed; fix these and check the file again.
+          The first {errors.length} of <span className="num">{errorCount}</span> are listed; fix these and check the
+          file again.
         </p>
       )}
     </section>
@@ -129,17 +140,31 @@ export function ReplacementList({ rows, count }: { rows: ReplacementRow[]; count
       <h2 id="replace-h" className="text-lg font-bold">
         {count} stored {count === 1 ? "value" : "values"} would be replaced
       </h2>
-      <p className="text-sm text-ink-soft">The session already holds these. They are only replaced if you tick the box below.</p>
+      <p className="text-sm text-ink-soft">
+        The session already holds these. They are only replaced if you tick the box below.
+      </p>
       <table className="mt-2 w-full text-left text-sm">
         <caption className="sr-only">Stored values this file would replace</caption>
         <thead className="border-b border-line text-xs text-ink-faint">
           <tr>
-            <th scope="col" className="w-16 py-1.5 pr-3 text-right font-semibold">Row</th>
-            <th scope="col" className="py-1.5 pr-3 font-semibold">Athlete</th>
-            <th scope="col" className="py-1.5 pr-3 font-semibold">Test</th>
-            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Trial</th>
-            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">Stored</th>
-            <th scope="col" className="py-1.5 text-right font-semibold">In the file</th>
+            <th scope="col" className="w-16 py-1.5 pr-3 text-right font-semibold">
+              Row
+            </th>
+            <th scope="col" className="py-1.5 pr-3 font-semibold">
+              Athlete
+            </th>
+            <th scope="col" className="py-1.5 pr-3 font-semibold">
+              Test
+            </th>
+            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">
+              Trial
+            </th>
+            <th scope="col" className="py-1.5 pr-3 text-right font-semibold">
+              Stored
+            </th>
+            <th scope="col" className="py-1.5 text-right font-semibold">
+              In the file
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -149,7 +174,9 @@ export function ReplacementList({ rows, count }: { rows: ReplacementRow[]; count
               <td className="py-1.5 pr-3">{r.athleteName}</td>
               <td className="py-1.5 pr-3">{r.testName}</td>
               <td className="num py-1.5 pr-3 text-right">{r.trial ?? "–"}</td>
-              <td className="num py-1.5 pr-3 text-right">{r.trial === null ? `marked ${r.previousFlag}` : r.previous}</td>
+              <td className="num py-1.5 pr-3 text-right">
+                {r.trial === null ? `marked ${r.previousFlag}` : r.previous}
+              </td>
               <td className="num py-1.5 text-right">{r.next ?? "scores"}</td>
             </tr>
           ))}

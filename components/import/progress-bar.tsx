@@ -9,7 +9,9 @@ export function ProgressBar({ progress, label }: { progress: UploadProgress | nu
   return (
     <div className="space-y-1" aria-live="polite">
       <div className="flex justify-between text-sm">
-        <span className="font-semibold">{checking ? `${label}: reading the file on the server…` : `${label}: uploading…`}</span>
+        <span className="font-semibold">
+          {checking ? `${label}: reading the file on the server…` : `${label}: uploading…`}
+        </span>
         {progress && !checking && (
           <span className="num text-ink-soft">
             {formatBytes(progress.loaded)} of {formatBytes(progress.total)} · {percent} %

@@ -6,8 +6,8 @@ import { type Column, TableCard } from "@/components/table-card";
 import type { ChangeReportData } from "@/lib/client/queries";
 import { FLAG_LABELS } from "@/lib/labels";
 import { EXCLUSION_WORDS, intervalWords, percentWords, plain, signed } from "@/lib/words/report";
-import { VERDICT_ORDER } from "./verdict-order";
 import { VerdictBadge } from "./verdict-badge";
+import { VERDICT_ORDER } from "./verdict-order";
 
 type Athlete = ChangeReportData["athletes"][number];
 type SortKey = "name" | "pre" | "post" | "betterChange" | "percentChange" | "verdict";
@@ -50,10 +50,16 @@ export function AthleteChanges({ report }: { report: ChangeReportData }) {
           <button
             type="button"
             className={`inline-flex items-center gap-1 font-semibold uppercase tracking-wide hover:text-ink ${h.right ? "flex-row-reverse" : ""}`}
-            onClick={() => setSort(active ? { key: h.key, dir: sort.dir === 1 ? -1 : 1 } : { key: h.key, dir: h.key === "name" ? 1 : -1 })}
+            onClick={() =>
+              setSort(
+                active ? { key: h.key, dir: sort.dir === 1 ? -1 : 1 } : { key: h.key, dir: h.key === "name" ? 1 : -1 },
+              )
+            }
           >
             {h.label}
-            <span aria-hidden className={active ? "text-ink" : "opacity-40"}>{active && sort.dir === 1 ? "▲" : "▼"}</span>
+            <span aria-hidden className={active ? "text-ink" : "opacity-40"}>
+              {active && sort.dir === 1 ? "▲" : "▼"}
+            </span>
           </button>
         ),
       };
@@ -64,15 +70,20 @@ export function AthleteChanges({ report }: { report: ChangeReportData }) {
   return (
     <section aria-labelledby="athletes-heading" className="space-y-3">
       <div>
-        <h2 id="athletes-heading" className="text-lg font-bold">Athletes</h2>
+        <h2 id="athletes-heading" className="text-lg font-bold">
+          Athletes
+        </h2>
         <p className="text-sm text-ink-soft">
           Scores and changes in {test.unit}; “Change” is second − first
-          {test.direction === "lower" ? ", so a faster (lower) time shows as a negative change and counts as a gain" : ""}.
+          {test.direction === "lower"
+            ? ", so a faster (lower) time shows as a negative change and counts as a gain"
+            : ""}
+          .
         </p>
         {test.typicalError === null && (
           <p className="mt-2 rounded-md border border-line bg-band px-3 py-2 text-sm">
-            {test.name} has no typical error yet, so no athlete gets an interval or a verdict: a change alone cannot be told
-            from test noise. Measure it on a test–retest pair, or enter a published value, in the{" "}
+            {test.name} has no typical error yet, so no athlete gets an interval or a verdict: a change alone cannot be
+            told from test noise. Measure it on a test–retest pair, or enter a published value, in the{" "}
             <Link href="/tests" className="font-semibold underline">
               Test library
             </Link>
@@ -92,7 +103,9 @@ export function AthleteChanges({ report }: { report: ChangeReportData }) {
             <td className="num px-3 py-2 text-right">{percentWords(a.percentChange)}</td>
             {test.typicalError !== null && (
               <td className="num whitespace-nowrap px-3 py-2 text-right">
-                {a.ciLower === null || a.ciUpper === null ? "–" : intervalWords(a.ciLower, a.ciUpper, test.decimals, test.unit)}
+                {a.ciLower === null || a.ciUpper === null
+                  ? "–"
+                  : intervalWords(a.ciLower, a.ciUpper, test.decimals, test.unit)}
               </td>
             )}
             <td className="px-3 py-2">

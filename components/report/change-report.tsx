@@ -25,7 +25,9 @@ export function ChangeReport({ initial }: { initial: ChangeReportQuery }) {
   return (
     <section aria-labelledby="report-heading" className="space-y-4">
       <div>
-        <h1 id="report-heading" className="text-2xl font-bold">Change report</h1>
+        <h1 id="report-heading" className="text-2xl font-bold">
+          Change report
+        </h1>
         <p className="text-ink-soft">
           {data ? (
             <>
@@ -38,7 +40,9 @@ export function ChangeReport({ initial }: { initial: ChangeReportQuery }) {
         </p>
       </div>
       <ReportSettings query={query} unit={data?.test.unit ?? ""} onChange={change} />
-      {report.error && <LoadFailure failure="This report cannot be drawn" error={report.error} onRetry={report.refetch} />}
+      {report.error && (
+        <LoadFailure failure="This report cannot be drawn" error={report.error} onRetry={report.refetch} />
+      )}
       {data && !report.error && (
         <>
           <SquadPanel report={data} />
@@ -47,10 +51,10 @@ export function ChangeReport({ initial }: { initial: ChangeReportQuery }) {
         </>
       )}
       <p className="text-xs text-ink-soft">
-        Results support training decisions; they are not a medical or return-to-play judgement — defer to your medical staff
-        and licensed practitioners. Maximal tests carry injury risk: screen, warm up and supervise as your organisation&apos;s
-        and governing body&apos;s protocols require. Athlete data is personal data: share reports only as your consent and
-        data-protection rules allow.
+        Results support training decisions; they are not a medical or return-to-play judgement — defer to your medical
+        staff and licensed practitioners. Maximal tests carry injury risk: screen, warm up and supervise as your
+        organisation&apos;s and governing body&apos;s protocols require. Athlete data is personal data: share reports
+        only as your consent and data-protection rules allow.
       </p>
     </section>
   );

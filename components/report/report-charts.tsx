@@ -4,10 +4,21 @@ import dynamic from "next/dynamic";
 import type { ChangeReportData } from "@/lib/client/queries";
 
 // chart.js loads only on the pages that draw a chart, after the numbers are on screen.
-const placeholder = (height: number) => () => <div style={{ height }} className="animate-pulse rounded bg-paper" aria-hidden />;
-const ChangeLadder = dynamic(() => import("@/components/charts/change-ladder"), { ssr: false, loading: placeholder(300) });
-const PrePostLines = dynamic(() => import("@/components/charts/pre-post-lines"), { ssr: false, loading: placeholder(320) });
-const SquadInterval = dynamic(() => import("@/components/charts/squad-interval"), { ssr: false, loading: placeholder(130) });
+const placeholder = (height: number) => () => (
+  <div style={{ height }} className="animate-pulse rounded bg-paper" aria-hidden />
+);
+const ChangeLadder = dynamic(() => import("@/components/charts/change-ladder"), {
+  ssr: false,
+  loading: placeholder(300),
+});
+const PrePostLines = dynamic(() => import("@/components/charts/pre-post-lines"), {
+  ssr: false,
+  loading: placeholder(320),
+});
+const SquadInterval = dynamic(() => import("@/components/charts/squad-interval"), {
+  ssr: false,
+  loading: placeholder(130),
+});
 
 /**
  * A chart is drawn anew for each report: chart.js keeps its plugins (the SWC band) and dataset
@@ -29,8 +40,9 @@ export function AthleteCharts({ report }: { report: ChangeReportData }) {
         <figcaption className="mb-2">
           <span className="font-bold">Change ladder</span>
           <span className="block text-sm text-ink-soft">
-            Each athlete&apos;s change, best at the top{withIntervals ? ", with the interval from the test's typical error" : ""}. The
-            shaded band is the smallest worthwhile change; ▶ gain, ◀ decline, ◆ steady, ✕ inconclusive.
+            Each athlete&apos;s change, best at the top
+            {withIntervals ? ", with the interval from the test's typical error" : ""}. The shaded band is the smallest
+            worthwhile change; ▶ gain, ◀ decline, ◆ steady, ✕ inconclusive.
           </span>
         </figcaption>
         <ChangeLadder key={drawingKey(report)} report={report} />
@@ -38,7 +50,9 @@ export function AthleteCharts({ report }: { report: ChangeReportData }) {
       <figure className="card p-4">
         <figcaption className="mb-2">
           <span className="font-bold">Pre–post lines</span>
-          <span className="block text-sm text-ink-soft">One line per athlete between the two sessions; the heavy line is the squad mean.</span>
+          <span className="block text-sm text-ink-soft">
+            One line per athlete between the two sessions; the heavy line is the squad mean.
+          </span>
         </figcaption>
         <PrePostLines key={drawingKey(report)} report={report} />
       </figure>

@@ -3,9 +3,9 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
 import { SWC_METHODS, type SwcMethod } from "@/lib/domain";
-import { PHASE_LABELS, formatDate } from "@/lib/labels";
+import { formatDate, PHASE_LABELS } from "@/lib/labels";
 import { defaultComparison } from "@/lib/reports/defaults";
-import { REPORT_CONFIDENCES, type ChangeReportQuery } from "@/lib/validation/reports";
+import { type ChangeReportQuery, REPORT_CONFIDENCES } from "@/lib/validation/reports";
 
 const SWC_CHOICES: Record<SwcMethod, { label: string; defaultValue: number; unitLabel: (unit: string) => string }> = {
   "sd-factor": { label: "Factor × between-athlete SD", defaultValue: 0.2, unitLabel: () => "factor" },
@@ -59,7 +59,12 @@ export function ReportSettings({
         <label htmlFor="report-squad" className="text-sm font-semibold">
           Squad
         </label>
-        <select id="report-squad" className="field mt-1" value={squadId ?? ""} onChange={(e) => chooseSquad(Number(e.target.value))}>
+        <select
+          id="report-squad"
+          className="field mt-1"
+          value={squadId ?? ""}
+          onChange={(e) => chooseSquad(Number(e.target.value))}
+        >
           {squads.map((s) => (
             <option key={s.id} value={s.id}>
               {s.name}
@@ -71,7 +76,12 @@ export function ReportSettings({
         <label htmlFor="report-first-session" className="text-sm font-semibold">
           First session
         </label>
-        <select id="report-first-session" className="field mt-1" value={query.fromSessionId} onChange={(e) => chooseSession("fromSessionId", Number(e.target.value))}>
+        <select
+          id="report-first-session"
+          className="field mt-1"
+          value={query.fromSessionId}
+          onChange={(e) => chooseSession("fromSessionId", Number(e.target.value))}
+        >
           {own.map((s) => (
             <option key={s.id} value={s.id} disabled={s.id === query.toSessionId}>
               {sessionLabel(s)}
@@ -83,7 +93,12 @@ export function ReportSettings({
         <label htmlFor="report-second-session" className="text-sm font-semibold">
           Second session
         </label>
-        <select id="report-second-session" className="field mt-1" value={query.toSessionId} onChange={(e) => chooseSession("toSessionId", Number(e.target.value))}>
+        <select
+          id="report-second-session"
+          className="field mt-1"
+          value={query.toSessionId}
+          onChange={(e) => chooseSession("toSessionId", Number(e.target.value))}
+        >
           {own.map((s) => (
             <option key={s.id} value={s.id} disabled={s.id === query.fromSessionId}>
               {sessionLabel(s)}
@@ -95,7 +110,12 @@ export function ReportSettings({
         <label htmlFor="report-test" className="text-sm font-semibold">
           Test
         </label>
-        <select id="report-test" className="field mt-1" value={query.testId} onChange={(e) => onChange({ ...query, testId: Number(e.target.value) })}>
+        <select
+          id="report-test"
+          className="field mt-1"
+          value={query.testId}
+          onChange={(e) => onChange({ ...query, testId: Number(e.target.value) })}
+        >
           {shared.length === 0 && <option value={query.testId}>No test in both sessions</option>}
           {shared.map((t) => (
             <option key={t.id} value={t.id}>
@@ -108,7 +128,12 @@ export function ReportSettings({
         <label htmlFor="report-confidence" className="text-sm font-semibold">
           Confidence
         </label>
-        <select id="report-confidence" className="field mt-1" value={query.confidence} onChange={(e) => onChange({ ...query, confidence: Number(e.target.value) })}>
+        <select
+          id="report-confidence"
+          className="field mt-1"
+          value={query.confidence}
+          onChange={(e) => onChange({ ...query, confidence: Number(e.target.value) })}
+        >
           {REPORT_CONFIDENCES.map((c) => (
             <option key={c} value={c}>
               {Math.round(c * 100)} %
@@ -120,7 +145,12 @@ export function ReportSettings({
         <label htmlFor="report-smallest-worthwhile-change" className="text-sm font-semibold">
           Smallest worthwhile change
         </label>
-        <select id="report-smallest-worthwhile-change" className="field mt-1" value={query.swcMethod ?? ""} onChange={(e) => chooseSwc(e.target.value as SwcMethod | "")}>
+        <select
+          id="report-smallest-worthwhile-change"
+          className="field mt-1"
+          value={query.swcMethod ?? ""}
+          onChange={(e) => chooseSwc(e.target.value as SwcMethod | "")}
+        >
           <option value="">The test&apos;s own method</option>
           {SWC_METHODS.map((m) => (
             <option key={m} value={m}>
@@ -134,7 +164,9 @@ export function ReportSettings({
           <label htmlFor="report-swc-value" className="text-sm font-semibold">
             SWC {SWC_CHOICES[query.swcMethod].unitLabel(unit)}
           </label>
-          <input id="report-swc-value" className="field num mt-1"
+          <input
+            id="report-swc-value"
+            className="field num mt-1"
             type="number"
             min={0}
             step="any"
@@ -143,7 +175,8 @@ export function ReportSettings({
             key={`${query.swcMethod}-${query.swcValue}`}
             onBlur={(e) => {
               const value = Number(e.target.value);
-              if (Number.isFinite(value) && value >= 0 && value !== query.swcValue) onChange({ ...query, swcValue: value });
+              if (Number.isFinite(value) && value >= 0 && value !== query.swcValue)
+                onChange({ ...query, swcValue: value });
             }}
           />
         </div>

@@ -15,7 +15,9 @@ export function VerdictBadge({ verdict, large = false }: { verdict: Verdict | nu
   if (verdict === null) return <span className="text-ink-faint">–</span>;
   const look = LOOK[verdict];
   return (
-    <span className={`inline-flex items-center gap-1 whitespace-nowrap rounded font-semibold ${large ? "px-2.5 py-1 text-base" : "px-1.5 py-0.5 text-xs"} ${look.className}`}>
+    <span
+      className={`inline-flex items-center gap-1 whitespace-nowrap rounded font-semibold ${large ? "px-2.5 py-1 text-base" : "px-1.5 py-0.5 text-xs"} ${look.className}`}
+    >
       <span aria-hidden>{look.mark}</span>
       {VERDICT_LABELS[verdict]}
     </span>

@@ -43,7 +43,9 @@ export function BatteryPicker({
           />
           <span className="font-semibold">{t.name}</span>
           <span className="text-ink-faint">
-            {locked.has(t.id) ? "has scores" : `${t.unit} · ${t.trialRule === "best" ? "best" : "mean"} of ${t.trialsPerSession}`}
+            {locked.has(t.id)
+              ? "has scores"
+              : `${t.unit} · ${t.trialRule === "best" ? "best" : "mean"} of ${t.trialsPerSession}`}
           </span>
         </label>
       ))}

@@ -49,24 +49,31 @@ export function PublishControl({
       >
         {publishing ? "Publish…" : "Back to draft…"}
       </button>
-      <Dialog open={open} title={publishing ? "Publish this session?" : "Take this session back to draft?"} onClose={() => setOpen(false)}>
+      <Dialog
+        open={open}
+        title={publishing ? "Publish this session?" : "Take this session back to draft?"}
+        onClose={() => setOpen(false)}
+      >
         <div className="space-y-3 text-sm">
           {publishing ? (
             <>
               <p>
-                The athletes of <strong>{squadName}</strong> will see their own results from this session on My progress.
-                Each athlete sees only their own scores.
+                The athletes of <strong>{squadName}</strong> will see their own results from this session on My
+                progress. Each athlete sees only their own scores.
               </p>
               <p>Check the Session sheet first: flagged and out-of-range scores will be visible to them as they are.</p>
             </>
           ) : (
             <p>
-              The athletes of <strong>{squadName}</strong> will no longer see these results until the session is published again.
+              The athletes of <strong>{squadName}</strong> will no longer see these results until the session is
+              published again.
             </p>
           )}
           <FormAlert message={failure} />
           <div className="flex justify-end gap-2">
-            <button type="button" className="btn-quiet" onClick={() => setOpen(false)}>Cancel</button>
+            <button type="button" className="btn-quiet" onClick={() => setOpen(false)}>
+              Cancel
+            </button>
             <button type="button" className="btn-primary" disabled={busy} onClick={confirm}>
               {busy ? "Saving…" : publishing ? "Publish to athletes" : "Back to draft"}
             </button>

@@ -4,13 +4,13 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { Controller, useForm } from "react-hook-form";
 import type { z } from "zod";
-import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
-import { BatteryPicker } from "./battery-picker";
-import { PHASES } from "@/lib/domain";
+import { applyServerErrors, Field, FieldError, SubmitRow } from "@/components/form-bits";
 import { useCreateSession } from "@/hooks/use-writes";
 import type { SquadSummary, TestItem } from "@/lib/client/queries";
+import { PHASES } from "@/lib/domain";
 import { PHASE_LABELS } from "@/lib/labels";
-import { sessionCreateSchema, type SessionCreateInput } from "@/lib/validation/sessions";
+import { type SessionCreateInput, sessionCreateSchema } from "@/lib/validation/sessions";
+import { BatteryPicker } from "./battery-picker";
 
 const FIELDS = ["squadId", "date", "phase", "testIds", "notes"] as const;
 
@@ -61,10 +61,16 @@ export function SessionCreateForm({
     <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
       <div className="grid gap-4 sm:grid-cols-3">
         <Field id="session-squad" label="Squad" error={errors.squadId?.message && "Choose the squad."}>
-          <select id="session-squad" className="field" {...register("squadId", { setValueAs: (v) => (v === "" ? undefined : Number(v)) })}>
+          <select
+            id="session-squad"
+            className="field"
+            {...register("squadId", { setValueAs: (v) => (v === "" ? undefined : Number(v)) })}
+          >
             <option value="">Choose…</option>
             {squads.map((s) => (
-              <option key={s.id} value={s.id}>{s.name}</option>
+              <option key={s.id} value={s.id}>
+                {s.name}
+              </option>
             ))}
           </select>
         </Field>
@@ -75,7 +81,9 @@ export function SessionCreateForm({
           <select id="session-phase" className="field" {...register("phase")}>
             <option value="">Choose…</option>
             {PHASES.map((p) => (
-              <option key={p} value={p}>{PHASE_LABELS[p]}</option>
+              <option key={p} value={p}>
+                {PHASE_LABELS[p]}
+              </option>
             ))}
           </select>
         </Field>
@@ -91,16 +99,26 @@ export function SessionCreateForm({
               chosen={field.value ?? []}
               onChange={field.onChange}
               onBlur={field.onBlur}
-              empty={tests.length === 0 && (
-                <p className="text-sm text-ink-soft">The Test library is empty. Ask your sport scientist to add tests.</p>
-              )}
+              empty={
+                tests.length === 0 && (
+                  <p className="text-sm text-ink-soft">
+                    The Test library is empty. Ask your sport scientist to add tests.
+                  </p>
+                )
+              }
             />
           )}
         />
         <FieldError message={errors.testIds?.message} />
       </fieldset>
       <Field id="session-notes" label="Notes (optional)" error={errors.notes?.message}>
-        <textarea id="session-notes" rows={2} className="field" placeholder="Conditions, surface, warm-up…" {...register("notes")} />
+        <textarea
+          id="session-notes"
+          rows={2}
+          className="field"
+          placeholder="Conditions, surface, warm-up…"
+          {...register("notes")}
+        />
       </Field>
       <SubmitRow failure={failure} submitting={isSubmitting} label="Create session" busyLabel="Creating…" />
     </form>

@@ -1,17 +1,17 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
+import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Controller, useForm } from "react-hook-form";
 import type { z } from "zod";
-import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
-import { BatteryPicker } from "./battery-picker";
-import { PHASES } from "@/lib/domain";
-import { useQuery } from "@tanstack/react-query";
+import { applyServerErrors, Field, FieldError, SubmitRow } from "@/components/form-bits";
 import { useUpdateSession } from "@/hooks/use-writes";
 import { type SheetData, testQueries } from "@/lib/client/queries";
+import { PHASES } from "@/lib/domain";
 import { PHASE_LABELS } from "@/lib/labels";
-import { sessionUpdateSchema, type SessionUpdateInput } from "@/lib/validation/sessions";
+import { type SessionUpdateInput, sessionUpdateSchema } from "@/lib/validation/sessions";
+import { BatteryPicker } from "./battery-picker";
 
 const FIELDS = ["date", "phase", "testIds", "notes"] as const;
 
@@ -43,10 +43,7 @@ export function SessionEditForm({ data, onDone }: { data: SheetData; onDone: () 
   });
 
   // Archived tests cannot join a battery, but one already in it stays listed.
-  const choices = [
-    ...data.tests,
-    ...(library.data ?? []).filter((t) => !data.tests.some((b) => b.id === t.id)),
-  ];
+  const choices = [...data.tests, ...(library.data ?? []).filter((t) => !data.tests.some((b) => b.id === t.id))];
 
   async function onSubmit(values: SessionUpdateInput) {
     setFailure(null);
@@ -67,7 +64,9 @@ export function SessionEditForm({ data, onDone }: { data: SheetData; onDone: () 
         <Field id="edit-session-phase" label="Phase" error={errors.phase?.message}>
           <select id="edit-session-phase" className="field" {...register("phase")}>
             {PHASES.map((p) => (
-              <option key={p} value={p}>{PHASE_LABELS[p]}</option>
+              <option key={p} value={p}>
+                {PHASE_LABELS[p]}
+              </option>
             ))}
           </select>
         </Field>
@@ -84,7 +83,13 @@ export function SessionEditForm({ data, onDone }: { data: SheetData; onDone: () 
               onChange={field.onChange}
               onBlur={field.onBlur}
               locked={scored}
-              empty={library.isPending && <p role="status" className="text-sm text-ink-soft">Loading the Test library…</p>}
+              empty={
+                library.isPending && (
+                  <p role="status" className="text-sm text-ink-soft">
+                    Loading the Test library…
+                  </p>
+                )
+              }
             />
           )}
         />

@@ -1,14 +1,14 @@
 "use client";
 
+import { keepPreviousData, useQuery, useSuspenseQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
-import { TableCard, type Column } from "@/components/table-card";
-import { keepPreviousData, useQuery, useSuspenseQuery } from "@tanstack/react-query";
+import { type Column, TableCard } from "@/components/table-card";
 import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
-import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
+import { formatDate, PHASE_LABELS, STATUS_LABELS } from "@/lib/labels";
 import { PublishControl } from "./publish-control";
 import { SessionCreateForm } from "./session-create-form";
 
@@ -43,15 +43,28 @@ export function SessionList({ canPublish, initialSquadId }: { canPublish: boolea
     <section aria-labelledby="sessions-heading" className="space-y-4">
       <div className="flex flex-wrap items-baseline justify-between gap-3">
         <div>
-          <h1 id="sessions-heading" className="text-2xl font-bold">Sessions</h1>
-          <p className="text-sm text-ink-soft">Dated testing sessions. Open one to enter scores on its Session sheet.</p>
+          <h1 id="sessions-heading" className="text-2xl font-bold">
+            Sessions
+          </h1>
+          <p className="text-sm text-ink-soft">
+            Dated testing sessions. Open one to enter scores on its Session sheet.
+          </p>
         </div>
         <div className="flex items-center gap-3">
-          <label htmlFor="session-filter" className="text-sm font-semibold">Squad</label>
-          <select id="session-filter" className="field w-auto" value={squadId ?? ""} onChange={(e) => chooseSquad(e.target.value)}>
+          <label htmlFor="session-filter" className="text-sm font-semibold">
+            Squad
+          </label>
+          <select
+            id="session-filter"
+            className="field w-auto"
+            value={squadId ?? ""}
+            onChange={(e) => chooseSquad(e.target.value)}
+          >
             <option value="">All squads</option>
             {squads.map((s) => (
-              <option key={s.id} value={s.id}>{s.name}</option>
+              <option key={s.id} value={s.id}>
+                {s.name}
+              </option>
             ))}
           </select>
           <button type="button" className="btn-primary" onClick={() => setCreating(true)}>
@@ -64,7 +77,11 @@ export function SessionList({ canPublish, initialSquadId }: { canPublish: boolea
         query={sessions}
         loading="Loading sessions…"
         failure="Sessions could not load"
-        empty={sessions.data && list.length === 0 && `No sessions yet${squadId ? " for this squad" : ""}. Create one with “New session”.`}
+        empty={
+          sessions.data &&
+          list.length === 0 &&
+          `No sessions yet${squadId ? " for this squad" : ""}. Create one with “New session”.`
+        }
       />
       {list.length > 0 && (
         <TableCard columns={COLUMNS}>
@@ -78,7 +95,9 @@ export function SessionList({ canPublish, initialSquadId }: { canPublish: boolea
               <td className="whitespace-nowrap px-3 py-2.5">{s.squadName}</td>
               <td className="whitespace-nowrap px-3 py-2.5">{PHASE_LABELS[s.phase] ?? s.phase}</td>
               <td className="px-3 py-2.5">
-                <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${s.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}>
+                <span
+                  className={`rounded px-1.5 py-0.5 text-xs font-semibold ${s.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}
+                >
                   {STATUS_LABELS[s.status]}
                 </span>
               </td>
@@ -89,7 +108,9 @@ export function SessionList({ canPublish, initialSquadId }: { canPublish: boolea
               <td className="num px-3 py-2.5 text-right">{s.resultCount}</td>
               <td className="px-3 py-2.5">
                 <div className="flex justify-end gap-1.5 whitespace-nowrap">
-                  <Link href={`/sessions/${s.id}`} className="btn-quiet px-2 py-1 text-xs">Session sheet</Link>
+                  <Link href={`/sessions/${s.id}`} className="btn-quiet px-2 py-1 text-xs">
+                    Session sheet
+                  </Link>
                   {canPublish && (
                     <PublishControl
                       compact

@@ -30,7 +30,9 @@ export function CellIssues({
         >
           {state.status === "conflict" ? (
             <span>
-              <strong>{athleteName} · {testName}:</strong>{" "}
+              <strong>
+                {athleteName} · {testName}:
+              </strong>{" "}
               {state.current
                 ? `${state.current.updatedByName ?? "Someone else"} changed this at ${timeWords(state.current.updatedAt)} (now ${describeEntry(state.current)}).`
                 : "Someone else removed this result."}{" "}
@@ -38,19 +40,30 @@ export function CellIssues({
             </span>
           ) : (
             <span>
-              <strong>{athleteName} · {testName}:</strong> not saved. {state.message} Yours: {describeEntry(state.wanted)}.
+              <strong>
+                {athleteName} · {testName}:
+              </strong>{" "}
+              not saved. {state.message} Yours: {describeEntry(state.wanted)}.
             </span>
           )}
           <span className="flex gap-2">
             {state.status === "conflict" ? (
               <>
-                <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => onTheirs(testId)}>Use theirs</button>
-                <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => onRetry(testId)}>Overwrite with mine</button>
+                <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => onTheirs(testId)}>
+                  Use theirs
+                </button>
+                <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => onRetry(testId)}>
+                  Overwrite with mine
+                </button>
               </>
             ) : (
               <>
-                <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => onRetry(testId)}>Retry</button>
-                <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => onTheirs(testId)}>Discard mine</button>
+                <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => onRetry(testId)}>
+                  Retry
+                </button>
+                <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => onTheirs(testId)}>
+                  Discard mine
+                </button>
               </>
             )}
           </span>

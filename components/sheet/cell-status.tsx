@@ -3,7 +3,15 @@
 import type { CellState } from "@/hooks/use-session-sheet";
 
 /** The small saved / saving / not saved mark beside a result. Colour is never the only signal. */
-export function CellStatus({ state, label, onRetry }: { state: CellState | undefined; label: string; onRetry: () => void }) {
+export function CellStatus({
+  state,
+  label,
+  onRetry,
+}: {
+  state: CellState | undefined;
+  label: string;
+  onRetry: () => void;
+}) {
   if (!state) return <span className="inline-block w-4" aria-hidden />;
   switch (state.status) {
     case "saving":
@@ -14,7 +22,12 @@ export function CellStatus({ state, label, onRetry }: { state: CellState | undef
       );
     case "saved":
       return (
-        <span role="status" aria-label={`Saved ${label}`} title="Saved" className="inline-flex w-4 justify-center text-sm font-bold text-steady">
+        <span
+          role="status"
+          aria-label={`Saved ${label}`}
+          title="Saved"
+          className="inline-flex w-4 justify-center text-sm font-bold text-steady"
+        >
           ✓
         </span>
       );

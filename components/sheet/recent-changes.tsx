@@ -17,7 +17,8 @@ function EventText({ e }: { e: AuditEvent }) {
     return (
       <>
         <span className="font-semibold">{e.actorName ?? "Someone"}</span> imported{" "}
-        {rows !== undefined ? <span className="num">{rows}</span> : "the"} rows{e.details?.filename ? ` from ${e.details.filename}` : ""}
+        {rows !== undefined ? <span className="num">{rows}</span> : "the"} rows
+        {e.details?.filename ? ` from ${e.details.filename}` : ""}
       </>
     );
   }
@@ -38,7 +39,9 @@ export function RecentChanges({ sessionId }: { sessionId: number }) {
   return (
     <section aria-labelledby="changes-heading" className="card p-4">
       <div className="mb-2 flex items-baseline justify-between">
-        <h2 id="changes-heading" className="font-bold">Recent changes</h2>
+        <h2 id="changes-heading" className="font-bold">
+          Recent changes
+        </h2>
         <button
           type="button"
           className="text-xs font-semibold text-ink-soft hover:text-ink"

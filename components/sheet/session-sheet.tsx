@@ -7,7 +7,7 @@ import { Dialog } from "@/components/dialog";
 import { PublishControl } from "@/components/sessions/publish-control";
 import { SessionEditForm } from "@/components/sessions/session-edit-form";
 import { useSessionSheet } from "@/hooks/use-session-sheet";
-import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
+import { formatDate, PHASE_LABELS, STATUS_LABELS } from "@/lib/labels";
 import { RecentChanges } from "./recent-changes";
 import { SheetGrid } from "./sheet-grid";
 import { UndoButton } from "./undo-button";
@@ -32,14 +32,23 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
 
   return (
     <section aria-labelledby="sheet-heading" className="space-y-3">
-      <Breadcrumbs trail={[{ href: "/sessions", label: "Sessions" }, { href: `/squads/${session.squadId}`, label: session.squadName }]} />
+      <Breadcrumbs
+        trail={[
+          { href: "/sessions", label: "Sessions" },
+          { href: `/squads/${session.squadId}`, label: session.squadName },
+        ]}
+      />
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
-          <h1 id="sheet-heading" className="text-2xl font-bold">Session sheet</h1>
+          <h1 id="sheet-heading" className="text-2xl font-bold">
+            Session sheet
+          </h1>
           <p className="text-ink-soft">
             <span className="font-semibold text-ink">{session.squadName}</span> · {PHASE_LABELS[session.phase]} ·{" "}
             <span className="num">{formatDate(session.date)}</span> ·{" "}
-            <span className={`rounded px-1.5 py-0.5 text-xs font-semibold ${session.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}>
+            <span
+              className={`rounded px-1.5 py-0.5 text-xs font-semibold ${session.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}
+            >
               {STATUS_LABELS[session.status]}
             </span>{" "}
             · <span className="num">{filled}</span> of <span className="num">{expected}</span> results
@@ -50,8 +59,12 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
           {data.canEdit && (
             <>
               <UndoButton sheet={sheet} onMessage={setAnnouncement} />
-              <button type="button" className="btn-quiet" onClick={() => setEditing(true)}>Edit session</button>
-              <Link href={`/sessions/${session.id}/import`} className="btn-quiet">Import CSV</Link>
+              <button type="button" className="btn-quiet" onClick={() => setEditing(true)}>
+                Edit session
+              </button>
+              <Link href={`/sessions/${session.id}/import`} className="btn-quiet">
+                Import CSV
+              </Link>
             </>
           )}
           {data.canPublish && (
@@ -67,9 +80,9 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
 
       <p className="text-xs text-ink-faint">
         <span aria-hidden>⚠︎ </span>
-        Maximal tests (sprints, jumps, 1RM, intermittent runs) carry injury risk: screen athletes, warm up, and test under
-        qualified supervision, following your organisation&apos;s and governing body&apos;s protocols. Scores support
-        training decisions; they are not a medical or return-to-play judgement.
+        Maximal tests (sprints, jumps, 1RM, intermittent runs) carry injury risk: screen athletes, warm up, and test
+        under qualified supervision, following your organisation&apos;s and governing body&apos;s protocols. Scores
+        support training decisions; they are not a medical or return-to-play judgement.
       </p>
 
       {!data.canEdit && (
@@ -81,7 +94,9 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
 
       <div className="flex flex-wrap items-center justify-between gap-3">
         <div className="flex items-center gap-2">
-          <label htmlFor="sheet-test-filter" className="text-sm font-semibold">Show</label>
+          <label htmlFor="sheet-test-filter" className="text-sm font-semibold">
+            Show
+          </label>
           <select
             id="sheet-test-filter"
             className="field w-auto py-1.5"
@@ -90,22 +105,25 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
           >
             <option value="all">All tests</option>
             {data.tests.map((t) => (
-              <option key={t.id} value={t.id}>{t.name}</option>
+              <option key={t.id} value={t.id}>
+                {t.name}
+              </option>
             ))}
           </select>
         </div>
         {data.canEdit && (
           <p className="text-xs text-ink-soft">
             Type a score, <kbd className="rounded border border-line px-1">Tab</kbd> to the next trial,{" "}
-            <kbd className="rounded border border-line px-1">Enter</kbd> for the next athlete. Decimal commas are fine; paste
-            a block from a spreadsheet into the first cell.
+            <kbd className="rounded border border-line px-1">Enter</kbd> for the next athlete. Decimal commas are fine;
+            paste a block from a spreadsheet into the first cell.
           </p>
         )}
       </div>
 
       <p aria-live="polite" className="min-h-5 text-sm">
         {announcement}
-        {refused > 0 && ` ${refused} cell${refused === 1 ? " holds" : "s hold"} text that is not a number and ${refused === 1 ? "was" : "were"} not saved.`}
+        {refused > 0 &&
+          ` ${refused} cell${refused === 1 ? " holds" : "s hold"} text that is not a number and ${refused === 1 ? "was" : "were"} not saved.`}
         {unsaved > 0 && ` ${unsaved} result${unsaved === 1 ? " needs" : "s need"} your attention below.`}
       </p>
 

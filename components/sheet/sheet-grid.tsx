@@ -1,8 +1,8 @@
 "use client";
 
 import { useMemo, useRef } from "react";
-import type { SheetData, SheetTest } from "@/lib/client/queries";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
+import type { SheetData, SheetTest } from "@/lib/client/queries";
 import { isBlock, parseBlock, sheetColumns } from "@/lib/sheet/columns";
 import { SheetHead } from "./sheet-head";
 import { SheetRow } from "./sheet-row";
@@ -102,7 +102,8 @@ export function SheetGrid({
     });
     const { refused } = sheet.enterTrials(entries);
     const parts = [`Pasted ${entries.length - refused} value${entries.length - refused === 1 ? "" : "s"}.`];
-    if (refused > 0) parts.push(`${refused} ${refused === 1 ? "was not a number and was" : "were not numbers and were"} not saved.`);
+    if (refused > 0)
+      parts.push(`${refused} ${refused === 1 ? "was not a number and was" : "were not numbers and were"} not saved.`);
     if (outside > 0) parts.push(`${outside} fell outside the sheet and ${outside === 1 ? "was" : "were"} left out.`);
     onAnnounce(parts.join(" "));
   }

@@ -1,16 +1,16 @@
 "use client";
 
 import { Fragment } from "react";
+import type { SessionSheetState } from "@/hooks/use-session-sheet";
+import type { SheetTest } from "@/lib/client/queries";
 import { paddedNumber } from "@/lib/decimal";
 import { RESULT_FLAGS, type ResultFlag } from "@/lib/domain";
-import type { SheetTest } from "@/lib/client/queries";
-import type { SessionSheetState } from "@/hooks/use-session-sheet";
 import { FLAG_LABELS, formatValue } from "@/lib/labels";
+import { cellKey, outsidePlausible, padTrials, plausibleWords, trialKey } from "@/lib/sheet/model";
 import { reduceTrials, trialSpread } from "@/lib/trials";
 import { CellIssues, type Issue } from "./cell-issues";
 import { CellStatus } from "./cell-status";
 import { TrialInput } from "./trial-input";
-import { cellKey, outsidePlausible, padTrials, plausibleWords, trialKey } from "@/lib/sheet/model";
 
 type Athlete = { id: number; name: string; position: string | null };
 
@@ -36,7 +36,10 @@ export function SheetRow({
   return (
     <>
       <tr className="group">
-        <th scope="row" className="sticky left-0 z-10 border-b border-line bg-white px-3 py-1 text-left font-semibold group-hover:bg-paper">
+        <th
+          scope="row"
+          className="sticky left-0 z-10 border-b border-line bg-white px-3 py-1 text-left font-semibold group-hover:bg-paper"
+        >
           <span className="block whitespace-nowrap text-sm">{athlete.name}</span>
           {athlete.position && <span className="block text-xs font-normal text-ink-faint">{athlete.position}</span>}
         </th>
@@ -44,7 +47,8 @@ export function SheetRow({
           const key = cellKey(athlete.id, test.id);
           const shown = sheet.shownFor(athlete.id, test.id);
           const state = sheet.cells[key];
-          if (state && (state.status === "failed" || state.status === "conflict")) issues.push({ testId: test.id, testName: test.name, state });
+          if (state && (state.status === "failed" || state.status === "conflict"))
+            issues.push({ testId: test.id, testName: test.name, state });
           const trials = padTrials(shown.trials, test.trialsPerSession);
           const value = reduceTrials(trials, test.trialRule, test.direction);
           const spread = trialSpread(trials);
@@ -57,7 +61,10 @@ export function SheetRow({
                 const outside = outsidePlausible(test, v) ? plausibleWords(test) : null;
                 const trialLabel = `${label}, trial ${index + 1}`;
                 return (
-                  <td key={index} className={`border-b border-line px-0.5 py-1 ${index === 0 ? "border-l-2 pl-2" : ""}`}>
+                  <td
+                    key={index}
+                    className={`border-b border-line px-0.5 py-1 ${index === 0 ? "border-l-2 pl-2" : ""}`}
+                  >
                     {canEdit ? (
                       <TrialInput
                         id={`cell-${athlete.id}-${test.id}-${index}`}
@@ -69,7 +76,9 @@ export function SheetRow({
                         dimmed={dimmed}
                         row={row}
                         col={navIndex.get(`${test.id}:${index}`) ?? 0}
-                        onCommit={(text) => sheet.enterTrials([{ athleteId: athlete.id, testId: test.id, index, text }])}
+                        onCommit={(text) =>
+                          sheet.enterTrials([{ athleteId: athlete.id, testId: test.id, index, text }])
+                        }
                         onRevert={() => sheet.revertTrial(athlete.id, test.id, index)}
                       />
                     ) : (
@@ -87,8 +96,15 @@ export function SheetRow({
               <td className="whitespace-nowrap border-b border-line px-2 py-1 text-right">
                 <span className="flex items-center justify-end gap-1.5">
                   <span className="flex flex-col items-end leading-tight">
-                    <span className="num text-base font-semibold" aria-label={`${label}, ${test.trialRule === "best" ? "best" : "mean"}`}>
-                      {shown.flag && value === null ? <em className="text-sm font-normal text-ink-soft">{FLAG_LABELS[shown.flag]}</em> : formatValue(value, test.decimals)}
+                    <span
+                      className="num text-base font-semibold"
+                      aria-label={`${label}, ${test.trialRule === "best" ? "best" : "mean"}`}
+                    >
+                      {shown.flag && value === null ? (
+                        <em className="text-sm font-normal text-ink-soft">{FLAG_LABELS[shown.flag]}</em>
+                      ) : (
+                        formatValue(value, test.decimals)
+                      )}
                     </span>
                     {spread !== null && (
                       <span className="num text-[11px] text-ink-faint" title="Spread of the trials (highest − lowest)">
@@ -96,7 +112,9 @@ export function SheetRow({
                       </span>
                     )}
                   </span>
-                  {canEdit && <CellStatus state={state} label={label} onRetry={() => sheet.retry(athlete.id, test.id)} />}
+                  {canEdit && (
+                    <CellStatus state={state} label={label} onRetry={() => sheet.retry(athlete.id, test.id)} />
+                  )}
                 </span>
               </td>
               <td className="border-b border-line px-1 py-1">
@@ -113,7 +131,9 @@ export function SheetRow({
                   >
                     <option value="">—</option>
                     {RESULT_FLAGS.map((f) => (
-                      <option key={f} value={f}>{FLAG_LABELS[f]}</option>
+                      <option key={f} value={f}>
+                        {FLAG_LABELS[f]}
+                      </option>
                     ))}
                   </select>
                 ) : (

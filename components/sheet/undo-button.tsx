@@ -1,7 +1,7 @@
 "use client";
 
-import { ApiClientError } from "@/lib/client/fetch-json";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
+import { ApiClientError } from "@/lib/client/fetch-json";
 
 /** Undoes the caller's latest change to this session's scores, then reloads the sheet. */
 export function UndoButton({ sheet, onMessage }: { sheet: SessionSheetState; onMessage: (message: string) => void }) {
@@ -19,7 +19,8 @@ export function UndoButton({ sheet, onMessage }: { sheet: SessionSheetState; onM
             onMessage(`Undid the last change: ${athlete} · ${test}.`);
           },
           onError: (error) => {
-            if (error instanceof ApiClientError && error.status === 404) onMessage("Nothing of yours to undo in this session.");
+            if (error instanceof ApiClientError && error.status === 404)
+              onMessage("Nothing of yours to undo in this session.");
             else if (error instanceof ApiClientError && error.status === 409)
               onMessage(`${error.message} That result was changed again since, so it was left as it is.`);
             else onMessage(`Undo failed: ${error.message}`);

@@ -26,13 +26,24 @@ export function AddExistingAthlete({
     addAthlete.mutate({ athleteId: Number(athleteId) }, { onSuccess: onDone });
   }
 
-  if (isPending) return <p role="status" className="text-sm text-ink-soft">Loading athletes…</p>;
+  if (isPending)
+    return (
+      <p role="status" className="text-sm text-ink-soft">
+        Loading athletes…
+      </p>
+    );
   if (error) return <FormAlert message={`Athletes could not load: ${error.message}`} />;
-  if (candidates.length === 0) return <p className="text-sm text-ink-soft">Every athlete you can see is already in this squad.</p>;
+  if (candidates.length === 0)
+    return <p className="text-sm text-ink-soft">Every athlete you can see is already in this squad.</p>;
   return (
     <div className="space-y-3">
       <Field id="existing-athlete" label="Athlete">
-        <select id="existing-athlete" className="field" value={athleteId} onChange={(e) => setAthleteId(e.target.value)}>
+        <select
+          id="existing-athlete"
+          className="field"
+          value={athleteId}
+          onChange={(e) => setAthleteId(e.target.value)}
+        >
           <option value="">Choose…</option>
           {candidates.map((a) => (
             <option key={a.id} value={a.id}>

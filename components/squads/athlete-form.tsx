@@ -4,10 +4,10 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { Field, SubmitRow, applyServerErrors } from "@/components/form-bits";
+import { applyServerErrors, Field, SubmitRow } from "@/components/form-bits";
 import { useAddAthlete, useUpdateAthlete } from "@/hooks/use-writes";
 import type { RosterAthlete } from "@/lib/client/queries";
-import { athleteCreateSchema, type AthleteCreateInput } from "@/lib/validation/roster";
+import { type AthleteCreateInput, athleteCreateSchema } from "@/lib/validation/roster";
 
 const FIELDS = ["name", "position", "sex", "dateOfBirth", "externalId", "notes"] as const;
 const emptyToNull = (v: unknown) => (v === "" || v === undefined ? null : v);
@@ -47,7 +47,9 @@ export function AthleteForm({
   async function onSubmit(values: AthleteCreateInput) {
     setFailure(null);
     try {
-      onDone(athlete ? await update.mutateAsync({ athleteId: athlete.id, input: values }) : await add.mutateAsync(values));
+      onDone(
+        athlete ? await update.mutateAsync({ athleteId: athlete.id, input: values }) : await add.mutateAsync(values),
+      );
     } catch (error) {
       setFailure(applyServerErrors(error, setError, FIELDS));
     }
@@ -75,7 +77,12 @@ export function AthleteForm({
           <input id={id("dateOfBirth")} type="date" className="field" {...register("dateOfBirth")} />
         </Field>
         <Field id={id("externalId")} label="External id" error={errors.externalId?.message}>
-          <input id={id("externalId")} className="field" placeholder="id in the gates or force plate" {...register("externalId")} />
+          <input
+            id={id("externalId")}
+            className="field"
+            placeholder="id in the gates or force plate"
+            {...register("externalId")}
+          />
         </Field>
         <Field id={id("notes")} label="Notes" error={errors.notes?.message} className="sm:col-span-2">
           <textarea id={id("notes")} rows={2} className="field" {...register("notes")} />
@@ -84,7 +91,12 @@ export function AthleteForm({
       <p className="text-xs text-ink-faint">
         Athlete data is personal data. Record only what the squad needs, with consent (a guardian&apos;s for minors).
       </p>
-      <SubmitRow failure={failure} submitting={isSubmitting} label={athlete ? "Save athlete" : "Add athlete"} busyLabel="Saving…" />
+      <SubmitRow
+        failure={failure}
+        submitting={isSubmitting}
+        label={athlete ? "Save athlete" : "Add athlete"}
+        busyLabel="Saving…"
+      />
     </form>
   );
 }

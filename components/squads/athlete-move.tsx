@@ -41,17 +41,25 @@ export function AthleteMove({
     const name = list.find((s) => s.id === targetId)?.name ?? "the squad";
     update.mutate(
       { athleteId: athlete.id, input: { squadIds: [...ids] } },
-      { onSuccess: () => onDone(keep ? `${athlete.name} was added to ${name} as well.` : `${athlete.name} was moved to ${name}.`) },
+      {
+        onSuccess: () =>
+          onDone(keep ? `${athlete.name} was added to ${name} as well.` : `${athlete.name} was moved to ${name}.`),
+      },
     );
   }
 
-  if (loading) return <p role="status" className="text-sm text-ink-soft">Reading {athlete.name}&apos;s squads…</p>;
+  if (loading)
+    return (
+      <p role="status" className="text-sm text-ink-soft">
+        Reading {athlete.name}&apos;s squads…
+      </p>
+    );
   if (failed) return <FormAlert message={`Squads could not load: ${failed.message}`} />;
   return (
     <div className="space-y-4">
       <p className="text-sm">
-        {athlete.name} is in: <span className="font-semibold">{current.map((s) => s.name).join(", ")}</span>.
-        Their results stay with the sessions they were recorded in.
+        {athlete.name} is in: <span className="font-semibold">{current.map((s) => s.name).join(", ")}</span>. Their
+        results stay with the sessions they were recorded in.
       </p>
       {targets.length === 0 ? (
         <p className="text-sm text-ink-soft">There is no other squad you can move them to.</p>
@@ -61,7 +69,9 @@ export function AthleteMove({
             <select id="move-target" className="field" value={target} onChange={(e) => setTarget(e.target.value)}>
               <option value="">Choose…</option>
               {targets.map((s) => (
-                <option key={s.id} value={s.id}>{s.name}</option>
+                <option key={s.id} value={s.id}>
+                  {s.name}
+                </option>
               ))}
             </select>
           </Field>

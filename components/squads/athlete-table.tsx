@@ -1,7 +1,7 @@
 "use client";
 
 import { useMemo, useState } from "react";
-import { TableCard, type Column } from "@/components/table-card";
+import { type Column, TableCard } from "@/components/table-card";
 import type { RosterAthlete } from "@/lib/client/queries";
 import { formatDate } from "@/lib/labels";
 
@@ -34,7 +34,9 @@ export function AthleteTable({
     const q = query.trim().toLowerCase();
     const filtered = q
       ? athletes.filter((a) =>
-          [a.name, a.position, a.externalId, a.sex ? SEX_LABELS[a.sex] : null, a.dateOfBirth].some((v) => v?.toLowerCase().includes(q)),
+          [a.name, a.position, a.externalId, a.sex ? SEX_LABELS[a.sex] : null, a.dateOfBirth].some((v) =>
+            v?.toLowerCase().includes(q),
+          ),
         )
       : athletes;
     return [...filtered].sort((a, b) => {
@@ -57,7 +59,9 @@ export function AthleteTable({
             onClick={() => setSort(active ? { key: col.key, dir: sort.dir === 1 ? -1 : 1 } : { key: col.key, dir: 1 })}
           >
             {col.label}
-            <span aria-hidden className={active ? "text-ink" : "opacity-30"}>{active && sort.dir === -1 ? "▼" : "▲"}</span>
+            <span aria-hidden className={active ? "text-ink" : "opacity-30"}>
+              {active && sort.dir === -1 ? "▼" : "▲"}
+            </span>
           </button>
         ),
       };
@@ -68,7 +72,9 @@ export function AthleteTable({
   return (
     <div className="space-y-3">
       <div className="flex flex-wrap items-center gap-3">
-        <label htmlFor="roster-filter" className="sr-only">Filter athletes</label>
+        <label htmlFor="roster-filter" className="sr-only">
+          Filter athletes
+        </label>
         <input
           id="roster-filter"
           type="search"
@@ -90,10 +96,15 @@ export function AthleteTable({
           </tr>
         )}
         {shown.map((a) => (
-          <tr key={a.id} className={`border-b border-line last:border-0 ${a.archived ? "bg-paper text-ink-faint" : ""}`}>
+          <tr
+            key={a.id}
+            className={`border-b border-line last:border-0 ${a.archived ? "bg-paper text-ink-faint" : ""}`}
+          >
             <td className="px-3 py-2">
               <span className="font-semibold">{a.name}</span>
-              {a.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>}
+              {a.archived && (
+                <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>
+              )}
             </td>
             <td className="px-3 py-2">{a.position ?? "–"}</td>
             <td className="px-3 py-2">{a.sex ? SEX_LABELS[a.sex] : "–"}</td>

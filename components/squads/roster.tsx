@@ -28,7 +28,10 @@ export function Roster({ squadId }: { squadId: number }) {
   const [addMode, setAddMode] = useState<"new" | "existing">("new");
   const [notice, setNotice] = useState<string | null>(null);
   const { data: detail } = useSuspenseQuery(squadQueries.detail(squadId));
-  const athletes = useQuery({ ...squadQueries.roster(squadId, { archived: showArchived }), placeholderData: keepPreviousData });
+  const athletes = useQuery({
+    ...squadQueries.roster(squadId, { archived: showArchived }),
+    placeholderData: keepPreviousData,
+  });
   const update = useUpdateAthlete();
   const memberIds = useMemo(() => new Set((athletes.data ?? []).map((a) => a.id)), [athletes.data]);
 
@@ -41,7 +44,8 @@ export function Roster({ squadId }: { squadId: number }) {
     update.mutate(
       { athleteId: athlete.id, input: { archived } },
       {
-        onSuccess: () => done(archived ? `${athlete.name} was archived; their results are kept.` : `${athlete.name} was restored.`),
+        onSuccess: () =>
+          done(archived ? `${athlete.name} was archived; their results are kept.` : `${athlete.name} was restored.`),
         onError: (error) => setNotice(`${athlete.name}: ${error.message}`),
       },
     );
@@ -55,7 +59,11 @@ export function Roster({ squadId }: { squadId: number }) {
         <div>
           <h1 id="squad-heading" className="text-2xl font-bold">
             {squad.name}
-            {squad.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 align-middle text-xs text-ink-soft">Archived</span>}
+            {squad.archived && (
+              <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 align-middle text-xs text-ink-soft">
+                Archived
+              </span>
+            )}
           </h1>
           <p className="text-sm text-ink-soft">
             {squad.sport ?? "No sport given"} · Coaches:{" "}
@@ -63,20 +71,30 @@ export function Roster({ squadId }: { squadId: number }) {
           </p>
         </div>
         <div className="flex flex-wrap gap-2">
-          <Link href={`/sessions?squadId=${squadId}`} className="btn-quiet">Sessions</Link>
+          <Link href={`/sessions?squadId=${squadId}`} className="btn-quiet">
+            Sessions
+          </Link>
           {detail.canManage && (
-            <button type="button" className="btn-quiet" onClick={() => setPanel({ kind: "settings" })}>Squad settings</button>
+            <button type="button" className="btn-quiet" onClick={() => setPanel({ kind: "settings" })}>
+              Squad settings
+            </button>
           )}
           {detail.canEditRoster && (
-            <button type="button" className="btn-primary" onClick={() => setPanel({ kind: "add" })}>Add athlete</button>
+            <button type="button" className="btn-primary" onClick={() => setPanel({ kind: "add" })}>
+              Add athlete
+            </button>
           )}
         </div>
       </div>
 
       {notice && (
-        <p role="status" className="rounded-md border border-line bg-band px-3 py-2 text-sm">{notice}</p>
+        <p role="status" className="rounded-md border border-line bg-band px-3 py-2 text-sm">
+          {notice}
+        </p>
       )}
-      {athletes.error && <LoadFailure failure="The Roster could not load" error={athletes.error} onRetry={athletes.refetch} />}
+      {athletes.error && (
+        <LoadFailure failure="The Roster could not load" error={athletes.error} onRetry={athletes.refetch} />
+      )}
       <label className="flex items-center gap-2 text-sm">
         <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} />
         Show archived athletes
@@ -86,13 +104,28 @@ export function Roster({ squadId }: { squadId: number }) {
           athletes={athletes.data}
           renderActions={(a) => (
             <div className="flex justify-end gap-1.5 whitespace-nowrap">
-              <button type="button" className="btn-quiet px-2 py-1 text-xs" aria-label={`Edit ${a.name}`} onClick={() => setPanel({ kind: "edit", athlete: a })}>
+              <button
+                type="button"
+                className="btn-quiet px-2 py-1 text-xs"
+                aria-label={`Edit ${a.name}`}
+                onClick={() => setPanel({ kind: "edit", athlete: a })}
+              >
                 Edit
               </button>
-              <button type="button" className="btn-quiet px-2 py-1 text-xs" aria-label={`Move ${a.name}`} onClick={() => setPanel({ kind: "move", athlete: a })}>
+              <button
+                type="button"
+                className="btn-quiet px-2 py-1 text-xs"
+                aria-label={`Move ${a.name}`}
+                onClick={() => setPanel({ kind: "move", athlete: a })}
+              >
                 Move
               </button>
-              <button type="button" className="btn-quiet px-2 py-1 text-xs" aria-label={`${a.archived ? "Restore" : "Archive"} ${a.name}`} onClick={() => setArchived(a, !a.archived)}>
+              <button
+                type="button"
+                className="btn-quiet px-2 py-1 text-xs"
+                aria-label={`${a.archived ? "Restore" : "Archive"} ${a.name}`}
+                onClick={() => setArchived(a, !a.archived)}
+              >
                 {a.archived ? "Restore" : "Archive"}
               </button>
             </div>
@@ -121,12 +154,25 @@ export function Roster({ squadId }: { squadId: number }) {
           <AddExistingAthlete squadId={squadId} alreadyIn={memberIds} onDone={(a) => done(`${a.name} was added.`)} />
         )}
       </Dialog>
-      <Dialog open={panel?.kind === "edit"} title={panel?.kind === "edit" ? `Edit ${panel.athlete.name}` : ""} onClose={() => setPanel(null)}>
+      <Dialog
+        open={panel?.kind === "edit"}
+        title={panel?.kind === "edit" ? `Edit ${panel.athlete.name}` : ""}
+        onClose={() => setPanel(null)}
+      >
         {panel?.kind === "edit" && (
-          <AthleteForm key={panel.athlete.id} squadId={squadId} athlete={panel.athlete} onDone={(a) => done(`${a.name} was saved.`)} />
+          <AthleteForm
+            key={panel.athlete.id}
+            squadId={squadId}
+            athlete={panel.athlete}
+            onDone={(a) => done(`${a.name} was saved.`)}
+          />
         )}
       </Dialog>
-      <Dialog open={panel?.kind === "move"} title={panel?.kind === "move" ? `Move ${panel.athlete.name}` : ""} onClose={() => setPanel(null)}>
+      <Dialog
+        open={panel?.kind === "move"}
+        title={panel?.kind === "move" ? `Move ${panel.athlete.name}` : ""}
+        onClose={() => setPanel(null)}
+      >
         {panel?.kind === "move" && <AthleteMove athlete={panel.athlete} fromSquadId={squadId} onDone={done} />}
       </Dialog>
       <Dialog open={panel?.kind === "settings"} title="Squad settings" onClose={() => setPanel(null)}>

@@ -4,9 +4,9 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { Field, SubmitRow, applyServerErrors } from "@/components/form-bits";
+import { applyServerErrors, Field, SubmitRow } from "@/components/form-bits";
 import { useCreateSquad } from "@/hooks/use-writes";
-import { squadCreateSchema, type SquadCreateInput } from "@/lib/validation/roster";
+import { type SquadCreateInput, squadCreateSchema } from "@/lib/validation/roster";
 
 export function SquadCreateForm({ onDone }: { onDone: (squad: { id: number }) => void }) {
   const [failure, setFailure] = useState<string | null>(null);
@@ -16,7 +16,9 @@ export function SquadCreateForm({ onDone }: { onDone: (squad: { id: number }) =>
     handleSubmit,
     setError,
     formState: { errors, isSubmitting },
-  } = useForm<z.input<typeof squadCreateSchema>, unknown, SquadCreateInput>({ resolver: zodResolver(squadCreateSchema) });
+  } = useForm<z.input<typeof squadCreateSchema>, unknown, SquadCreateInput>({
+    resolver: zodResolver(squadCreateSchema),
+  });
 
   async function onSubmit(values: SquadCreateInput) {
     setFailure(null);

@@ -1,14 +1,14 @@
 "use client";
 
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
-import { keepPreviousData, useQuery } from "@tanstack/react-query";
-import { squadQueries } from "@/lib/client/queries";
 import { isCoach } from "@/lib/auth/permissions";
+import { squadQueries } from "@/lib/client/queries";
 import type { Role } from "@/lib/domain";
-import { PHASE_LABELS, formatDate } from "@/lib/labels";
+import { formatDate, PHASE_LABELS } from "@/lib/labels";
 import { SquadCreateForm } from "./squad-create-form";
 import { SquadsStatus } from "./squads-status";
 
@@ -24,9 +24,13 @@ export function SquadList({ role, canCreate }: { role: Role; canCreate: boolean 
     <section aria-labelledby="roster-heading" className="space-y-4">
       <div className="flex flex-wrap items-baseline justify-between gap-3">
         <div>
-          <h1 id="roster-heading" className="text-2xl font-bold">Roster</h1>
+          <h1 id="roster-heading" className="text-2xl font-bold">
+            Roster
+          </h1>
           <p className="text-sm text-ink-soft">
-            {isCoach({ role }) ? "Open one of your squads to see and change its athletes." : "Open a squad to see and change its athletes."}
+            {isCoach({ role })
+              ? "Open one of your squads to see and change its athletes."
+              : "Open a squad to see and change its athletes."}
           </p>
         </div>
         <div className="flex items-center gap-3">
@@ -35,7 +39,9 @@ export function SquadList({ role, canCreate }: { role: Role; canCreate: boolean 
             Show archived squads
           </label>
           {canCreate && (
-            <button type="button" className="btn-primary" onClick={() => setCreating(true)}>New squad</button>
+            <button type="button" className="btn-primary" onClick={() => setCreating(true)}>
+              New squad
+            </button>
           )}
         </div>
       </div>
@@ -51,7 +57,9 @@ export function SquadList({ role, canCreate }: { role: Role; canCreate: boolean 
               >
                 <span className="flex items-baseline justify-between gap-2">
                   <span className="text-lg font-bold">{squad.name}</span>
-                  {squad.archived && <span className="rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>}
+                  {squad.archived && (
+                    <span className="rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>
+                  )}
                 </span>
                 <span className="block text-sm text-ink-soft">
                   {squad.sport ?? "No sport given"} · <span className="num">{squad.athleteCount}</span> athletes

@@ -1,11 +1,11 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
+import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { z } from "zod";
-import { Field, FormAlert, applyServerErrors } from "@/components/form-bits";
-import { useQuery } from "@tanstack/react-query";
+import type { z } from "zod";
+import { applyServerErrors, Field, FormAlert } from "@/components/form-bits";
 import { useUpdateSquad } from "@/hooks/use-writes";
 import { coachQueries, type SquadDetail } from "@/lib/client/queries";
 import { squadCreateSchema } from "@/lib/validation/roster";
@@ -27,7 +27,11 @@ export function SquadSettings({ squad, onSaved }: { squad: Squad; onSaved: (mess
 function RenameForm({ squad, onSaved }: { squad: Squad; onSaved: (message: string) => void }) {
   const [failure, setFailure] = useState<string | null>(null);
   const update = useUpdateSquad(squad.id);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof squadCreateSchema>, unknown, NameInput>({
+  const { register, handleSubmit, setError, formState } = useForm<
+    z.input<typeof squadCreateSchema>,
+    unknown,
+    NameInput
+  >({
     resolver: zodResolver(squadCreateSchema),
     defaultValues: { name: squad.name, sport: squad.sport ?? "" },
   });
@@ -52,7 +56,9 @@ function RenameForm({ squad, onSaved }: { squad: Squad; onSaved: (message: strin
         </Field>
       </div>
       <FormAlert message={failure} />
-      <button type="submit" className="btn-quiet" disabled={formState.isSubmitting}>Rename</button>
+      <button type="submit" className="btn-quiet" disabled={formState.isSubmitting}>
+        Rename
+      </button>
     </form>
   );
 }
@@ -66,7 +72,10 @@ function CoachPicker({ squad, onSaved }: { squad: Squad; onSaved: (message: stri
   function save() {
     update.mutate(
       { coachUserIds: [...chosen] },
-      { onSuccess: () => onSaved(chosen.size === 0 ? "The squad has no coach assigned now." : `Coaches saved (${chosen.size}).`) },
+      {
+        onSuccess: () =>
+          onSaved(chosen.size === 0 ? "The squad has no coach assigned now." : `Coaches saved (${chosen.size}).`),
+      },
     );
   }
 
@@ -74,7 +83,11 @@ function CoachPicker({ squad, onSaved }: { squad: Squad; onSaved: (message: stri
     <fieldset className="space-y-2">
       <legend className="font-semibold">Coaches</legend>
       <p className="text-sm text-ink-soft">Coaches see and edit only the squads they are assigned to.</p>
-      {isPending && <p role="status" className="text-sm text-ink-soft">Loading coaches…</p>}
+      {isPending && (
+        <p role="status" className="text-sm text-ink-soft">
+          Loading coaches…
+        </p>
+      )}
       {error && <FormAlert message={`Coaches could not load: ${error.message}`} />}
       {data && data.length === 0 && <p className="text-sm">No member has the coach role yet.</p>}
       {data && data.length > 0 && (
@@ -100,7 +113,9 @@ function CoachPicker({ squad, onSaved }: { squad: Squad; onSaved: (message: stri
         </ul>
       )}
       <FormAlert message={failure} />
-      <button type="button" className="btn-quiet" disabled={update.isPending || !data} onClick={save}>Save coaches</button>
+      <button type="button" className="btn-quiet" disabled={update.isPending || !data} onClick={save}>
+        Save coaches
+      </button>
     </fieldset>
   );
 }
@@ -130,15 +145,23 @@ function ArchiveSquad({ squad, onSaved }: { squad: Squad; onSaved: (message: str
       </p>
       <FormAlert message={failure} />
       {squad.archived ? (
-        <button type="button" className="btn-quiet" onClick={toggle}>Restore squad</button>
+        <button type="button" className="btn-quiet" onClick={toggle}>
+          Restore squad
+        </button>
       ) : confirming ? (
         <div className="flex items-center gap-2">
           <span className="text-sm">Archive {squad.name}?</span>
-          <button type="button" className="btn-quiet" onClick={toggle}>Archive</button>
-          <button type="button" className="btn-quiet" onClick={() => setConfirming(false)}>Cancel</button>
+          <button type="button" className="btn-quiet" onClick={toggle}>
+            Archive
+          </button>
+          <button type="button" className="btn-quiet" onClick={() => setConfirming(false)}>
+            Cancel
+          </button>
         </div>
       ) : (
-        <button type="button" className="btn-quiet" onClick={() => setConfirming(true)}>Archive squad…</button>
+        <button type="button" className="btn-quiet" onClick={() => setConfirming(true)}>
+          Archive squad…
+        </button>
       )}
     </div>
   );

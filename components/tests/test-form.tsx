@@ -4,17 +4,29 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
-import { numberOrNull, numberRequired } from "@/lib/decimal";
-import { Field, FieldError, SubmitRow, applyServerErrors } from "@/components/form-bits";
+import { applyServerErrors, Field, FieldError, SubmitRow } from "@/components/form-bits";
 import { useCreateTest, useUpdateTest } from "@/hooks/use-writes";
 import type { TestItem } from "@/lib/client/queries";
-import { testCreateSchema, type TestCreateInput, type TestUpdateInput } from "@/lib/validation/tests";
+import { numberOrNull, numberRequired } from "@/lib/decimal";
+import { type TestCreateInput, type TestUpdateInput, testCreateSchema } from "@/lib/validation/tests";
 
 type FormInput = z.input<typeof testCreateSchema>;
 
 const FIELDS = [
-  "name", "unit", "decimals", "direction", "trialRule", "trialsPerSession", "swcMethod", "swcValue",
-  "cvPercent", "typicalError", "typicalErrorDf", "typicalErrorSource", "plausibleMin", "plausibleMax",
+  "name",
+  "unit",
+  "decimals",
+  "direction",
+  "trialRule",
+  "trialsPerSession",
+  "swcMethod",
+  "swcValue",
+  "cvPercent",
+  "typicalError",
+  "typicalErrorDf",
+  "typicalErrorSource",
+  "plausibleMin",
+  "plausibleMax",
 ] as const;
 
 const numberText = (value: number | null | undefined) => (value === null || value === undefined ? "" : String(value));
@@ -59,7 +71,10 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
     try {
       onDone(
         test
-          ? await update.mutateAsync({ testId: test.id, input: { ...values, version: test.version } satisfies TestUpdateInput })
+          ? await update.mutateAsync({
+              testId: test.id,
+              input: { ...values, version: test.version } satisfies TestUpdateInput,
+            })
           : await create.mutateAsync(values),
       );
     } catch (error) {
@@ -99,7 +114,8 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
         <legend className="label">Direction</legend>
         <div className="flex flex-wrap gap-4 text-sm">
           <label className="flex items-center gap-2">
-            <input type="radio" value="higher" {...register("direction")} /> ↑ Higher is better (jumps, distances, loads)
+            <input type="radio" value="higher" {...register("direction")} /> ↑ Higher is better (jumps, distances,
+            loads)
           </label>
           <label className="flex items-center gap-2">
             <input type="radio" value="lower" {...register("direction")} /> ↓ Lower is better (sprint times)
@@ -116,7 +132,12 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
           </select>
         </Field>
         <Field id="test-trialsPerSession" label="Trials per session" error={err("trialsPerSession")}>
-          <input className="field num" inputMode="numeric" {...field("trialsPerSession")} {...register("trialsPerSession", num)} />
+          <input
+            className="field num"
+            inputMode="numeric"
+            {...field("trialsPerSession")}
+            {...register("trialsPerSession", num)}
+          />
         </Field>
       </div>
 
@@ -132,35 +153,71 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
           <input className="field num" inputMode="decimal" {...field("swcValue")} {...register("swcValue", num)} />
         </Field>
         <Field id="test-cvPercent" label={`CV% ${method === "cv-factor" ? "" : "(optional)"}`} error={err("cvPercent")}>
-          <input className="field num" inputMode="decimal" {...field("cvPercent")} {...register("cvPercent", optionalNum)} />
+          <input
+            className="field num"
+            inputMode="decimal"
+            {...field("cvPercent")}
+            {...register("cvPercent", optionalNum)}
+          />
         </Field>
       </div>
 
       <div className="grid gap-4 sm:grid-cols-[1fr_1fr_2fr]">
         <Field id="test-typicalError" label={`Typical error${inUnit}`} error={err("typicalError")}>
-          <input className="field num" inputMode="decimal" {...field("typicalError")} {...register("typicalError", optionalNum)} />
+          <input
+            className="field num"
+            inputMode="decimal"
+            {...field("typicalError")}
+            {...register("typicalError", optionalNum)}
+          />
         </Field>
         <Field id="test-typicalErrorDf" label="Its df" error={err("typicalErrorDf")}>
-          <input className="field num" inputMode="numeric" {...field("typicalErrorDf")} {...register("typicalErrorDf", optionalNum)} />
+          <input
+            className="field num"
+            inputMode="numeric"
+            {...field("typicalErrorDf")}
+            {...register("typicalErrorDf", optionalNum)}
+          />
         </Field>
         <Field id="test-typicalErrorSource" label="Source of the typical error" error={err("typicalErrorSource")}>
-          <input className="field" placeholder="e.g. club test–retest, August" {...field("typicalErrorSource")} {...register("typicalErrorSource")} />
+          <input
+            className="field"
+            placeholder="e.g. club test–retest, August"
+            {...field("typicalErrorSource")}
+            {...register("typicalErrorSource")}
+          />
         </Field>
       </div>
 
       <div className="grid gap-4 sm:grid-cols-2">
         <Field id="test-plausibleMin" label={`Lowest plausible score${inUnit}`} error={err("plausibleMin")}>
-          <input className="field num" inputMode="decimal" {...field("plausibleMin")} {...register("plausibleMin", optionalNum)} />
+          <input
+            className="field num"
+            inputMode="decimal"
+            {...field("plausibleMin")}
+            {...register("plausibleMin", optionalNum)}
+          />
         </Field>
         <Field id="test-plausibleMax" label={`Highest plausible score${inUnit}`} error={err("plausibleMax")}>
-          <input className="field num" inputMode="decimal" {...field("plausibleMax")} {...register("plausibleMax", optionalNum)} />
+          <input
+            className="field num"
+            inputMode="decimal"
+            {...field("plausibleMax")}
+            {...register("plausibleMax", optionalNum)}
+          />
         </Field>
       </div>
       <p className="text-xs text-ink-faint">
-        Scores outside the plausible range are still accepted on the Session sheet, but they are marked for a second look.
+        Scores outside the plausible range are still accepted on the Session sheet, but they are marked for a second
+        look.
       </p>
 
-      <SubmitRow failure={failure} submitting={isSubmitting} label={test ? "Save changes" : "Add test"} busyLabel="Saving…" />
+      <SubmitRow
+        failure={failure}
+        submitting={isSubmitting}
+        label={test ? "Save changes" : "Add test"}
+        busyLabel="Saving…"
+      />
     </form>
   );
 }

@@ -1,14 +1,14 @@
 "use client";
 
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
-import { TableCard, type Column } from "@/components/table-card";
-import { keepPreviousData, useQuery } from "@tanstack/react-query";
+import { type Column, TableCard } from "@/components/table-card";
 import { type TestItem, testQueries } from "@/lib/client/queries";
+import { directionWords, rangeWords, swcWords, typicalErrorWords } from "@/lib/words/tests";
 import { TestForm } from "./test-form";
 import { TestRowActions } from "./test-row-actions";
-import { directionWords, rangeWords, swcWords, typicalErrorWords } from "@/lib/words/tests";
 
 const COLUMNS: Column[] = [
   { label: "Test" },
@@ -37,7 +37,9 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
     <section aria-labelledby="tests-heading" className="space-y-4">
       <div className="flex flex-wrap items-baseline justify-between gap-3">
         <div>
-          <h1 id="tests-heading" className="text-2xl font-bold">Test library</h1>
+          <h1 id="tests-heading" className="text-2xl font-bold">
+            Test library
+          </h1>
           <p className="text-sm text-ink-soft">
             Each test knows its unit, which direction is better, how trials are reduced and how noisy it is.
             {!canEdit && " Your sport scientist keeps this library; you can read it."}
@@ -74,15 +76,24 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
             const te = typicalErrorWords(test);
             const range = rangeWords(test);
             return (
-              <tr key={test.id} className={`border-b border-line align-top last:border-0 ${test.archived ? "bg-paper text-ink-faint" : ""}`}>
+              <tr
+                key={test.id}
+                className={`border-b border-line align-top last:border-0 ${test.archived ? "bg-paper text-ink-faint" : ""}`}
+              >
                 <td className="px-3 py-2.5">
                   <span className="font-semibold">{test.name}</span>
-                  {test.archived && <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>}
-                  <div className="text-xs text-ink-faint">{test.decimals} decimal{test.decimals === 1 ? "" : "s"}</div>
+                  {test.archived && (
+                    <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>
+                  )}
+                  <div className="text-xs text-ink-faint">
+                    {test.decimals} decimal{test.decimals === 1 ? "" : "s"}
+                  </div>
                 </td>
                 <td className="px-3 py-2.5">{test.unit}</td>
                 <td className="whitespace-nowrap px-3 py-2.5">
-                  <span aria-hidden className="mr-1 font-bold">{dir.arrow}</span>
+                  <span aria-hidden className="mr-1 font-bold">
+                    {dir.arrow}
+                  </span>
                   {dir.words}
                 </td>
                 <td className="whitespace-nowrap px-3 py-2.5">
@@ -91,9 +102,13 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
                 <td className="whitespace-nowrap px-3 py-2.5">{swcWords(test)}</td>
                 <td className="min-w-40 px-3 py-2.5">
                   {te ? <span className="num">{te}</span> : <span className="text-ink-faint">Not set</span>}
-                  {test.typicalErrorSource && <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>}
+                  {test.typicalErrorSource && (
+                    <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>
+                  )}
                 </td>
-                <td className="num whitespace-nowrap px-3 py-2.5">{range ?? <span className="text-ink-faint">Any</span>}</td>
+                <td className="num whitespace-nowrap px-3 py-2.5">
+                  {range ?? <span className="text-ink-faint">Any</span>}
+                </td>
                 <td className="num px-3 py-2.5 text-right">{test.resultCount}</td>
                 {canEdit && (
                   <td className="px-3 py-2.5">
@@ -113,7 +128,11 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
         onClose={() => setEditing(null)}
       >
         {editing !== null && (
-          <TestForm key={editing === "new" ? "new" : editing.id} test={editing === "new" ? null : editing} onDone={saved} />
+          <TestForm
+            key={editing === "new" ? "new" : editing.id}
+            test={editing === "new" ? null : editing}
+            onDone={saved}
+          />
         )}
       </Dialog>
     </section>

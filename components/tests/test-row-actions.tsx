@@ -18,7 +18,10 @@ export function TestRowActions({
   const update = useUpdateTest();
   const remove = useDeleteTest();
   const busy = update.isPending || remove.isPending;
-  const settled = { onError: (error: Error) => onNotice(`${test.name}: ${error.message}`), onSettled: () => setConfirmDelete(false) };
+  const settled = {
+    onError: (error: Error) => onNotice(`${test.name}: ${error.message}`),
+    onSettled: () => setConfirmDelete(false),
+  };
 
   const setArchived = (archived: boolean) =>
     update.mutate(
@@ -27,7 +30,9 @@ export function TestRowActions({
         ...settled,
         onSuccess: () =>
           onNotice(
-            archived ? `${test.name} was archived. Its results stay; it is no longer offered for new sessions.` : `${test.name} was restored.`,
+            archived
+              ? `${test.name} was archived. Its results stay; it is no longer offered for new sessions.`
+              : `${test.name} was restored.`,
           ),
       },
     );
@@ -36,21 +41,35 @@ export function TestRowActions({
     remove.mutate(test.id, {
       ...settled,
       onSuccess: (answer) =>
-        onNotice("archived" in answer ? `${test.name} has results, so it was archived instead of deleted.` : `${test.name} was deleted.`),
+        onNotice(
+          "archived" in answer
+            ? `${test.name} has results, so it was archived instead of deleted.`
+            : `${test.name} was deleted.`,
+        ),
     });
 
   if (confirmDelete) {
     return (
       <div className="flex items-center justify-end gap-2 whitespace-nowrap">
         <span className="text-xs">Delete for good?</span>
-        <button type="button" className="btn-quiet px-2 py-1 text-xs" disabled={busy} onClick={deleteTest}>Delete</button>
-        <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setConfirmDelete(false)}>Keep</button>
+        <button type="button" className="btn-quiet px-2 py-1 text-xs" disabled={busy} onClick={deleteTest}>
+          Delete
+        </button>
+        <button type="button" className="btn-quiet px-2 py-1 text-xs" onClick={() => setConfirmDelete(false)}>
+          Keep
+        </button>
       </div>
     );
   }
   return (
     <div className="flex justify-end gap-1.5 whitespace-nowrap">
-      <button type="button" className="btn-quiet px-2 py-1 text-xs" disabled={busy} onClick={onEdit} aria-label={`Edit ${test.name}`}>
+      <button
+        type="button"
+        className="btn-quiet px-2 py-1 text-xs"
+        disabled={busy}
+        onClick={onEdit}
+        aria-label={`Edit ${test.name}`}
+      >
         Edit
       </button>
       <button
@@ -63,7 +82,13 @@ export function TestRowActions({
         {test.archived ? "Restore" : "Archive"}
       </button>
       {test.resultCount === 0 && (
-        <button type="button" className="btn-quiet px-2 py-1 text-xs" disabled={busy} onClick={() => setConfirmDelete(true)} aria-label={`Delete ${test.name}`}>
+        <button
+          type="button"
+          className="btn-quiet px-2 py-1 text-xs"
+          disabled={busy}
+          onClick={() => setConfirmDelete(true)}
+          aria-label={`Delete ${test.name}`}
+        >
           Delete
         </button>
       )}

@@ -16,7 +16,14 @@ export type CellState =
   | { status: "conflict"; wanted: Wanted; current: ResultRow | null };
 
 type ResultConflict = { athleteId: number; testId: number; current: ResultRow | null };
-type SaveVars = { key: string; athleteId: number; testId: number; wanted: Wanted; version: number | null; note: string | null };
+type SaveVars = {
+  key: string;
+  athleteId: number;
+  testId: number;
+  wanted: Wanted;
+  version: number | null;
+  note: string | null;
+};
 
 /** A write that was never stored has no version; provisional (optimistic) rows use negative ids. */
 const versionOf = (row: ResultRow | undefined) => (row && row.id > 0 ? row.version : null);
@@ -49,7 +56,14 @@ export function useResultSaver(sessionId: number, cache: SheetCache) {
   const mutation = useMutation({
     mutationFn: (v: SaveVars) =>
       saveResultsRequest(sessionId, [
-        { athleteId: v.athleteId, testId: v.testId, trials: v.wanted.trials, flag: v.wanted.flag, note: v.note, version: v.version },
+        {
+          athleteId: v.athleteId,
+          testId: v.testId,
+          trials: v.wanted.trials,
+          flag: v.wanted.flag,
+          note: v.note,
+          version: v.version,
+        },
       ]),
     onMutate: async (v) => {
       await cache.cancelReads();
@@ -78,7 +92,8 @@ export function useResultSaver(sessionId: number, cache: SheetCache) {
     onError: (error, v, context) => {
       const wanted = queued.current.get(v.key) ?? v.wanted;
       queued.current.delete(v.key);
-      const hit = error instanceof ApiClientError && error.status === 409 ? conflictOf(error, v.athleteId, v.testId) : undefined;
+      const hit =
+        error instanceof ApiClientError && error.status === 409 ? conflictOf(error, v.athleteId, v.testId) : undefined;
       if (hit) {
         // The sheet now holds their version; ours waits in the cell until the person chooses.
         cache.writeRow(v.athleteId, v.testId, hit.current);

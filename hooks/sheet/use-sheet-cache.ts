@@ -16,7 +16,8 @@ export function useSheetCache(sessionId: number) {
 
   const sheet = useCallback(() => client.getQueryData(queryKey), [client, queryKey]);
   const readRow = useCallback(
-    (athleteId: number, testId: number) => sheet()?.results.find((r) => r.athleteId === athleteId && r.testId === testId),
+    (athleteId: number, testId: number) =>
+      sheet()?.results.find((r) => r.athleteId === athleteId && r.testId === testId),
     [sheet],
   );
   const writeRow = useCallback(

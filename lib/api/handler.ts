@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
-import { ApiError, invalidInput, notFound, type FieldErrors } from "@/lib/errors";
+import { ApiError, type FieldErrors, invalidInput, notFound } from "@/lib/errors";
 import { canonicalId } from "@/lib/ids";
 import { runtimeSecurityHeaders, servedOverHttps, withHeaders } from "@/lib/security/headers";
 
@@ -14,8 +14,11 @@ function zodFieldErrors(error: ZodError): FieldErrors {
 }
 
 /** A body that cannot fail to build: the answer when even the error response could not be made. */
-const INTERNAL_BODY = JSON.stringify({ error: { code: "internal", message: "Something went wrong on our side. Nothing was changed." } });
-const internalError = () => new Response(INTERNAL_BODY, { status: 500, headers: { "content-type": "application/json" } });
+const INTERNAL_BODY = JSON.stringify({
+  error: { code: "internal", message: "Something went wrong on our side. Nothing was changed." },
+});
+const internalError = () =>
+  new Response(INTERNAL_BODY, { status: 500, headers: { "content-type": "application/json" } });
 
 /** Logs without letting the log itself fail (a throwing getter, a huge message) or flood the log. */
 function logSafely(label: string, error: unknown) {
@@ -34,7 +37,9 @@ function logSafely(label: string, error: unknown) {
 function buildErrorResponse(error: unknown): Response {
   if (error instanceof ApiError) return NextResponse.json(error.toBody(), { status: error.status });
   if (error instanceof ZodError) {
-    return NextResponse.json(invalidInput("Some fields need attention.", zodFieldErrors(error)).toBody(), { status: 422 });
+    return NextResponse.json(invalidInput("Some fields need attention.", zodFieldErrors(error)).toBody(), {
+      status: 422,
+    });
   }
   logSafely("Unhandled API error", error);
   return internalError();
@@ -70,7 +75,12 @@ function assertSameOrigin(request: Request) {
   const origin = request.headers.get("origin");
   if (!origin) return;
   // Behind a proxy the Host header may name the proxy's upstream, so the public URL counts too.
-  const ours = [request.headers.get("host"), request.headers.get("x-forwarded-host"), new URL(request.url).host, hostOf(process.env.NEXTAUTH_URL)];
+  const ours = [
+    request.headers.get("host"),
+    request.headers.get("x-forwarded-host"),
+    new URL(request.url).host,
+    hostOf(process.env.NEXTAUTH_URL),
+  ];
   const from = hostOf(origin);
   if (!from || !ours.includes(from)) throw new ApiError(403, "forbidden", "Changes must come from Changewise itself.");
 }
@@ -137,7 +147,11 @@ export async function readJson<T>(request: Request, schema: ZodType<T>): Promise
   if (!type.includes("application/json")) {
     throw new ApiError(415, "unsupported_media_type", "Send the body as JSON (Content-Type: application/json).");
   }
-  const bytes = await readCappedBytes(request, MAX_JSON_BYTES, "The request is larger than 2 MB. Send fewer results at once.");
+  const bytes = await readCappedBytes(
+    request,
+    MAX_JSON_BYTES,
+    "The request is larger than 2 MB. Send fewer results at once.",
+  );
   const text = new TextDecoder().decode(bytes);
   let body: unknown;
   try {

@@ -33,7 +33,10 @@ const patternOf = (route: string) =>
       .join("/")}/?$`,
   );
 
-const ROUTES = Object.entries(ROUTE_METHODS).map(([route, methods]) => ({ pattern: patternOf(route), methods: methods as readonly string[] }));
+const ROUTES = Object.entries(ROUTE_METHODS).map(([route, methods]) => ({
+  pattern: patternOf(route),
+  methods: methods as readonly string[],
+}));
 
 /**
  * What the route at this path answers, as Next.js serves it: HEAD wherever there is GET, and
@@ -72,6 +75,11 @@ export function methodRefusal(method: string, pathname: string, { serverAction =
   const status = allow ? 405 : 404;
   const message = allow ? "This address does not answer that method." : "There is no such API address.";
   return api
-    ? { status, allow, contentType: "application/json", body: JSON.stringify({ error: { code: allow ? "method_not_allowed" : "not_found", message } }) }
+    ? {
+        status,
+        allow,
+        contentType: "application/json",
+        body: JSON.stringify({ error: { code: allow ? "method_not_allowed" : "not_found", message } }),
+      }
     : { status, allow, contentType: "text/plain; charset=utf-8", body: allow ? "Method Not Allowed" : "Not Found" };
 }

@@ -11,7 +11,12 @@
  */
 import "server-only";
 import http from "node:http";
-import { API_CONTENT_SECURITY_POLICY, runtimeSecurityHeaders, servedOverHttps, STATIC_SECURITY_HEADERS } from "@/lib/security/headers";
+import {
+  API_CONTENT_SECURITY_POLICY,
+  runtimeSecurityHeaders,
+  STATIC_SECURITY_HEADERS,
+  servedOverHttps,
+} from "@/lib/security/headers";
 import { methodRefusal } from "./methods";
 
 const installed = Symbol.for("changewise.refuse-methods");
@@ -19,7 +24,9 @@ const installed = Symbol.for("changewise.refuse-methods");
 /** Answers the request if its method is refused; true when it did. */
 function refused(request: http.IncomingMessage, response: http.ServerResponse): boolean {
   const pathname = (request.url ?? "/").split("?")[0];
-  const refusal = methodRefusal(request.method ?? "", pathname, { serverAction: Boolean(request.headers["next-action"]) });
+  const refusal = methodRefusal(request.method ?? "", pathname, {
+    serverAction: Boolean(request.headers["next-action"]),
+  });
   if (!refusal) return false;
   response.writeHead(refusal.status, {
     ...STATIC_SECURITY_HEADERS,

@@ -2,7 +2,7 @@ import "server-only";
 import { findUserCredentials } from "@/lib/data/sign-in";
 import { signInSchema } from "@/lib/validation/auth";
 import { hashPassword, verifyPassword } from "./password";
-import { THROTTLED_MESSAGE, releaseSignIn, reserveSignIn } from "./throttle";
+import { releaseSignIn, reserveSignIn, THROTTLED_MESSAGE } from "./throttle";
 
 /** `sessionVersion` goes into the session token; see `sessionIsCurrent`. */
 export type SignedInUser = { id: string; email: string; name: string; sessionVersion: number };

@@ -3,15 +3,15 @@
  * `guard(...)`: signed in? role allowed? each named record inside the caller's reach?
  */
 import "server-only";
+import { type Actor, loadActor, sessionIsCurrent } from "@/lib/data/actors";
+import { athleteInReach, sessionInReach, squadInReach, testInReach } from "@/lib/data/scope";
 import type { Role } from "@/lib/domain";
 import { forbidden, notFound, unauthenticated } from "@/lib/errors";
-import { loadActor, sessionIsCurrent, type Actor } from "@/lib/data/actors";
-import { athleteInReach, sessionInReach, squadInReach, testInReach } from "@/lib/data/scope";
 import { currentSession } from "./session";
 
-export type { Actor };
 // The role lists `roles` takes come with the guard; they are defined beside the rules they follow.
 export { MANAGERS, OWNERS, STAFF } from "./permissions";
+export type { Actor };
 
 export type GuardOptions = {
   roles?: readonly Role[];

@@ -2,7 +2,7 @@ import "server-only";
 import { notFound, redirect } from "next/navigation";
 import { ApiError } from "@/lib/errors";
 import { canonicalId } from "@/lib/ids";
-import { guard, type GuardOptions } from "./guard";
+import { type GuardOptions, guard } from "./guard";
 
 /**
  * The guard for server components: signed-out visitors go to sign-in, and anything

@@ -19,7 +19,8 @@ export const isAthlete = (who: RoleHolder) => who.role === "athlete";
 export const isStaff = (who: RoleHolder) => !isAthlete(who);
 
 /** Coaches write into draft sessions only; a published session is corrected by a scientist or the owner. */
-export const canEditSession = (who: RoleHolder, status: SessionStatus) => isManager(who) || (isCoach(who) && status === "draft");
+export const canEditSession = (who: RoleHolder, status: SessionStatus) =>
+  isManager(who) || (isCoach(who) && status === "draft");
 
 /** Publishing (or withdrawing) a session's results to its athletes. */
 export const canPublish = isManager;

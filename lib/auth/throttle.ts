@@ -38,7 +38,9 @@ export type Reservation = { email: string; address: string; id: number };
 
 /** Counts this attempt before the password is checked; null when it is held. */
 export async function reserveSignIn(email: string, address: string, now = Date.now()): Promise<Reservation | null> {
-  const id = await reserveAttempt(email, address, { since: now - WINDOW_MS, at: now }, (counts) => mayTry(counts, address));
+  const id = await reserveAttempt(email, address, { since: now - WINDOW_MS, at: now }, (counts) =>
+    mayTry(counts, address),
+  );
   return id === null ? null : { email, address, id };
 }
 

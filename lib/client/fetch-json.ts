@@ -21,7 +21,11 @@ export function apiErrorFrom(status: number, body: unknown, fallback = `Request 
 export async function fetchJson<T>(url: string, init?: RequestInit): Promise<T> {
   const response = await fetch(url, {
     ...init,
-    headers: { Accept: "application/json", ...(init?.body && typeof init.body === "string" ? { "Content-Type": "application/json" } : {}), ...init?.headers },
+    headers: {
+      Accept: "application/json",
+      ...(init?.body && typeof init.body === "string" ? { "Content-Type": "application/json" } : {}),
+      ...init?.headers,
+    },
   });
   const body = await response.json().catch(() => null);
   if (!response.ok) throw apiErrorFrom(response.status, body);

@@ -6,12 +6,12 @@
  * invalidates a whole family with one prefix.
  */
 import { queryOptions } from "@tanstack/react-query";
-import type { listSessionAudit } from "@/lib/data/audit";
-import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
 import type { listAthleteResults } from "@/lib/data/athlete-results";
+import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
+import type { listSessionAudit } from "@/lib/data/audit";
+import type { getChangeReport } from "@/lib/data/reports";
 import type { getSessionSheet, listSessions } from "@/lib/data/sessions";
 import type { getSquad, listCoaches, listSquads } from "@/lib/data/squads";
-import type { getChangeReport } from "@/lib/data/reports";
 import type { listTests } from "@/lib/data/tests";
 import type { ChangeReportQuery } from "@/lib/validation/reports";
 import { fetchJson } from "./fetch-json";
@@ -34,7 +34,8 @@ export const squadQueries = {
   list: ({ archived = false } = {}) =>
     queryOptions({
       queryKey: [...queryKeys.squads, "list", { archived }] as const,
-      queryFn: () => fetchJson<{ squads: Loaded<typeof listSquads> }>(`/api/squads${archivedParam(archived)}`).then((r) => r.squads),
+      queryFn: () =>
+        fetchJson<{ squads: Loaded<typeof listSquads> }>(`/api/squads${archivedParam(archived)}`).then((r) => r.squads),
     }),
   detail: (squadId: number) =>
     queryOptions({
@@ -46,9 +47,9 @@ export const squadQueries = {
       // Under the squad, so any change to the squad refreshes its roster too.
       queryKey: [...queryKeys.squads, squadId, "athletes", { archived }] as const,
       queryFn: () =>
-        fetchJson<{ athletes: Loaded<typeof listSquadAthletes> }>(`/api/squads/${squadId}/athletes${archivedParam(archived)}`).then(
-          (r) => r.athletes,
-        ),
+        fetchJson<{ athletes: Loaded<typeof listSquadAthletes> }>(
+          `/api/squads/${squadId}/athletes${archivedParam(archived)}`,
+        ).then((r) => r.athletes),
     }),
 };
 
@@ -69,13 +70,16 @@ export const athleteQueries = {
   detail: (athleteId: number) =>
     queryOptions({
       queryKey: [...queryKeys.athletes, athleteId] as const,
-      queryFn: () => fetchJson<{ athlete: Loaded<typeof getAthlete> }>(`/api/athletes/${athleteId}`).then((r) => r.athlete),
+      queryFn: () =>
+        fetchJson<{ athlete: Loaded<typeof getAthlete> }>(`/api/athletes/${athleteId}`).then((r) => r.athlete),
     }),
   results: (athleteId: number) =>
     queryOptions({
       queryKey: [...queryKeys.athletes, athleteId, "results"] as const,
       queryFn: () =>
-        fetchJson<{ results: Loaded<typeof listAthleteResults> }>(`/api/athletes/${athleteId}/results`).then((r) => r.results),
+        fetchJson<{ results: Loaded<typeof listAthleteResults> }>(`/api/athletes/${athleteId}/results`).then(
+          (r) => r.results,
+        ),
     }),
 };
 
@@ -83,7 +87,8 @@ export const testQueries = {
   list: ({ archived = false } = {}) =>
     queryOptions({
       queryKey: [...queryKeys.tests, "list", { archived }] as const,
-      queryFn: () => fetchJson<{ tests: Loaded<typeof listTests> }>(`/api/tests${archivedParam(archived)}`).then((r) => r.tests),
+      queryFn: () =>
+        fetchJson<{ tests: Loaded<typeof listTests> }>(`/api/tests${archivedParam(archived)}`).then((r) => r.tests),
     }),
 };
 
@@ -92,9 +97,9 @@ export const sessionQueries = {
     queryOptions({
       queryKey: [...queryKeys.sessions, "list", { squadId }] as const,
       queryFn: () =>
-        fetchJson<{ sessions: Loaded<typeof listSessions> }>(squadId ? `/api/sessions?squadId=${squadId}` : "/api/sessions").then(
-          (r) => r.sessions,
-        ),
+        fetchJson<{ sessions: Loaded<typeof listSessions> }>(
+          squadId ? `/api/sessions?squadId=${squadId}` : "/api/sessions",
+        ).then((r) => r.sessions),
     }),
   sheet: (sessionId: number) =>
     queryOptions({
@@ -104,7 +109,10 @@ export const sessionQueries = {
   audit: (sessionId: number) =>
     queryOptions({
       queryKey: [...queryKeys.sessions, sessionId, "audit"] as const,
-      queryFn: () => fetchJson<{ events: Loaded<typeof listSessionAudit> }>(`/api/sessions/${sessionId}/audit`).then((r) => r.events),
+      queryFn: () =>
+        fetchJson<{ events: Loaded<typeof listSessionAudit> }>(`/api/sessions/${sessionId}/audit`).then(
+          (r) => r.events,
+        ),
     }),
 };
 

@@ -26,7 +26,15 @@ export function uploadImport<T>(
       if (event.lengthComputable) onProgress({ loaded: event.loaded, total: event.total, done: false });
     };
     xhr.upload.onload = () => onProgress({ loaded: file.size, total: file.size, done: true });
-    xhr.onerror = () => reject(new ApiClientError(0, "network", "The upload did not reach the server. Check the connection and try again.", null));
+    xhr.onerror = () =>
+      reject(
+        new ApiClientError(
+          0,
+          "network",
+          "The upload did not reach the server. Check the connection and try again.",
+          null,
+        ),
+      );
     xhr.onabort = () => reject(new ApiClientError(0, "aborted", "The upload was cancelled.", null));
     xhr.onload = () => {
       let body: unknown = null;
@@ -46,4 +54,8 @@ export function uploadImport<T>(
 }
 
 export const formatBytes = (bytes: number) =>
-  bytes < 1024 ? `${bytes} B` : bytes < 1024 * 1024 ? `${(bytes / 1024).toFixed(1)} kB` : `${(bytes / 1024 / 1024).toFixed(1)} MB`;
+  bytes < 1024
+    ? `${bytes} B`
+    : bytes < 1024 * 1024
+      ? `${(bytes / 1024).toFixed(1)} kB`
+      : `${(bytes / 1024 / 1024).toFixed(1)} MB`;

@@ -5,11 +5,16 @@
  */
 import type { addAthleteToSquad, updateAthlete } from "@/lib/data/athletes";
 import type { writeResults } from "@/lib/data/results";
-import type { undoLastChange } from "@/lib/data/undo";
 import type { createSession, updateSession } from "@/lib/data/sessions";
 import type { createSquad, updateSquad } from "@/lib/data/squads";
 import type { createTest, deleteOrArchiveTest, updateTest } from "@/lib/data/tests";
-import type { AthleteUpdateInput, SquadAthleteAddInput, SquadCreateInput, SquadUpdateInput } from "@/lib/validation/roster";
+import type { undoLastChange } from "@/lib/data/undo";
+import type {
+  AthleteUpdateInput,
+  SquadAthleteAddInput,
+  SquadCreateInput,
+  SquadUpdateInput,
+} from "@/lib/validation/roster";
 import type { ResultWriteInput, SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
 import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
 import { fetchJson } from "./fetch-json";
@@ -25,7 +30,9 @@ export const updateSquadRequest = (squadId: number, input: SquadUpdateInput) =>
   send<{ squad: Loaded<typeof updateSquad> }>(`/api/squads/${squadId}`, "PATCH", input).then((r) => r.squad);
 
 export const addAthleteRequest = (squadId: number, input: SquadAthleteAddInput) =>
-  send<{ athlete: Loaded<typeof addAthleteToSquad> }>(`/api/squads/${squadId}/athletes`, "POST", input).then((r) => r.athlete);
+  send<{ athlete: Loaded<typeof addAthleteToSquad> }>(`/api/squads/${squadId}/athletes`, "POST", input).then(
+    (r) => r.athlete,
+  );
 
 export const updateAthleteRequest = (athleteId: number, input: AthleteUpdateInput) =>
   send<{ athlete: Loaded<typeof updateAthlete> }>(`/api/athletes/${athleteId}`, "PATCH", input).then((r) => r.athlete);
@@ -36,7 +43,8 @@ export const createTestRequest = (input: TestCreateInput) =>
 export const updateTestRequest = (testId: number, input: TestUpdateInput) =>
   send<{ test: Loaded<typeof updateTest> }>(`/api/tests/${testId}`, "PATCH", input).then((r) => r.test);
 
-export const deleteTestRequest = (testId: number) => send<Loaded<typeof deleteOrArchiveTest>>(`/api/tests/${testId}`, "DELETE");
+export const deleteTestRequest = (testId: number) =>
+  send<Loaded<typeof deleteOrArchiveTest>>(`/api/tests/${testId}`, "DELETE");
 
 export const createSessionRequest = (input: SessionCreateInput) =>
   send<{ session: Loaded<typeof createSession> }>("/api/sessions", "POST", input).then((r) => r.session);
@@ -45,7 +53,9 @@ export const updateSessionRequest = (sessionId: number, input: SessionUpdateInpu
   send<{ session: Loaded<typeof updateSession> }>(`/api/sessions/${sessionId}`, "PATCH", input).then((r) => r.session);
 
 export const saveResultsRequest = (sessionId: number, results: ResultWriteInput[]) =>
-  send<{ results: Loaded<typeof writeResults> }>(`/api/sessions/${sessionId}/results`, "PUT", { results }).then((r) => r.results);
+  send<{ results: Loaded<typeof writeResults> }>(`/api/sessions/${sessionId}/results`, "PUT", { results }).then(
+    (r) => r.results,
+  );
 
 export const undoRequest = (sessionId: number) =>
   send<{ undone: Loaded<typeof undoLastChange> }>(`/api/sessions/${sessionId}/undo`, "POST").then((r) => r.undone);

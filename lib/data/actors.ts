@@ -3,7 +3,7 @@ import { and, asc, eq, sql } from "drizzle-orm";
 import { getDb, writeTransaction } from "@/db/client";
 import { athletes, memberships, organizations, users } from "@/db/schema";
 import { isAthlete } from "@/lib/auth/permissions";
-import { type Role } from "@/lib/domain";
+import type { Role } from "@/lib/domain";
 
 export type Actor = {
   userId: number;
@@ -73,7 +73,10 @@ export async function sessionIsCurrent({ userId, sessionVersion }: SessionClaims
  */
 export async function endAllSessions(userId: number): Promise<void> {
   await writeTransaction((tx) =>
-    tx.update(users).set({ sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId)),
+    tx
+      .update(users)
+      .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+      .where(eq(users.id, userId)),
   );
 }
 

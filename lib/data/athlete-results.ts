@@ -5,7 +5,6 @@ import { results, testingSessions, tests } from "@/db/schema";
 import type { Actor } from "./actors";
 import { sessionScope } from "./scope";
 
-
 /**
  * One athlete's results over time. The caller must already have the athlete in reach;
  * the session scope still applies, so an athlete sees only published sessions.
@@ -30,8 +29,6 @@ export async function listAthleteResults(actor: Actor, athleteId: number) {
     .from(results)
     .innerJoin(testingSessions, eq(testingSessions.id, results.sessionId))
     .innerJoin(tests, eq(tests.id, results.testId))
-    .where(
-      and(eq(results.athleteId, athleteId), eq(results.organizationId, actor.organizationId), sessionScope(actor)),
-    )
+    .where(and(eq(results.athleteId, athleteId), eq(results.organizationId, actor.organizationId), sessionScope(actor)))
     .orderBy(asc(testingSessions.date), asc(tests.name));
 }

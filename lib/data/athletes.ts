@@ -69,7 +69,11 @@ export async function addAthleteToSquad(actor: Actor, squadId: number, input: Sq
       }
       await tx.insert(squadAthletes).values({ squadId, athleteId }).onConflictDoNothing();
       const [row] = await tx.select(rosterColumns).from(athletes).where(eq(athletes.id, athleteId));
-      await recordAudit(tx, actor, { action: "roster.add", entity: { type: "athlete", id: athleteId }, after: { ...row, squadId } });
+      await recordAudit(tx, actor, {
+        action: "roster.add",
+        entity: { type: "athlete", id: athleteId },
+        after: { ...row, squadId },
+      });
       return row;
     });
   } catch (error) {
@@ -86,7 +90,10 @@ export async function updateAthlete(actor: Actor, athleteId: number, input: Athl
   const { squadIds, ...changes } = input;
   try {
     return await writeTransaction(async (tx) => {
-      const [before] = await tx.select(rosterColumns).from(athletes).where(and(eq(athletes.id, athleteId), athleteScope(actor)));
+      const [before] = await tx
+        .select(rosterColumns)
+        .from(athletes)
+        .where(and(eq(athletes.id, athleteId), athleteScope(actor)));
       if (!before) throw notFound("Athlete");
       if (Object.keys(changes).length > 0) await tx.update(athletes).set(changes).where(eq(athletes.id, athleteId));
       if (squadIds) {
@@ -96,13 +103,26 @@ export async function updateAthlete(actor: Actor, athleteId: number, input: Athl
           throw invalidInput("One of those squads is not yours to change.", { squadIds: "Unknown squad." });
         }
         const untouchable = reachable.length
-          ? and(eq(squadAthletes.athleteId, athleteId), inArray(squadAthletes.squadId, reachable), notInArray(squadAthletes.squadId, wanted.length ? wanted : [0]))
+          ? and(
+              eq(squadAthletes.athleteId, athleteId),
+              inArray(squadAthletes.squadId, reachable),
+              notInArray(squadAthletes.squadId, wanted.length ? wanted : [0]),
+            )
           : undefined;
         if (untouchable) await tx.delete(squadAthletes).where(untouchable);
-        if (wanted.length) await tx.insert(squadAthletes).values(wanted.map((squadId) => ({ squadId, athleteId }))).onConflictDoNothing();
+        if (wanted.length)
+          await tx
+            .insert(squadAthletes)
+            .values(wanted.map((squadId) => ({ squadId, athleteId })))
+            .onConflictDoNothing();
       }
       const [row] = await tx.select(rosterColumns).from(athletes).where(eq(athletes.id, athleteId));
-      await recordAudit(tx, actor, { action: "athlete.update", entity: { type: "athlete", id: athleteId }, before, after: { ...row, squadIds } });
+      await recordAudit(tx, actor, {
+        action: "athlete.update",
+        entity: { type: "athlete", id: athleteId },
+        before,
+        after: { ...row, squadIds },
+      });
       return row;
     });
   } catch (error) {
@@ -115,7 +135,10 @@ export async function updateAthlete(actor: Actor, athleteId: number, input: Athl
 export async function getAthlete(actor: Actor, athleteId: number) {
   const db = getDb();
   const [[row], squadRows] = await Promise.all([
-    db.select(rosterColumns).from(athletes).where(and(eq(athletes.id, athleteId), athleteScope(actor))),
+    db
+      .select(rosterColumns)
+      .from(athletes)
+      .where(and(eq(athletes.id, athleteId), athleteScope(actor))),
     // Scoped by the squad, so it reads nothing the caller could not reach on its own.
     db
       .select({ id: squadAthletes.squadId })

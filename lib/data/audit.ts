@@ -7,7 +7,13 @@ import "server-only";
 import { and, desc, eq, inArray, isNull } from "drizzle-orm";
 import { getDb, type Transaction as Tx } from "@/db/client";
 import { athletes, auditEvents, tests, users } from "@/db/schema";
-import { SHEET_AUDIT_ACTIONS, type AuditAction, type AuditEntityType, type ResultFlag, type SheetAuditAction } from "@/lib/domain";
+import {
+  type AuditAction,
+  type AuditEntityType,
+  type ResultFlag,
+  SHEET_AUDIT_ACTIONS,
+  type SheetAuditAction,
+} from "@/lib/domain";
 import type { Actor } from "./actors";
 
 /** A result as a sheet change stores it before and after, enough to show or restore it. */
@@ -58,7 +64,9 @@ export async function lastUndoableChange(tx: Tx, actor: Actor, sessionId: number
     )
     .orderBy(desc(auditEvents.id))
     .limit(1);
-  return event ? { id: event.id, before: event.before as ResultSnapshot | null, after: event.after as ResultSnapshot } : null;
+  return event
+    ? { id: event.id, before: event.before as ResultSnapshot | null, after: event.after as ResultSnapshot }
+    : null;
 }
 
 export async function markUndone(tx: Tx, eventId: number) {
@@ -86,21 +94,45 @@ export type AuditEvent = {
 export async function listSessionAudit(actor: Actor, sessionId: number, limit = 50): Promise<AuditEvent[]> {
   const db = getDb();
   const events = await db
-    .select({ id: auditEvents.id, at: auditEvents.createdAt, action: auditEvents.action, actorName: users.name, before: auditEvents.before, after: auditEvents.after, undoneAt: auditEvents.undoneAt })
+    .select({
+      id: auditEvents.id,
+      at: auditEvents.createdAt,
+      action: auditEvents.action,
+      actorName: users.name,
+      before: auditEvents.before,
+      after: auditEvents.after,
+      undoneAt: auditEvents.undoneAt,
+    })
     .from(auditEvents)
     .leftJoin(users, eq(users.id, auditEvents.actorUserId))
-    .where(and(eq(auditEvents.sessionId, sessionId), eq(auditEvents.organizationId, actor.organizationId), inArray(auditEvents.action, SHEET_AUDIT_ACTIONS)))
+    .where(
+      and(
+        eq(auditEvents.sessionId, sessionId),
+        eq(auditEvents.organizationId, actor.organizationId),
+        inArray(auditEvents.action, SHEET_AUDIT_ACTIONS),
+      ),
+    )
     .orderBy(desc(auditEvents.id))
     .limit(limit);
   const ref = (e: (typeof events)[number]) => ((e.after ?? e.before) as Partial<ResultSnapshot> | null) ?? null;
-  const idsOf = (key: "athleteId" | "testId") => [...new Set(events.map((e) => ref(e)?.[key]).filter((v): v is number => typeof v === "number"))];
+  const idsOf = (key: "athleteId" | "testId") => [
+    ...new Set(events.map((e) => ref(e)?.[key]).filter((v): v is number => typeof v === "number")),
+  ];
   const athleteIds = idsOf("athleteId");
   const testIds = idsOf("testId");
   const [athleteRows, testRows] = await Promise.all([
     athleteIds.length
-      ? db.select({ id: athletes.id, name: athletes.name }).from(athletes).where(and(inArray(athletes.id, athleteIds), eq(athletes.organizationId, actor.organizationId)))
+      ? db
+          .select({ id: athletes.id, name: athletes.name })
+          .from(athletes)
+          .where(and(inArray(athletes.id, athleteIds), eq(athletes.organizationId, actor.organizationId)))
       : [],
-    testIds.length ? db.select({ id: tests.id, name: tests.name }).from(tests).where(and(inArray(tests.id, testIds), eq(tests.organizationId, actor.organizationId))) : [],
+    testIds.length
+      ? db
+          .select({ id: tests.id, name: tests.name })
+          .from(tests)
+          .where(and(inArray(tests.id, testIds), eq(tests.organizationId, actor.organizationId)))
+      : [],
   ]);
   const athleteNames = new Map(athleteRows.map((a) => [a.id, a.name]));
   const testNames = new Map(testRows.map((t) => [t.id, t.name]));
@@ -115,8 +147,8 @@ export async function listSessionAudit(actor: Actor, sessionId: number, limit = 
       at: e.at.getTime(),
       action: e.action as SheetAuditAction, // the WHERE clause above admits no other
       actorName: e.actorName,
-      athleteName: r?.athleteId ? athleteNames.get(r.athleteId) ?? null : null,
-      testName: r?.testId ? testNames.get(r.testId) ?? null : null,
+      athleteName: r?.athleteId ? (athleteNames.get(r.athleteId) ?? null) : null,
+      testName: r?.testId ? (testNames.get(r.testId) ?? null) : null,
       before: view(e.before),
       after: view(e.after),
       details: e.action === "results.import" ? (e.after as AuditEvent["details"]) : undefined,

@@ -8,16 +8,22 @@ import { and, asc, eq, sql } from "drizzle-orm";
 import { getDb, type Reader, type Transaction as Tx, writeTransaction } from "@/db/client";
 import { athletes, results, squads, testingSessions, tests, uploads } from "@/db/schema";
 import { canEditSession } from "@/lib/auth/permissions";
-import { type Phase, type SessionStatus } from "@/lib/domain";
+import type { Phase, SessionStatus } from "@/lib/domain";
 import { ApiError, forbidden } from "@/lib/errors";
-import { analyseCsvInSlices, type Analysis } from "@/lib/import/analyse";
+import { type Analysis, analyseCsvInSlices } from "@/lib/import/analyse";
 import { runInSlices } from "@/lib/import/cooperative";
-import { ImportFileError, decodeSteps } from "@/lib/import/decode";
-import { MAX_IMPORT_BYTES, MAX_LISTED_REPLACEMENTS, MAX_SHOWN_CHARS, PREVIEW_ROWS, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
-import { planWrites, resultKey, type ResultWrite } from "@/lib/import/merge";
-import { type ImportOptions, mappingRequestOf } from "@/lib/validation/import";
+import { decodeSteps, ImportFileError } from "@/lib/import/decode";
+import {
+  MAX_IMPORT_BYTES,
+  MAX_LISTED_REPLACEMENTS,
+  MAX_SHOWN_CHARS,
+  PREVIEW_ROWS,
+  TOO_LARGE_MESSAGE,
+} from "@/lib/import/limits";
+import { planWrites, type ResultWrite, resultKey } from "@/lib/import/merge";
 import { describeReplacements, type ImportCommitted, type ImportPreview } from "@/lib/import/summary";
 import type { ExistingResult, ImportContext } from "@/lib/import/types";
+import { type ImportOptions, mappingRequestOf } from "@/lib/validation/import";
 import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
 import { findSessionInScope, onSessionSheet } from "./scope";
@@ -67,12 +73,27 @@ export async function loadImportContext(session: ImportSession, db: Reader = get
   return { squadName: session.squadName, tests: battery, otherTestNames: others.map((t) => t.name), athletes: roster };
 }
 
-async function loadExisting(db: Reader, session: ImportSession): Promise<Map<string, ExistingResult & { value: number | null }>> {
+async function loadExisting(
+  db: Reader,
+  session: ImportSession,
+): Promise<Map<string, ExistingResult & { value: number | null }>> {
   const rows = await db
-    .select({ athleteId: results.athleteId, testId: results.testId, trials: results.trials, value: results.value, flag: results.flag, version: results.version })
+    .select({
+      athleteId: results.athleteId,
+      testId: results.testId,
+      trials: results.trials,
+      value: results.value,
+      flag: results.flag,
+      version: results.version,
+    })
     .from(results)
     .where(and(eq(results.sessionId, session.id), eq(results.organizationId, session.organizationId)));
-  return new Map(rows.map((r) => [resultKey(r.athleteId, r.testId), { trials: r.trials ?? [], value: r.value, flag: r.flag, version: r.version }]));
+  return new Map(
+    rows.map((r) => [
+      resultKey(r.athleteId, r.testId),
+      { trials: r.trials ?? [], value: r.value, flag: r.flag, version: r.version },
+    ]),
+  );
 }
 
 async function decode(bytes: Uint8Array): Promise<string> {
@@ -90,9 +111,15 @@ const clip = (cell: string) => (cell.length > MAX_SHOWN_CHARS ? `${cell.slice(0,
 const testsMap = (context: ImportContext) => new Map(context.tests.map((t) => [t.id, t]));
 
 /** Checks a file (preview) or checks and writes it (commit). */
-export async function runImport(actor: Actor, sessionId: number, file: ImportFile, options: ImportOptions): Promise<ImportPreview | ImportCommitted> {
+export async function runImport(
+  actor: Actor,
+  sessionId: number,
+  file: ImportFile,
+  options: ImportOptions,
+): Promise<ImportPreview | ImportCommitted> {
   const session = await getImportSession(actor, sessionId);
-  if (!session.canImport) throw forbidden("This session is published; a sport scientist or the owner can import into it.");
+  if (!session.canImport)
+    throw forbidden("This session is published; a sport scientist or the owner can import into it.");
   const text = await decode(file.bytes);
   const context = await loadImportContext(session);
   const analysis = await analyseCsvInSlices(text, mappingRequestOf(options), context);
@@ -105,18 +132,36 @@ export async function runImport(actor: Actor, sessionId: number, file: ImportFil
       422,
       "invalid_input",
       `${plan.errorCount} ${plan.errorCount === 1 ? "problem" : "problems"} in the file${listed}. Nothing was imported.`,
-      { rows: plan.errors, details: { errorCount: plan.errorCount, unknownAthletes: plan.unknownAthletes, unknownAthleteCount: plan.unknownAthleteCount, unknownTests: plan.unknownTests } },
+      {
+        rows: plan.errors,
+        details: {
+          errorCount: plan.errorCount,
+          unknownAthletes: plan.unknownAthletes,
+          unknownAthleteCount: plan.unknownAthleteCount,
+          unknownTests: plan.unknownTests,
+        },
+      },
     );
   }
   if (plan.valueCount === 0) {
-    throw new ApiError(422, "invalid_input", "The file holds no scores: every score cell is empty. Nothing was imported.", {
-      rows: [{ row: table.headerRow + 1, message: "No scores below the header." }],
-    });
+    throw new ApiError(
+      422,
+      "invalid_input",
+      "The file holds no scores: every score cell is empty. Nothing was imported.",
+      {
+        rows: [{ row: table.headerRow + 1, message: "No scores below the header." }],
+      },
+    );
   }
   return commitImport(actor, session, context, analysis, file, options.replace);
 }
 
-async function preview(session: ImportSession, context: ImportContext, analysis: Analysis, file: ImportFile): Promise<ImportPreview> {
+async function preview(
+  session: ImportSession,
+  context: ImportContext,
+  analysis: Analysis,
+  file: ImportFile,
+): Promise<ImportPreview> {
   const { table, resolved, plan } = analysis;
   const existing = await loadExisting(getDb(), session);
   const writes = planWrites(plan.groups, existing, testsMap(context), plan.columnOf);

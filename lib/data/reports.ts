@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq, inArray, or } from "drizzle-orm";
 import { getDb } from "@/db/client";
-import { athletes, results, sessionTests, squadAthletes, testingSessions, tests, squads } from "@/db/schema";
+import { athletes, results, sessionTests, squadAthletes, squads, testingSessions, tests } from "@/db/schema";
 import { invalidInput, notFound } from "@/lib/errors";
 import { buildChangeReport, type ReportRow } from "@/lib/reports/change-report";
 import { StatsInputError } from "@/lib/stats";
@@ -46,27 +46,46 @@ async function assertInBattery(sessionIds: number[], testId: number) {
     .select({ sessionId: sessionTests.sessionId })
     .from(sessionTests)
     .where(and(inArray(sessionTests.sessionId, sessionIds), eq(sessionTests.testId, testId)));
-  if (rows.length !== sessionIds.length) throw invalidInput("That test is not in the battery of both sessions.", { testId: "Not in both sessions." });
+  if (rows.length !== sessionIds.length)
+    throw invalidInput("That test is not in the battery of both sessions.", { testId: "Not in both sessions." });
 }
 
 /**
  * Scores of the test in both sessions, for the squad's current athletes and anyone who has a
  * score in either session (history stays with the session it was recorded in).
  */
-async function loadRows(actor: Actor, squadId: number, fromId: number, toId: number, testId: number): Promise<ReportRow[]> {
+async function loadRows(
+  actor: Actor,
+  squadId: number,
+  fromId: number,
+  toId: number,
+  testId: number,
+): Promise<ReportRow[]> {
   const db = getDb();
   const scored = await db
     .select({ sessionId: results.sessionId, athleteId: results.athleteId, value: results.value, flag: results.flag })
     .from(results)
-    .where(and(eq(results.organizationId, actor.organizationId), eq(results.testId, testId), inArray(results.sessionId, [fromId, toId])));
-  const members = db.select({ id: squadAthletes.athleteId }).from(squadAthletes).where(eq(squadAthletes.squadId, squadId));
+    .where(
+      and(
+        eq(results.organizationId, actor.organizationId),
+        eq(results.testId, testId),
+        inArray(results.sessionId, [fromId, toId]),
+      ),
+    );
+  const members = db
+    .select({ id: squadAthletes.athleteId })
+    .from(squadAthletes)
+    .where(eq(squadAthletes.squadId, squadId));
   const people = await db
     .select({ id: athletes.id, name: athletes.name })
     .from(athletes)
     .where(
       and(
         eq(athletes.organizationId, actor.organizationId),
-        or(and(inArray(athletes.id, members), eq(athletes.archived, false)), inArray(athletes.id, [...new Set(scored.map((s) => s.athleteId))])),
+        or(
+          and(inArray(athletes.id, members), eq(athletes.archived, false)),
+          inArray(athletes.id, [...new Set(scored.map((s) => s.athleteId))]),
+        ),
       ),
     )
     .orderBy(asc(athletes.name));
@@ -85,10 +104,12 @@ export async function getChangeReport(actor: Actor, query: ChangeReportQuery) {
     findSessionInScope(db, actor, query.toSessionId, sessionFields),
     loadTest(actor, query.testId),
   ]);
-  if (from.squadId !== to.squadId) throw invalidInput("The two sessions belong to different squads.", { toSessionId: "Another squad's session." });
+  if (from.squadId !== to.squadId)
+    throw invalidInput("The two sessions belong to different squads.", { toSessionId: "Another squad's session." });
   await assertInBattery([from.id, to.id], test.id);
   const rows = await loadRows(actor, from.squadId, from.id, to.id, test.id);
-  const swc = query.swcMethod && query.swcValue !== undefined ? { method: query.swcMethod, value: query.swcValue } : undefined;
+  const swc =
+    query.swcMethod && query.swcValue !== undefined ? { method: query.swcMethod, value: query.swcValue } : undefined;
   try {
     const report = buildChangeReport({ test, rows, confidence: query.confidence, swc });
     // The test's own SWC method travels in `settings`, with the one this report used.

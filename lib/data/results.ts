@@ -1,7 +1,7 @@
 /** Results of a session: the rows the Session sheet reads, and its batch saves. */
 import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
-import { writeTransaction, type Reader, type Transaction as Tx } from "@/db/client";
+import { type Reader, type Transaction as Tx, writeTransaction } from "@/db/client";
 import { athletes, results, sessionTests, testingSessions, tests, users } from "@/db/schema";
 import { canEditSession } from "@/lib/auth/permissions";
 import type { ResultFlag } from "@/lib/domain";
@@ -9,7 +9,7 @@ import { ApiError, conflict, forbidden, invalidInput, type RowError } from "@/li
 import { reduceTrials, trimTrials } from "@/lib/trials";
 import type { ResultWriteInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
-import { recordAudit, type ResultSnapshot } from "./audit";
+import { type ResultSnapshot, recordAudit } from "./audit";
 import { findSessionInScope, onSessionSheet } from "./scope";
 
 export type ResultRow = {
@@ -28,7 +28,12 @@ export type ResultRow = {
 const key = (athleteId: number, testId: number) => `${athleteId}:${testId}`;
 
 /** A session's results (or some athletes' of them); the caller has checked the session is in reach. */
-export async function listResultRows(reader: Reader, actor: Actor, sessionId: number, athleteIds?: number[]): Promise<ResultRow[]> {
+export async function listResultRows(
+  reader: Reader,
+  actor: Actor,
+  sessionId: number,
+  athleteIds?: number[],
+): Promise<ResultRow[]> {
   const inSession = and(eq(results.sessionId, sessionId), eq(results.organizationId, actor.organizationId));
   const where = athleteIds ? and(inSession, inArray(results.athleteId, athleteIds)) : inSession;
   const rows = await reader
@@ -52,41 +57,72 @@ export async function listResultRows(reader: Reader, actor: Actor, sessionId: nu
 
 /** The session, if the caller reaches it and may change its results. */
 export async function loadWritableSession(tx: Tx, actor: Actor, sessionId: number) {
-  const session = await findSessionInScope(tx, actor, sessionId, { id: testingSessions.id, status: testingSessions.status, squadId: testingSessions.squadId });
+  const session = await findSessionInScope(tx, actor, sessionId, {
+    id: testingSessions.id,
+    status: testingSessions.status,
+    squadId: testingSessions.squadId,
+  });
   if (!canEditSession(actor, session.status)) {
     throw forbidden("This session is published; ask a sport scientist to correct a result.");
   }
   return session;
 }
 
-async function validateWrites(tx: Tx, organizationId: number, session: { id: number; squadId: number }, inputs: ResultWriteInput[]) {
+async function validateWrites(
+  tx: Tx,
+  organizationId: number,
+  session: { id: number; squadId: number },
+  inputs: ResultWriteInput[],
+) {
   const battery = await tx
-    .select({ id: tests.id, name: tests.name, trialRule: tests.trialRule, direction: tests.direction, trialsPerSession: tests.trialsPerSession })
+    .select({
+      id: tests.id,
+      name: tests.name,
+      trialRule: tests.trialRule,
+      direction: tests.direction,
+      trialsPerSession: tests.trialsPerSession,
+    })
     .from(sessionTests)
     .innerJoin(tests, eq(tests.id, sessionTests.testId))
     .where(eq(sessionTests.sessionId, session.id));
   const testById = new Map(battery.map((t) => [t.id, t]));
   const athleteIds = [...new Set(inputs.map((i) => i.athleteId))];
   const onSheet = new Set(
-    (await tx.select({ id: athletes.id }).from(athletes).where(and(inArray(athletes.id, athleteIds), eq(athletes.organizationId, organizationId), onSessionSheet(session)))).map((r) => r.id),
+    (
+      await tx
+        .select({ id: athletes.id })
+        .from(athletes)
+        .where(
+          and(inArray(athletes.id, athleteIds), eq(athletes.organizationId, organizationId), onSessionSheet(session)),
+        )
+    ).map((r) => r.id),
   );
   // Anyone else is not found, as a record outside reach would be: whether they exist elsewhere
   // (another squad, another organisation) or not at all is never told apart.
   const missing: RowError[] = [];
   inputs.forEach((input, index) => {
-    if (!onSheet.has(input.athleteId)) missing.push({ row: index, column: "athleteId", message: "That athlete is not on this session's sheet." });
+    if (!onSheet.has(input.athleteId))
+      missing.push({ row: index, column: "athleteId", message: "That athlete is not on this session's sheet." });
   });
-  if (missing.length) throw new ApiError(404, "not_found", "Athlete was not found on this session's sheet. Nothing was saved.", { rows: missing });
+  if (missing.length)
+    throw new ApiError(404, "not_found", "Athlete was not found on this session's sheet. Nothing was saved.", {
+      rows: missing,
+    });
   const errors: RowError[] = [];
   const seen = new Set<string>();
   inputs.forEach((input, index) => {
     const test = testById.get(input.testId);
     if (!test) errors.push({ row: index, column: "testId", message: "That test is not in this session's battery." });
     else if (input.trials.length > test.trialsPerSession && trimTrials(input.trials).length > test.trialsPerSession) {
-      errors.push({ row: index, column: "trials", message: `${test.name} takes at most ${test.trialsPerSession} trials.` });
+      errors.push({
+        row: index,
+        column: "trials",
+        message: `${test.name} takes at most ${test.trialsPerSession} trials.`,
+      });
     }
     const k = key(input.athleteId, input.testId);
-    if (seen.has(k)) errors.push({ row: index, column: "testId", message: "The same athlete and test appear twice in one save." });
+    if (seen.has(k))
+      errors.push({ row: index, column: "testId", message: "The same athlete and test appear twice in one save." });
     seen.add(k);
   });
   if (errors.length) throw invalidInput("Some results could not be saved.", undefined, errors);
@@ -102,11 +138,17 @@ export async function writeResults(actor: Actor, sessionId: number, inputs: Resu
     const session = await loadWritableSession(tx, actor, sessionId);
     const testById = await validateWrites(tx, actor.organizationId, session, inputs);
     const athleteIds = [...new Set(inputs.map((i) => i.athleteId))];
-    const current = new Map((await listResultRows(tx, actor, sessionId, athleteIds)).map((r) => [key(r.athleteId, r.testId), r]));
+    const current = new Map(
+      (await listResultRows(tx, actor, sessionId, athleteIds)).map((r) => [key(r.athleteId, r.testId), r]),
+    );
 
     const conflicts = inputs
       .filter((input) => (current.get(key(input.athleteId, input.testId))?.version ?? null) !== input.version)
-      .map((input) => ({ athleteId: input.athleteId, testId: input.testId, current: current.get(key(input.athleteId, input.testId)) ?? null }));
+      .map((input) => ({
+        athleteId: input.athleteId,
+        testId: input.testId,
+        current: current.get(key(input.athleteId, input.testId)) ?? null,
+      }));
     if (conflicts.length) {
       const first = conflicts[0].current;
       const who = first?.updatedByName ? `${first.updatedByName} changed it` : "It was changed";
@@ -117,7 +159,14 @@ export async function writeResults(actor: Actor, sessionId: number, inputs: Resu
     for (const input of inputs) {
       const test = testById.get(input.testId)!;
       const trials = trimTrials(input.trials);
-      const values = { trials, value: reduceTrials(trials, test.trialRule, test.direction), flag: input.flag, note: input.note, updatedBy: actor.userId, updatedAt: now };
+      const values = {
+        trials,
+        value: reduceTrials(trials, test.trialRule, test.direction),
+        flag: input.flag,
+        note: input.note,
+        updatedBy: actor.userId,
+        updatedAt: now,
+      };
       const existing = current.get(key(input.athleteId, input.testId));
       let id: number;
       let version: number;
@@ -134,10 +183,22 @@ export async function writeResults(actor: Actor, sessionId: number, inputs: Resu
         version = 1;
         [{ id }] = await tx
           .insert(results)
-          .values({ ...values, organizationId: actor.organizationId, sessionId, athleteId: input.athleteId, testId: input.testId, version })
+          .values({
+            ...values,
+            organizationId: actor.organizationId,
+            sessionId,
+            athleteId: input.athleteId,
+            testId: input.testId,
+            version,
+          })
           .returning({ id: results.id });
       }
-      const snapshot = (v: number, s: Pick<ResultSnapshot, "trials" | "flag" | "note">): ResultSnapshot => ({ athleteId: input.athleteId, testId: input.testId, ...s, version: v });
+      const snapshot = (v: number, s: Pick<ResultSnapshot, "trials" | "flag" | "note">): ResultSnapshot => ({
+        athleteId: input.athleteId,
+        testId: input.testId,
+        ...s,
+        version: v,
+      });
       await recordAudit(tx, actor, {
         action: existing ? "result.update" : "result.create",
         entity: { type: "result", id },

@@ -3,11 +3,11 @@
  * the organisation always, a coach's own squads, an athlete's own record.
  */
 import "server-only";
-import { and, eq, inArray, or, sql, type SQL } from "drizzle-orm";
+import { and, eq, inArray, or, type SQL, sql } from "drizzle-orm";
 import type { SelectResultFields } from "drizzle-orm/query-builders/select.types";
 import type { SelectedFields } from "drizzle-orm/sqlite-core";
 import { getDb, type Reader } from "@/db/client";
-import { results, squadAthletes, squadCoaches, squads, testingSessions, athletes, tests } from "@/db/schema";
+import { athletes, results, squadAthletes, squadCoaches, squads, testingSessions, tests } from "@/db/schema";
 import { isCoach, isManager } from "@/lib/auth/permissions";
 import { notFound } from "@/lib/errors";
 import type { Actor } from "./actors";
@@ -65,9 +65,14 @@ export function sessionScope(actor: Actor): SQL {
  * its saves and the import all use this one rule; the caller has the session in reach.
  */
 export function onSessionSheet(session: { id: number; squadId: number }, { activeMembersOnly = false } = {}): SQL {
-  const members = getDb().select({ id: squadAthletes.athleteId }).from(squadAthletes).where(eq(squadAthletes.squadId, session.squadId));
+  const members = getDb()
+    .select({ id: squadAthletes.athleteId })
+    .from(squadAthletes)
+    .where(eq(squadAthletes.squadId, session.squadId));
   const withResult = getDb().select({ id: results.athleteId }).from(results).where(eq(results.sessionId, session.id));
-  const inSquad = activeMembersOnly ? and(inArray(athletes.id, members), eq(athletes.archived, false))! : inArray(athletes.id, members);
+  const inSquad = activeMembersOnly
+    ? and(inArray(athletes.id, members), eq(athletes.archived, false))!
+    : inArray(athletes.id, members);
   return or(inSquad, inArray(athletes.id, withResult))!;
 }
 

@@ -1,6 +1,6 @@
 import "server-only";
 import { and, asc, count, desc, eq, inArray, notInArray } from "drizzle-orm";
-import { getDb, writeTransaction, type Reader } from "@/db/client";
+import { getDb, type Reader, writeTransaction } from "@/db/client";
 import { athletes, results, sessionTests, squads, testingSessions, tests } from "@/db/schema";
 import { canEditSession, canPublish } from "@/lib/auth/permissions";
 import { conflict, forbidden, invalidInput, notFound } from "@/lib/errors";
@@ -59,22 +59,40 @@ async function checkBattery(db: Reader, actor: Actor, testIds: number[]) {
     .select({ id: tests.id })
     .from(tests)
     .where(and(inArray(tests.id, unique), eq(tests.organizationId, actor.organizationId), eq(tests.archived, false)));
-  if (found.length !== unique.length) throw invalidInput("Pick tests from your test library.", { testIds: "Unknown or archived test." });
+  if (found.length !== unique.length)
+    throw invalidInput("Pick tests from your test library.", { testIds: "Unknown or archived test." });
   return unique;
 }
 
 export async function createSession(actor: Actor, input: SessionCreateInput) {
   return writeTransaction(async (tx) => {
-    const [squad] = await tx.select({ id: squads.id, archived: squads.archived }).from(squads).where(and(eq(squads.id, input.squadId), squadScope(actor)));
+    const [squad] = await tx
+      .select({ id: squads.id, archived: squads.archived })
+      .from(squads)
+      .where(and(eq(squads.id, input.squadId), squadScope(actor)));
     if (!squad) throw notFound("Squad");
     if (squad.archived) throw invalidInput("That squad is archived.", { squadId: "Archived squad." });
     const testIds = await checkBattery(tx, actor, input.testIds);
     const [session] = await tx
       .insert(testingSessions)
-      .values({ organizationId: actor.organizationId, squadId: input.squadId, date: input.date, phase: input.phase, notes: input.notes, createdBy: actor.userId })
+      .values({
+        organizationId: actor.organizationId,
+        squadId: input.squadId,
+        date: input.date,
+        phase: input.phase,
+        notes: input.notes,
+        createdBy: actor.userId,
+      })
       .returning({ id: testingSessions.id });
-    await tx.insert(sessionTests).values(testIds.map((testId, position) => ({ sessionId: session.id, testId, position })));
-    await recordAudit(tx, actor, { action: "session.create", entity: { type: "session", id: session.id }, sessionId: session.id, after: { ...input, testIds } });
+    await tx
+      .insert(sessionTests)
+      .values(testIds.map((testId, position) => ({ sessionId: session.id, testId, position })));
+    await recordAudit(tx, actor, {
+      action: "session.create",
+      entity: { type: "session", id: session.id },
+      sessionId: session.id,
+      after: { ...input, testIds },
+    });
     return session;
   });
 }
@@ -110,7 +128,12 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
     db
       .select({ id: athletes.id, name: athletes.name, position: athletes.position })
       .from(athletes)
-      .where(and(eq(athletes.organizationId, actor.organizationId), onSessionSheet({ id: sessionId, squadId: session.squadId }, { activeMembersOnly: true })))
+      .where(
+        and(
+          eq(athletes.organizationId, actor.organizationId),
+          onSessionSheet({ id: sessionId, squadId: session.squadId }, { activeMembersOnly: true }),
+        ),
+      )
       .orderBy(asc(athletes.name)),
   ]);
   return {
@@ -128,10 +151,19 @@ export async function updateSession(actor: Actor, sessionId: number, input: Sess
   if (changes.status && !canPublish(actor)) throw forbidden("Only a sport scientist or the owner publishes results.");
   return writeTransaction(async (tx) => {
     const before = await findSessionInScope(tx, actor, sessionId, {
-      id: testingSessions.id, status: testingSessions.status, version: testingSessions.version, date: testingSessions.date, phase: testingSessions.phase, notes: testingSessions.notes,
+      id: testingSessions.id,
+      status: testingSessions.status,
+      version: testingSessions.version,
+      date: testingSessions.date,
+      phase: testingSessions.phase,
+      notes: testingSessions.notes,
     });
-    if (!canEditSession(actor, before.status)) throw forbidden("This session is published; ask a sport scientist to change it.");
-    if (before.version !== version) throw conflict("Someone else changed this session since you opened it. Reload to see their change.", { current: before });
+    if (!canEditSession(actor, before.status))
+      throw forbidden("This session is published; ask a sport scientist to change it.");
+    if (before.version !== version)
+      throw conflict("Someone else changed this session since you opened it. Reload to see their change.", {
+        current: before,
+      });
     const publishing = changes.status === "published" && before.status !== "published";
     await tx
       .update(testingSessions)
@@ -147,7 +179,13 @@ export async function updateSession(actor: Actor, sessionId: number, input: Sess
       await tx.delete(sessionTests).where(eq(sessionTests.sessionId, sessionId));
       await tx.insert(sessionTests).values(unique.map((testId, position) => ({ sessionId, testId, position })));
     }
-    await recordAudit(tx, actor, { action: publishing ? "session.publish" : "session.update", entity: { type: "session", id: sessionId }, sessionId, before, after: input });
+    await recordAudit(tx, actor, {
+      action: publishing ? "session.publish" : "session.update",
+      entity: { type: "session", id: sessionId },
+      sessionId,
+      before,
+      after: input,
+    });
     return { id: sessionId, version: version + 1, ...changes };
   });
 }

@@ -68,6 +68,8 @@ export async function releaseAttempt(email: string, address: string, reservedId:
   await writeTransaction((tx) =>
     tx
       .delete(signInAttempts)
-      .where(and(eq(signInAttempts.email, email), eq(signInAttempts.address, address), lte(signInAttempts.id, reservedId))),
+      .where(
+        and(eq(signInAttempts.email, email), eq(signInAttempts.address, address), lte(signInAttempts.id, reservedId)),
+      ),
   );
 }

@@ -10,7 +10,6 @@ import { recordAudit } from "./audit";
 import { isUniqueViolation } from "./errors";
 import { squadScope } from "./scope";
 
-
 /** The caller's squads with how many active athletes they hold and their latest session. */
 export async function listSquads(actor: Actor, { includeArchived = false } = {}) {
   const db = getDb();
@@ -34,7 +33,13 @@ export async function listSquads(actor: Actor, { includeArchived = false } = {})
       .select({ squadId: squadAthletes.squadId, n: count() })
       .from(squadAthletes)
       .innerJoin(athletes, eq(athletes.id, squadAthletes.athleteId))
-      .where(and(inArray(squadAthletes.squadId, ids), eq(athletes.organizationId, actor.organizationId), eq(athletes.archived, false)))
+      .where(
+        and(
+          inArray(squadAthletes.squadId, ids),
+          eq(athletes.organizationId, actor.organizationId),
+          eq(athletes.archived, false),
+        ),
+      )
       .groupBy(squadAthletes.squadId),
     db
       .select({
@@ -45,7 +50,10 @@ export async function listSquads(actor: Actor, { includeArchived = false } = {})
         status: testingSessions.status,
       })
       .from(testingSessions)
-      .innerJoin(latestDates, and(eq(latestDates.squadId, testingSessions.squadId), eq(latestDates.date, testingSessions.date)))
+      .innerJoin(
+        latestDates,
+        and(eq(latestDates.squadId, testingSessions.squadId), eq(latestDates.date, testingSessions.date)),
+      )
       .orderBy(desc(testingSessions.id)),
   ]);
 
@@ -66,7 +74,10 @@ export async function getSquad(actor: Actor, squadId: number) {
   // The coaches are read beside the squad, not after it: the join through the squad keeps
   // that read inside the caller's reach on its own.
   const [[squad], coaches] = await Promise.all([
-    db.select(squadColumns).from(squads).where(and(eq(squads.id, squadId), squadScope(actor))),
+    db
+      .select(squadColumns)
+      .from(squads)
+      .where(and(eq(squads.id, squadId), squadScope(actor))),
     db
       .select({ id: users.id, name: users.name, email: users.email })
       .from(squadCoaches)
@@ -94,7 +105,10 @@ const nameTaken = (name: string) => conflict(`There is already a squad called "$
 export async function createSquad(actor: Actor, input: SquadCreateInput) {
   try {
     return await writeTransaction(async (tx) => {
-      const [row] = await tx.insert(squads).values({ ...input, organizationId: actor.organizationId }).returning(squadColumns);
+      const [row] = await tx
+        .insert(squads)
+        .values({ ...input, organizationId: actor.organizationId })
+        .returning(squadColumns);
       await recordAudit(tx, actor, { action: "squad.create", entity: { type: "squad", id: row.id }, after: row });
       return row;
     });
@@ -123,15 +137,28 @@ export async function updateSquad(actor: Actor, squadId: number, input: SquadUpd
           ? await tx
               .select({ id: memberships.userId })
               .from(memberships)
-              .where(and(eq(memberships.organizationId, actor.organizationId), eq(memberships.role, "coach"), inArray(memberships.userId, unique)))
+              .where(
+                and(
+                  eq(memberships.organizationId, actor.organizationId),
+                  eq(memberships.role, "coach"),
+                  inArray(memberships.userId, unique),
+                ),
+              )
           : [];
         if (valid.length !== unique.length) {
-          throw invalidInput("Only coaches of your organisation can be assigned to a squad.", { coachUserIds: "Unknown coach." });
+          throw invalidInput("Only coaches of your organisation can be assigned to a squad.", {
+            coachUserIds: "Unknown coach.",
+          });
         }
         await tx.delete(squadCoaches).where(eq(squadCoaches.squadId, squadId));
         if (unique.length) await tx.insert(squadCoaches).values(unique.map((userId) => ({ squadId, userId })));
       }
-      await recordAudit(tx, actor, { action: "squad.update", entity: { type: "squad", id: squadId }, before, after: { ...row, coachUserIds } });
+      await recordAudit(tx, actor, {
+        action: "squad.update",
+        entity: { type: "squad", id: squadId },
+        before,
+        after: { ...row, coachUserIds },
+      });
       return row;
     });
   } catch (error) {

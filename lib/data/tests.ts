@@ -42,7 +42,11 @@ export async function listTests(actor: Actor, { includeArchived = false } = {}):
   const rows = await db.select(testColumns).from(tests).where(where).orderBy(asc(tests.name));
   // The counts are about every athlete's results; an athlete learns nothing of the others.
   if (!canSeeResultCounts(actor)) return rows;
-  const counts = await db.select({ testId: results.testId, n: count() }).from(results).where(eq(results.organizationId, actor.organizationId)).groupBy(results.testId);
+  const counts = await db
+    .select({ testId: results.testId, n: count() })
+    .from(results)
+    .where(eq(results.organizationId, actor.organizationId))
+    .groupBy(results.testId);
   const byTest = new Map(counts.map((c) => [c.testId, c.n]));
   return rows.map((r) => ({ ...r, resultCount: byTest.get(r.id) ?? 0 }));
 }
@@ -83,7 +87,9 @@ export async function updateTest(actor: Actor, testId: number, input: TestUpdate
         .where(and(eq(tests.id, testId), eq(tests.organizationId, actor.organizationId)));
       if (!before) throw notFound("Test");
       if (before.version !== version) {
-        throw conflict("Someone else changed this test since you opened it. Reload to see their change.", { current: before });
+        throw conflict("Someone else changed this test since you opened it. Reload to see their change.", {
+          current: before,
+        });
       }
       const merged = { ...before, ...changes };
       if (merged.plausibleMin !== null && merged.plausibleMax !== null && merged.plausibleMin >= merged.plausibleMax) {
@@ -104,7 +110,10 @@ export async function updateTest(actor: Actor, testId: number, input: TestUpdate
 }
 
 /** A test with results (or in a session's battery) is archived, never deleted. */
-export async function deleteOrArchiveTest(actor: Actor, testId: number): Promise<{ deleted: true } | { archived: true }> {
+export async function deleteOrArchiveTest(
+  actor: Actor,
+  testId: number,
+): Promise<{ deleted: true } | { archived: true }> {
   return writeTransaction(async (tx) => {
     const [test] = await tx
       .select({ id: tests.id, name: tests.name })

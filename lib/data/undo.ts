@@ -5,7 +5,7 @@ import { results, tests } from "@/db/schema";
 import { conflict, notFound } from "@/lib/errors";
 import { reduceTrials } from "@/lib/trials";
 import type { Actor } from "./actors";
-import { lastUndoableChange, markUndone, recordAudit, type ResultSnapshot } from "./audit";
+import { lastUndoableChange, markUndone, type ResultSnapshot, recordAudit } from "./audit";
 import { listResultRows, loadWritableSession, type ResultRow } from "./results";
 
 type Content = Pick<ResultSnapshot, "trials" | "flag" | "note">;
@@ -20,19 +20,33 @@ export async function undoLastChange(actor: Actor, sessionId: number) {
     const event = await lastUndoableChange(tx, actor, sessionId);
     if (!event) throw notFound("A change of yours to undo");
     const { before, after } = event;
-    const cell = async () => (await listResultRows(tx, actor, sessionId, [after.athleteId])).find((r) => r.testId === after.testId);
+    const cell = async () =>
+      (await listResultRows(tx, actor, sessionId, [after.athleteId])).find((r) => r.testId === after.testId);
     const row = await cell();
     // Compared by content, not version: an earlier undo bumps the version but leaves the
     // cell exactly as this change wrote it, so undo can walk back through several changes.
     if (!row || !sameContent(row, after)) {
-      throw conflict(`${row?.updatedByName ?? "Someone"} changed that result after you; it was not undone.`, { current: row ?? null });
+      throw conflict(`${row?.updatedByName ?? "Someone"} changed that result after you; it was not undone.`, {
+        current: row ?? null,
+      });
     }
     let restored: ResultRow | null = null;
     if (before) {
-      const [test] = await tx.select({ trialRule: tests.trialRule, direction: tests.direction }).from(tests).where(eq(tests.id, after.testId));
+      const [test] = await tx
+        .select({ trialRule: tests.trialRule, direction: tests.direction })
+        .from(tests)
+        .where(eq(tests.id, after.testId));
       await tx
         .update(results)
-        .set({ trials: before.trials, value: reduceTrials(before.trials, test.trialRule, test.direction), flag: before.flag, note: before.note, updatedBy: actor.userId, updatedAt: new Date(), version: row.version + 1 })
+        .set({
+          trials: before.trials,
+          value: reduceTrials(before.trials, test.trialRule, test.direction),
+          flag: before.flag,
+          note: before.note,
+          updatedBy: actor.userId,
+          updatedAt: new Date(),
+          version: row.version + 1,
+        })
         .where(and(eq(results.id, row.id), eq(results.version, row.version)));
       restored = (await cell()) ?? null;
     } else {

@@ -1,9 +1,10 @@
 /** The whole pure pipeline: text → table → mapping → plan. No I/O. */
-import { readCsv, type CsvTable } from "./csv";
+
 import { runInSlices, runToEnd, type Steps } from "./cooperative";
+import { type CsvTable, readCsv } from "./csv";
 import { MAX_LISTED_ERRORS } from "./limits";
-import { resolveMapping, type MappingRequest, type ResolvedMapping } from "./mapping";
-import { planSteps, type ImportPlan } from "./plan";
+import { type MappingRequest, type ResolvedMapping, resolveMapping } from "./mapping";
+import { type ImportPlan, planSteps } from "./plan";
 import type { ImportContext } from "./types";
 
 export type Analysis = { table: CsvTable; resolved: ResolvedMapping; plan: ImportPlan };
@@ -19,7 +20,8 @@ function* analysisSteps(text: string, request: MappingRequest, context: ImportCo
     plan.unknownTests = [...resolved.unknownTests, ...plan.unknownTests].slice(0, MAX_LISTED_ERRORS);
   }
   if (table.rows.length === 0) {
-    if (plan.errors.length < MAX_LISTED_ERRORS) plan.errors.push({ row: table.headerRow + 1, message: "There are no data rows below the header." });
+    if (plan.errors.length < MAX_LISTED_ERRORS)
+      plan.errors.push({ row: table.headerRow + 1, message: "There are no data rows below the header." });
     plan.errorCount++;
   }
   return { table, resolved, plan };

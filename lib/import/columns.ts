@@ -8,7 +8,17 @@ import type { ImportContext, ImportFormat, ImportTest, LongColumns, WideColumnSu
 export const normaliseName = (value: string) => value.trim().replace(/\s+/g, " ").toLowerCase();
 
 const ALIASES = {
-  athlete: ["athlete", "athlete name", "name", "player", "player name", "athlete id", "external id", "externalid", "id"],
+  athlete: [
+    "athlete",
+    "athlete name",
+    "name",
+    "player",
+    "player name",
+    "athlete id",
+    "external id",
+    "externalid",
+    "id",
+  ],
   test: ["test", "test name", "exercise"],
   trial: ["trial", "attempt", "trial number", "rep"],
   value: ["value", "score", "result"],
@@ -16,8 +26,28 @@ const ALIASES = {
 
 /** Columns that often ride along in exports and are not tests: suggested as "ignore". */
 const NOT_TESTS = new Set([
-  "position", "squad", "team", "group", "date", "session", "notes", "note", "comment", "comments", "sex", "gender",
-  "dob", "date of birth", "birth date", "number", "no", "no.", "#", "shirt", "email", "e-mail",
+  "position",
+  "squad",
+  "team",
+  "group",
+  "date",
+  "session",
+  "notes",
+  "note",
+  "comment",
+  "comments",
+  "sex",
+  "gender",
+  "dob",
+  "date of birth",
+  "birth date",
+  "number",
+  "no",
+  "no.",
+  "#",
+  "shirt",
+  "email",
+  "e-mail",
   ...ALIASES.athlete,
 ]);
 
@@ -56,7 +86,10 @@ export function parseTrialHeader(header: string): { name: string; trial: number 
   const match = TRIAL_SUFFIX.exec(header.trim());
   if (!match) return null;
   const digits = match[2] ?? match[3] ?? match[4] ?? match[5];
-  const name = match[1].trim().replace(/[-–—:_]$/, "").trim();
+  const name = match[1]
+    .trim()
+    .replace(/[-–—:_]$/, "")
+    .trim();
   if (!name) return null;
   return { name, trial: Number(digits) };
 }
@@ -95,7 +128,11 @@ function matchWideHeader(
 }
 
 /** The suggested reading of every column of a wide file, for the mapping step. */
-export function suggestWideColumns(headers: string[], context: ImportContext, athleteColumn: string | null): WideColumnSuggestion[] {
+export function suggestWideColumns(
+  headers: string[],
+  context: ImportContext,
+  athleteColumn: string | null,
+): WideColumnSuggestion[] {
   const byName = testNameIndex(context.tests);
   const otherNames = new Set(context.otherTestNames.map(normaliseName));
   return headers.map((header): WideColumnSuggestion => {

@@ -4,9 +4,10 @@
  * (see cooperative.ts), with bounded memory per row: every shape of file costs time in
  * proportion to its size, and no shape holds the event loop.
  */
+
+import type { RowError } from "@/lib/errors";
 import { runToEnd, type Steps } from "./cooperative";
 import { MAX_HEADER_CHARS, MAX_IMPORT_COLUMNS, MAX_LISTED_ERRORS } from "./limits";
-import type { RowError } from "@/lib/errors";
 import type { Delimiter } from "./types";
 
 export type CsvTable = {
@@ -71,8 +72,9 @@ function* delimiterSteps(text: string): Steps<Delimiter> {
 export const detectDelimiter = (text: string): Delimiter => runToEnd(delimiterSteps(text));
 
 const UNCLOSED =
-  "A quoted field is never closed, so the rest of the file runs into it. Close the quote (RFC 4180: a field that starts with \" ends with \"; a quote inside it is written twice).";
-const MISPLACED = "A quote is misplaced. A field in quotes must end with the closing quote right before the delimiter (RFC 4180).";
+  'A quoted field is never closed, so the rest of the file runs into it. Close the quote (RFC 4180: a field that starts with " ends with "; a quote inside it is written twice).';
+const MISPLACED =
+  "A quote is misplaced. A field in quotes must end with the closing quote right before the delimiter (RFC 4180).";
 const TOO_WIDE_HEADER = `The header has more than ${MAX_IMPORT_COLUMNS} columns; Changewise reads at most ${MAX_IMPORT_COLUMNS}. Remove the columns you do not need.`;
 const TOO_WIDE_ROW = `This row has more than ${MAX_IMPORT_COLUMNS} cells. Check for a run of stray delimiters.`;
 
@@ -81,7 +83,8 @@ class Problems {
   count = 0;
   add(row: number, message: string, column?: string) {
     this.count++;
-    if (this.items.length < MAX_LISTED_ERRORS) this.items.push(column === undefined ? { row, message } : { row, column, message });
+    if (this.items.length < MAX_LISTED_ERRORS)
+      this.items.push(column === undefined ? { row, message } : { row, column, message });
   }
 }
 
@@ -278,10 +281,21 @@ export function* readCsv(text: string): Steps<CsvTable> {
   const headers = (header ?? []).map((h, index) => {
     const name = h.trim();
     if (name.length <= MAX_HEADER_CHARS) return name;
-    problems.add(headerRow, `Column ${index + 1}'s name is longer than ${MAX_HEADER_CHARS} characters. Is this the header row?`);
+    problems.add(
+      headerRow,
+      `Column ${index + 1}'s name is longer than ${MAX_HEADER_CHARS} characters. Is this the header row?`,
+    );
     return name.slice(0, MAX_HEADER_CHARS);
   });
-  return { delimiter, headers, headerRow: headerRow || 1, rows, rowNumbers, problems: problems.items, problemCount: problems.count };
+  return {
+    delimiter,
+    headers,
+    headerRow: headerRow || 1,
+    rows,
+    rowNumbers,
+    problems: problems.items,
+    problemCount: problems.count,
+  };
 }
 
 export const parseCsv = (text: string): CsvTable => runToEnd(readCsv(text));

@@ -17,8 +17,7 @@ export class ImportFileError extends Error {
 
 const NOT_TEXT =
   "This file is not a text CSV file (it holds binary data). Export the sheet from your spreadsheet as “CSV UTF-8” and upload that.";
-const UTF16 =
-  "This file is UTF-16 text (“Unicode text” in some spreadsheets). Save it as “CSV UTF-8” and upload that.";
+const UTF16 = "This file is UTF-16 text (“Unicode text” in some spreadsheets). Save it as “CSV UTF-8” and upload that.";
 const NOT_UTF8 =
   "This file is not UTF-8 text (perhaps an older “CSV” export in a Windows code page). Save it as “CSV UTF-8” and upload that.";
 

@@ -9,11 +9,18 @@ export type MappingDraft =
 export function draftFromPreview(preview: ImportPreview): MappingDraft {
   const m = preview.mapping;
   if (m.format === "long") {
-    return { format: "long", athlete: m.columns.athlete ?? "", test: m.columns.test ?? "", trial: m.columns.trial ?? "", value: m.columns.value ?? "" };
+    return {
+      format: "long",
+      athlete: m.columns.athlete ?? "",
+      test: m.columns.test ?? "",
+      trial: m.columns.trial ?? "",
+      value: m.columns.value ?? "",
+    };
   }
   const athleteColumn = m.athleteColumn ?? "";
   const columns: Record<string, WideTarget> = {};
-  for (const header of preview.headers) if (header !== athleteColumn && header !== "") columns[header] = m.columns[header] ?? null;
+  for (const header of preview.headers)
+    if (header !== athleteColumn && header !== "") columns[header] = m.columns[header] ?? null;
   return { format: "wide", athleteColumn, columns };
 }
 
@@ -32,16 +39,27 @@ export function defaultDraft(preview: ImportPreview, format: ImportFormat): Mapp
   return { format: "wide", athleteColumn, columns };
 }
 
-export function withAthleteColumn(draft: Extract<MappingDraft, { format: "wide" }>, headers: string[], athleteColumn: string): MappingDraft {
+export function withAthleteColumn(
+  draft: Extract<MappingDraft, { format: "wide" }>,
+  headers: string[],
+  athleteColumn: string,
+): MappingDraft {
   const columns: Record<string, WideTarget> = {};
-  for (const header of headers) if (header !== athleteColumn && header !== "") columns[header] = draft.columns[header] ?? null;
+  for (const header of headers)
+    if (header !== athleteColumn && header !== "") columns[header] = draft.columns[header] ?? null;
   return { format: "wide", athleteColumn, columns };
 }
 
 /** The multipart fields that carry a draft (the route reads the same names). */
 export function fieldsOf(draft: MappingDraft): Record<string, string> {
   if (draft.format === "long") {
-    return { format: "long", athleteColumn: draft.athlete, testColumn: draft.test, trialColumn: draft.trial, valueColumn: draft.value };
+    return {
+      format: "long",
+      athleteColumn: draft.athlete,
+      testColumn: draft.test,
+      trialColumn: draft.trial,
+      valueColumn: draft.value,
+    };
   }
   return { format: "wide", athleteColumn: draft.athleteColumn, mapping: JSON.stringify(draft.columns) };
 }

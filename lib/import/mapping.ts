@@ -2,11 +2,27 @@
  * The mapping step: the reading of the header chosen in the UI (or suggested), checked against
  * the file's columns and the session's battery. Problems land on the header row.
  */
-import type { CsvTable } from "./csv";
-import { detectFormat, findAthleteColumn, findLongColumns, normaliseName, suggestWideColumns, wideMappingOf } from "./columns";
-import type { ImportContext, ImportFormat, ImportMapping, LongColumns, UnknownTest, WideColumnSuggestion, WideTarget } from "./types";
+
 import { MAX_TRIALS } from "@/lib/domain";
 import type { RowError } from "@/lib/errors";
+import {
+  detectFormat,
+  findAthleteColumn,
+  findLongColumns,
+  normaliseName,
+  suggestWideColumns,
+  wideMappingOf,
+} from "./columns";
+import type { CsvTable } from "./csv";
+import type {
+  ImportContext,
+  ImportFormat,
+  ImportMapping,
+  LongColumns,
+  UnknownTest,
+  WideColumnSuggestion,
+  WideTarget,
+} from "./types";
 
 /** What the caller may choose; anything left out is suggested from the header. */
 export type MappingRequest = {
@@ -64,7 +80,8 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
     }
   });
 
-  const athleteGuess = request.athleteColumn ?? (format === "long" ? suggestedLong.athlete : findAthleteColumn(headers));
+  const athleteGuess =
+    request.athleteColumn ?? (format === "long" ? suggestedLong.athlete : findAthleteColumn(headers));
   const suggestions = suggestWideColumns(headers, context, athleteGuess);
 
   if (format === "long") {
@@ -74,22 +91,34 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
       trial: request.trialColumn === undefined ? suggestedLong.trial : request.trialColumn || null,
       value: request.valueColumn ?? suggestedLong.value,
     };
-    const required: [keyof LongColumns, string][] = [["athlete", "the athlete"], ["test", "the test"], ["value", "the score"]];
+    const required: [keyof LongColumns, string][] = [
+      ["athlete", "the athlete"],
+      ["test", "the test"],
+      ["value", "the score"],
+    ];
     for (const [key, what] of required) {
       const column = columns[key];
       if (column === null) {
-        errors.push({ row, message: `No column holds ${what}. Head it ${quote(key)} (long format: athlete,test,trial,value) or choose it in the mapping step.` });
+        errors.push({
+          row,
+          message: `No column holds ${what}. Head it ${quote(key)} (long format: athlete,test,trial,value) or choose it in the mapping step.`,
+        });
       }
     }
     for (const column of Object.values(columns)) {
-      if (column !== null && !has(column)) errors.push({ row, column, message: `This file has no column ${quote(column)}.` });
+      if (column !== null && !has(column))
+        errors.push({ row, column, message: `This file has no column ${quote(column)}.` });
     }
     return { detectedFormat, mapping: { format, columns }, suggestions, suggestedLong, errors, unknownTests };
   }
 
   const athleteColumn = athleteGuess;
   if (athleteColumn === null) {
-    errors.push({ row, message: "No column names the athlete. Head the first column “athlete” (name or external id), or choose it in the mapping step." });
+    errors.push({
+      row,
+      message:
+        "No column names the athlete. Head the first column “athlete” (name or external id), or choose it in the mapping step.",
+    });
   } else if (!has(athleteColumn)) {
     errors.push({ row, column: athleteColumn, message: `This file has no column ${quote(athleteColumn)}.` });
   }
@@ -107,18 +136,30 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
       if (header === athleteColumn || target === null) continue;
       const test = testsById.get(target.testId);
       if (!test) {
-        errors.push({ row, column: header, message: `Column ${quote(header)} is mapped to a test that is not in this session's battery.` });
+        errors.push({
+          row,
+          column: header,
+          message: `Column ${quote(header)} is mapped to a test that is not in this session's battery.`,
+        });
         continue;
       }
       const limit = trialLimit(test.trialsPerSession);
       if (!Number.isInteger(target.trial) || target.trial < 1 || target.trial > limit) {
-        errors.push({ row, column: header, message: `${test.name} takes trials 1 to ${limit} in a session; ${quote(header)} is mapped to trial ${target.trial}.` });
+        errors.push({
+          row,
+          column: header,
+          message: `${test.name} takes trials 1 to ${limit} in a session; ${quote(header)} is mapped to trial ${target.trial}.`,
+        });
         continue;
       }
       const key = `${target.testId}:${target.trial}`;
       const other = targetOwner.get(key);
       if (other !== undefined) {
-        errors.push({ row, column: header, message: `Columns ${quote(other)} and ${quote(header)} are both mapped to ${test.name} trial ${target.trial}.` });
+        errors.push({
+          row,
+          column: header,
+          message: `Columns ${quote(other)} and ${quote(header)} are both mapped to ${test.name} trial ${target.trial}.`,
+        });
         continue;
       }
       targetOwner.set(key, header);
@@ -144,14 +185,22 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
       const test = testsById.get(s.testId!)!;
       const limit = trialLimit(test.trialsPerSession);
       if (s.trial! > limit) {
-        errors.push({ row, column: s.header, message: `${test.name} takes trials 1 to ${limit} in a session; this column reads as trial ${s.trial}.` });
+        errors.push({
+          row,
+          column: s.header,
+          message: `${test.name} takes trials 1 to ${limit} in a session; this column reads as trial ${s.trial}.`,
+        });
         columns[s.header] = null;
         continue;
       }
       const key = `${s.testId}:${s.trial}`;
       const other = targetOwner.get(key);
       if (other !== undefined) {
-        errors.push({ row, column: s.header, message: `Columns ${quote(other)} and ${quote(s.header)} both read as ${test.name} trial ${s.trial}. Rename one, or map them in the mapping step.` });
+        errors.push({
+          row,
+          column: s.header,
+          message: `Columns ${quote(other)} and ${quote(s.header)} both read as ${test.name} trial ${s.trial}. Rename one, or map them in the mapping step.`,
+        });
         columns[s.header] = null;
         continue;
       }
@@ -159,7 +208,18 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
     }
   }
   if (!Object.values(columns).some((t) => t !== null) && !errors.some((e) => e.column)) {
-    errors.push({ row, message: "No column is read as a test of this session's battery. Head the columns with test names (e.g. “Countermovement jump 1”), or map them in the mapping step." });
+    errors.push({
+      row,
+      message:
+        "No column is read as a test of this session's battery. Head the columns with test names (e.g. “Countermovement jump 1”), or map them in the mapping step.",
+    });
   }
-  return { detectedFormat, mapping: { format: "wide", athleteColumn, columns }, suggestions, suggestedLong, errors, unknownTests };
+  return {
+    detectedFormat,
+    mapping: { format: "wide", athleteColumn, columns },
+    suggestions,
+    suggestedLong,
+    errors,
+    unknownTests,
+  };
 }

@@ -5,7 +5,13 @@
 import { reduceTrials } from "@/lib/trials";
 import type { ColumnOf, ExistingResult, ImportCounts, ImportGroup, ImportTest } from "./types";
 
-export type ResultWrite = { athleteId: number; testId: number; trials: (number | null)[]; value: number | null; isNew: boolean };
+export type ResultWrite = {
+  athleteId: number;
+  testId: number;
+  trials: (number | null)[];
+  value: number | null;
+  isNew: boolean;
+};
 
 /** A stored trial value (or a flag such as "absent") the import would overwrite. */
 export type Replacement = {
@@ -44,7 +50,13 @@ export function planWrites(
     if (!stored) {
       // The file's own array is the result: trial k + 1 at index k, holes null, nothing trailing.
       created++;
-      writes.push({ athleteId: group.athleteId, testId: group.testId, trials: group.values, value: reduceTrials(group.values, test.trialRule, test.direction), isNew: true });
+      writes.push({
+        athleteId: group.athleteId,
+        testId: group.testId,
+        trials: group.values,
+        value: reduceTrials(group.values, test.trialRule, test.direction),
+        isNew: true,
+      });
       continue;
     }
     const trials: (number | null)[] = [...stored.trials];
@@ -52,7 +64,16 @@ export function planWrites(
     if (stored.flag) {
       // A flag says the athlete was absent, injured or the attempt invalid: scores contradict it.
       const k = group.values.findIndex((v) => v !== null);
-      replacements.push({ athleteId: group.athleteId, testId: group.testId, trial: null, previous: null, previousFlag: stored.flag, next: null, row: group.rows[k], column: columnOf(group.testId, k + 1) });
+      replacements.push({
+        athleteId: group.athleteId,
+        testId: group.testId,
+        trial: null,
+        previous: null,
+        previousFlag: stored.flag,
+        next: null,
+        row: group.rows[k],
+        column: columnOf(group.testId, k + 1),
+      });
       changed = true;
     }
     group.values.forEach((value, k) => {
@@ -61,7 +82,16 @@ export function planWrites(
       const previous = trials[k] ?? null;
       if (previous === value) return;
       if (previous !== null) {
-        replacements.push({ athleteId: group.athleteId, testId: group.testId, trial: k + 1, previous, previousFlag: null, next: value, row: group.rows[k], column: columnOf(group.testId, k + 1) });
+        replacements.push({
+          athleteId: group.athleteId,
+          testId: group.testId,
+          trial: k + 1,
+          previous,
+          previousFlag: null,
+          next: value,
+          row: group.rows[k],
+          column: columnOf(group.testId, k + 1),
+        });
       }
       trials[k] = value;
       changed = true;
@@ -73,11 +103,23 @@ export function planWrites(
     updated++;
     // Trailing empty slots carry nothing (the Session sheet stores trials the same way).
     while (trials.length > 0 && trials[trials.length - 1] === null) trials.pop();
-    writes.push({ athleteId: group.athleteId, testId: group.testId, trials, value: reduceTrials(trials, test.trialRule, test.direction), isNew: false });
+    writes.push({
+      athleteId: group.athleteId,
+      testId: group.testId,
+      trials,
+      value: reduceTrials(trials, test.trialRule, test.direction),
+      isNew: false,
+    });
   }
   return {
     writes,
     replacements,
-    counts: { values, resultsCreated: created, resultsUpdated: updated, resultsUnchanged: unchanged, trialsReplaced: replacements.length },
+    counts: {
+      values,
+      resultsCreated: created,
+      resultsUpdated: updated,
+      resultsUnchanged: unchanged,
+      trialsReplaced: replacements.length,
+    },
   };
 }

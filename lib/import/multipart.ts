@@ -25,7 +25,8 @@ export function boundaryOf(contentType: string): string | null {
 }
 
 /** Browsers escape `"`, CR and LF in names as %22, %0D, %0A (WHATWG form encoding). */
-const unescapeName = (value: string) => value.replace(/%(22|0D|0A)/gi, (_, hex: string) => String.fromCharCode(parseInt(hex, 16)));
+const unescapeName = (value: string) =>
+  value.replace(/%(22|0D|0A)/gi, (_, hex: string) => String.fromCharCode(parseInt(hex, 16)));
 
 function parameter(header: string, name: string): string | null {
   const extended = new RegExp(`;\\s*${name}\\*\\s*=\\s*(?:UTF-8)?''([^;]*)`, "i").exec(header);
@@ -79,7 +80,11 @@ export function parseMultipart(body: Uint8Array, contentType: string): Multipart
     if (name !== null) {
       const filename = parameter(disposition!, "filename");
       if (filename !== null) {
-        const type = headers.find((h) => /^content-type\s*:/i.test(h))?.replace(/^content-type\s*:\s*/i, "").trim() || null;
+        const type =
+          headers
+            .find((h) => /^content-type\s*:/i.test(h))
+            ?.replace(/^content-type\s*:\s*/i, "")
+            .trim() || null;
         if (!files.has(name) && !fields.has(name)) files.set(name, { filename, type, bytes: content });
       } else if (!fields.has(name) && !files.has(name)) {
         fields.set(name, Buffer.from(content.buffer, content.byteOffset, content.byteLength).toString("utf8"));

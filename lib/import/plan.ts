@@ -2,19 +2,35 @@
  * Reads every data row against the mapping, the roster and the battery. Nothing is invented:
  * an athlete or test that cannot be matched is an error on its row, and is listed.
  */
-import type { CsvTable } from "./csv";
+
+import { MAX_TRIALS } from "@/lib/domain";
+import type { RowError } from "@/lib/errors";
 import { normaliseName, testNameIndex } from "./columns";
 import { runToEnd, type Steps } from "./cooperative";
+import type { CsvTable } from "./csv";
 import { MAX_LISTED_ERRORS, MAX_SHOWN_CHARS, PREVIEW_ROWS } from "./limits";
 import { trialLimit } from "./mapping";
 import { parseScore } from "./numbers";
 import type {
-  ColumnOf, ImportAthlete, ImportContext, ImportFormat, ImportGroup, ImportMapping, ImportTest, UnknownAthlete, UnknownTest,
+  ColumnOf,
+  ImportAthlete,
+  ImportContext,
+  ImportFormat,
+  ImportGroup,
+  ImportMapping,
+  ImportTest,
+  UnknownAthlete,
+  UnknownTest,
 } from "./types";
-import { MAX_TRIALS } from "@/lib/domain";
-import type { RowError } from "@/lib/errors";
 
-export type PreviewValue = { row: number; column: string; athleteName: string; testName: string; trial: number; value: number };
+export type PreviewValue = {
+  row: number;
+  column: string;
+  athleteName: string;
+  testName: string;
+  trial: number;
+  value: number;
+};
 
 export type ImportPlan = {
   format: ImportFormat;
@@ -128,7 +144,12 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
       return null;
     }
     const text = cell.trim();
-    unknownAthletes.add(normaliseName(text), row, () => ({ value: clip(text), reason: match.problem as UnknownAthlete["reason"], count: 0, rows: [] }));
+    unknownAthletes.add(normaliseName(text), row, () => ({
+      value: clip(text),
+      reason: match.problem as UnknownAthlete["reason"],
+      count: 0,
+      rows: [],
+    }));
     errors.add({
       row,
       column,
@@ -140,7 +161,14 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
     return null;
   };
 
-  const place = (athlete: ImportAthlete, test: ImportTest, trial: number, value: number, row: number, column: string) => {
+  const place = (
+    athlete: ImportAthlete,
+    test: ImportTest,
+    trial: number,
+    value: number,
+    row: number,
+    column: string,
+  ) => {
     const key = athlete.id * width + position.get(test.id)!;
     let group = groups.get(key);
     if (!group) {
@@ -167,20 +195,27 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
       rowsWithValues++;
       lastPlacedRow = row;
     }
-    if ((test.plausibleMin !== null && value < test.plausibleMin) || (test.plausibleMax !== null && value > test.plausibleMax)) {
+    if (
+      (test.plausibleMin !== null && value < test.plausibleMin) ||
+      (test.plausibleMax !== null && value > test.plausibleMax)
+    ) {
       warnings.add({
         row,
         column,
         message: `${value} ${test.unit} is outside the plausible range for ${test.name} (${test.plausibleMin ?? "–"} to ${test.plausibleMax ?? "–"} ${test.unit}). Check the unit and the decimal mark.`,
       });
     }
-    if (sample.length < PREVIEW_ROWS) sample.push({ row, column, athleteName: athlete.name, testName: test.name, trial, value });
+    if (sample.length < PREVIEW_ROWS)
+      sample.push({ row, column, athleteName: athlete.name, testName: test.name, trial, value });
   };
 
   const checkWidth = (cells: string[], row: number) => {
     for (let c = headers.length; c < cells.length; c++) {
       if (cells[c].trim() !== "") {
-        errors.add({ row, message: `This row has ${cells.length} cells but the header has ${headers.length} columns. Check for a stray delimiter (a decimal comma in a comma-separated file?).` });
+        errors.add({
+          row,
+          message: `This row has ${cells.length} cells but the header has ${headers.length} columns. Check for a stray delimiter (a decimal comma in a comma-separated file?).`,
+        });
         return false;
       }
     }
@@ -200,7 +235,12 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
     // Caches keyed by the raw cell: a file repeats the same few names and numbers many times.
     const testCache = new Map<string, ImportTest | "unknown" | "not-in-battery" | "missing">();
     const trialCache = new Map<string, number>();
-    const [aName, tName, rName, vName] = [mapping.columns.athlete!, mapping.columns.test!, mapping.columns.trial ?? "", mapping.columns.value!];
+    const [aName, tName, rName, vName] = [
+      mapping.columns.athlete!,
+      mapping.columns.test!,
+      mapping.columns.trial ?? "",
+      mapping.columns.value!,
+    ];
     const valueColumn = ri >= 0 ? rName : vName;
     columnOf = () => valueColumn;
 
@@ -214,7 +254,10 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
       if (cells.length > headers.length && !checkWidth(cells, row)) continue;
       if (vi >= cells.length) {
         // A short row would otherwise read as an empty score and vanish without a word.
-        errors.add({ row, message: `This row has ${cells.length} ${cells.length === 1 ? "cell" : "cells"} but the header has ${headers.length} columns, so it has no score. Check the delimiter of this row.` });
+        errors.add({
+          row,
+          message: `This row has ${cells.length} ${cells.length === 1 ? "cell" : "cells"} but the header has ${headers.length} columns, so it has no score. Check the delimiter of this row.`,
+        });
         continue;
       }
       const score = parseScore(cells[vi], delimiter);
@@ -232,7 +275,7 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
       let found = testCache.get(rawTest);
       if (found === undefined) {
         const key = normaliseName(rawTest);
-        found = key === "" ? "missing" : byName.get(key) ?? (otherNames.has(key) ? "not-in-battery" : "unknown");
+        found = key === "" ? "missing" : (byName.get(key) ?? (otherNames.has(key) ? "not-in-battery" : "unknown"));
         testCache.set(rawTest, found);
       }
       if (found === "missing") {
@@ -241,7 +284,12 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
       } else {
         const testCell = rawTest.trim();
         if (typeof found === "string") {
-          unknownTests.add(normaliseName(testCell), row, () => ({ name: clip(testCell), reason: found as UnknownTest["reason"], count: 0, rows: [] }));
+          unknownTests.add(normaliseName(testCell), row, () => ({
+            name: clip(testCell),
+            reason: found as UnknownTest["reason"],
+            count: 0,
+            rows: [],
+          }));
           errors.add({
             row,
             column: tName,
@@ -266,12 +314,25 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
         const trialCell = rawTrial.trim();
         const limit = test ? trialLimit(test.trialsPerSession) : MAX_TRIALS;
         if (parsedTrial < 0) {
-          errors.add({ row, column: rName, message: trialCell === "" ? "The trial number is missing." : `${shown(trialCell)} is not a trial number (1, 2, 3…).` });
+          errors.add({
+            row,
+            column: rName,
+            message:
+              trialCell === ""
+                ? "The trial number is missing."
+                : `${shown(trialCell)} is not a trial number (1, 2, 3…).`,
+          });
           failed = true;
         } else {
           trial = parsedTrial;
           if (trial < 1 || trial > limit) {
-            errors.add({ row, column: rName, message: test ? `${test.name} takes trials 1 to ${limit} in a session; this row gives trial ${trial}.` : `Trial ${trial} is out of range.` });
+            errors.add({
+              row,
+              column: rName,
+              message: test
+                ? `${test.name} takes trials 1 to ${limit} in a session; this row gives trial ${trial}.`
+                : `Trial ${trial} is out of range.`,
+            });
             failed = true;
           }
         }
@@ -308,7 +369,11 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
       if (cells.length > headers.length && !checkWidth(cells, row)) continue;
       for (const index of unnamed) {
         if ((cells[index] ?? "").trim() !== "") {
-          errors.add({ row, column: `column ${index + 1}`, message: `Column ${index + 1} has no header, so its values cannot be placed. Head it with a test name, or remove it.` });
+          errors.add({
+            row,
+            column: `column ${index + 1}`,
+            message: `Column ${index + 1} has no header, so its values cannot be placed. Head it with a test name, or remove it.`,
+          });
           break;
         }
       }

@@ -1,10 +1,19 @@
 /** The answers of the import API, shared by the route handler and the Import page. */
+
+import type { RowError } from "@/lib/errors";
 import type { Replacement } from "./merge";
 import type { PreviewValue } from "./plan";
 import type {
-  Delimiter, ImportContext, ImportCounts, ImportFormat, ImportMapping, LongColumns, UnknownAthlete, UnknownTest, WideColumnSuggestion,
+  Delimiter,
+  ImportContext,
+  ImportCounts,
+  ImportFormat,
+  ImportMapping,
+  LongColumns,
+  UnknownAthlete,
+  UnknownTest,
+  WideColumnSuggestion,
 } from "./types";
-import type { RowError } from "@/lib/errors";
 
 export type ReplacementRow = RowError & {
   athleteName: string;
@@ -58,7 +67,11 @@ export type ImportCommitted = {
 
 const fmt = (v: number | null) => (v === null ? "empty" : String(v));
 
-export function describeReplacements(replacements: Replacement[], context: ImportContext, limit: number): ReplacementRow[] {
+export function describeReplacements(
+  replacements: Replacement[],
+  context: ImportContext,
+  limit: number,
+): ReplacementRow[] {
   const athletes = new Map(context.athletes.map((a) => [a.id, a.name]));
   const tests = new Map(context.tests.map((t) => [t.id, t]));
   return replacements.slice(0, limit).map((r) => {
@@ -70,6 +83,16 @@ export function describeReplacements(replacements: Replacement[], context: Impor
       r.trial === null
         ? `${athleteName}'s ${testName} is marked “${r.previousFlag}”; importing scores would clear that mark.`
         : `Replaces ${athleteName}'s ${testName} trial ${r.trial}: ${fmt(r.previous)}${unit} → ${fmt(r.next)}${unit}.`;
-    return { row: r.row, column: r.column, message, athleteName, testName, trial: r.trial, previous: r.previous, previousFlag: r.previousFlag, next: r.next };
+    return {
+      row: r.row,
+      column: r.column,
+      message,
+      athleteName,
+      testName,
+      trial: r.trial,
+      previous: r.previous,
+      previousFlag: r.previousFlag,
+      next: r.next,
+    };
   });
 }

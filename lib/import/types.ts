@@ -40,7 +40,12 @@ export type ImportMapping =
 
 /** How the suggestion read one wide column, for the mapping step. */
 export type WideColumnStatus = "athlete" | "matched" | "ignored" | "unknown" | "not-in-battery";
-export type WideColumnSuggestion = { header: string; status: WideColumnStatus; testId: number | null; trial: number | null };
+export type WideColumnSuggestion = {
+  header: string;
+  status: WideColumnStatus;
+  testId: number | null;
+  trial: number | null;
+};
 
 /**
  * Everything the file holds for one athlete × test: `values[k]` is trial k + 1 (null where the
@@ -53,7 +58,13 @@ export type ImportGroup = { athleteId: number; testId: number; values: (number |
 export type ColumnOf = (testId: number, trial: number) => string;
 
 export type UnknownAthlete = { value: string; reason: "unknown" | "ambiguous"; count: number; rows: number[] };
-export type UnknownTest = { name: string; reason: "unknown" | "not-in-battery"; count: number; rows: number[]; column?: string };
+export type UnknownTest = {
+  name: string;
+  reason: "unknown" | "not-in-battery";
+  count: number;
+  rows: number[];
+  column?: string;
+};
 
 export type ExistingResult = { trials: (number | null)[]; flag: ResultFlag | null; version: number };
 

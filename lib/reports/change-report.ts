@@ -4,18 +4,19 @@
  * SWC, each athlete's change against the test's typical error — into the payload the screen,
  * the CSV and saved reports share. No formula lives here; each comes from lib/stats.
  */
+
+import type { Direction, ResultFlag, SwcMethod } from "@/lib/domain";
 import {
   classifyChange,
   individualChange,
   magnitudeOfEffect,
   orientInterval,
   pairedChange,
-  smallestWorthwhileChange,
   StatsInputError,
+  smallestWorthwhileChange,
   swcFromCv,
   type Verdict,
 } from "@/lib/stats";
-import type { Direction, ResultFlag, SwcMethod } from "@/lib/domain";
 
 export type ReportTest = {
   direction: Direction;
@@ -55,7 +56,8 @@ export function reportSwc(setting: SwcSetting, pre: number[], cvPercent: number 
       if (!(setting.value >= 0)) throw new StatsInputError("A fixed SWC must be zero or more.");
       return setting.value;
     case "cv-factor": {
-      if (cvPercent === null) throw new StatsInputError("A CV-based SWC needs the test's CV%; set it in the Test library.");
+      if (cvPercent === null)
+        throw new StatsInputError("A CV-based SWC needs the test's CV%; set it in the Test library.");
       const meanPre = pre.reduce((a, b) => a + b, 0) / pre.length;
       return swcFromCv(Math.abs(meanPre), cvPercent, setting.value);
     }
@@ -83,7 +85,13 @@ export function buildChangeReport({ test, rows, confidence, swc: override }: Cha
   const excluded: { athleteId: number; name: string; reason: ExclusionReason; flag: ResultFlag | null }[] = [];
   for (const row of rows) {
     const reason = exclusionOf(row);
-    if (reason) excluded.push({ athleteId: row.athleteId, name: row.name, reason, flag: row.pre?.flag ?? row.post?.flag ?? null });
+    if (reason)
+      excluded.push({
+        athleteId: row.athleteId,
+        name: row.name,
+        reason,
+        flag: row.pre?.flag ?? row.post?.flag ?? null,
+      });
     else paired.push({ athleteId: row.athleteId, name: row.name, pre: row.pre!.value!, post: row.post!.value! });
   }
   if (paired.length < 2) {

@@ -13,7 +13,8 @@ export function defaultComparison(sessions: SessionChoice[], squadId: number) {
   const before = (to: SessionChoice, phases: Phase[]) =>
     own.find((s) => s.id !== to.id && s.date <= to.date && phases.includes(s.phase) && shares(s, to));
   const pairs: [SessionChoice | undefined, SessionChoice | undefined][] = [];
-  for (const to of own.filter((s) => s.phase === "post-block")) pairs.push([before(to, ["pre-block"]) ?? before(to, ["baseline"]), to]);
+  for (const to of own.filter((s) => s.phase === "post-block"))
+    pairs.push([before(to, ["pre-block"]) ?? before(to, ["baseline"]), to]);
   for (const to of own) pairs.push([own.find((s) => s.id !== to.id && s.date <= to.date && shares(s, to)), to]);
   const found = pairs.find((p): p is [SessionChoice, SessionChoice] => p[0] !== undefined && p[1] !== undefined);
   if (!found) return null;

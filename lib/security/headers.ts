@@ -24,7 +24,11 @@ type PolicyOptions = { nonce?: string; dev?: boolean; https?: boolean };
  * eval; production needs none.
  */
 export function contentSecurityPolicy({ nonce, dev = false, https = false }: PolicyOptions = {}): string {
-  const scripts = ["'self'", ...(nonce ? [`'nonce-${nonce}'`, "'strict-dynamic'"] : []), ...(dev ? ["'unsafe-eval'"] : [])];
+  const scripts = [
+    "'self'",
+    ...(nonce ? [`'nonce-${nonce}'`, "'strict-dynamic'"] : []),
+    ...(dev ? ["'unsafe-eval'"] : []),
+  ];
   return [
     "default-src 'self'",
     `script-src ${scripts.join(" ")}`,
@@ -43,7 +47,8 @@ export function contentSecurityPolicy({ nonce, dev = false, https = false }: Pol
 }
 
 /** API answers are data, never documents: they may load nothing and be framed nowhere. */
-export const API_CONTENT_SECURITY_POLICY = "default-src 'none'; frame-ancestors 'none'; base-uri 'none'; form-action 'none'";
+export const API_CONTENT_SECURITY_POLICY =
+  "default-src 'none'; frame-ancestors 'none'; base-uri 'none'; form-action 'none'";
 
 /** The same on every response, whoever answers it. */
 export const STATIC_SECURITY_HEADERS: Readonly<Record<string, string>> = {
@@ -77,7 +82,11 @@ export function withHeaders(response: Response, headers: Record<string, string>)
     for (const [key, value] of Object.entries(headers)) response.headers.set(key, value);
     return response;
   } catch {
-    const copy = new Response(response.body, { status: response.status, statusText: response.statusText, headers: response.headers });
+    const copy = new Response(response.body, {
+      status: response.status,
+      statusText: response.statusText,
+      headers: response.headers,
+    });
     for (const [key, value] of Object.entries(headers)) copy.headers.set(key, value);
     return copy;
   }

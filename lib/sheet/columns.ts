@@ -9,7 +9,8 @@ export function sheetColumns(tests: SheetTest[]) {
   const nav: NavColumn[] = [];
   let trialCol = 0;
   for (const test of tests) {
-    for (let index = 0; index < test.trialsPerSession; index++) nav.push({ kind: "trial", test, index, trialCol: trialCol++ });
+    for (let index = 0; index < test.trialsPerSession; index++)
+      nav.push({ kind: "trial", test, index, trialCol: trialCol++ });
     nav.push({ kind: "flag", test });
   }
   const trials = nav.filter((c): c is Extract<NavColumn, { kind: "trial" }> => c.kind === "trial");

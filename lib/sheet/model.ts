@@ -1,6 +1,7 @@
 /** Small pure helpers shared by the Session sheet hook and its cells. */
-import type { ResultFlag } from "@/lib/domain";
+
 import type { ResultRow, SheetData, SheetTest } from "@/lib/client/queries";
+import type { ResultFlag } from "@/lib/domain";
 import { FLAG_LABELS } from "@/lib/labels";
 import { trimTrials } from "@/lib/trials";
 
@@ -36,7 +37,10 @@ export function withRow(data: SheetData, athleteId: number, testId: number, row:
 
 export function outsidePlausible(test: SheetTest, value: number | null): boolean {
   if (value === null) return false;
-  return (test.plausibleMin !== null && value < test.plausibleMin) || (test.plausibleMax !== null && value > test.plausibleMax);
+  return (
+    (test.plausibleMin !== null && value < test.plausibleMin) ||
+    (test.plausibleMax !== null && value > test.plausibleMax)
+  );
 }
 
 export function plausibleWords(test: SheetTest): string {

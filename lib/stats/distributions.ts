@@ -14,8 +14,9 @@
  * they do not validate their arguments: the public entry points (`tCritical`,
  * `typicalErrorLimits`, `iccFromMeanSquares`, …) check input first.
  */
-import { jStat } from "./jstat";
+
 import { regularizedBeta } from "./incomplete-beta";
+import { jStat } from "./jstat";
 
 /**
  * Standard normal quantile, z_p = Φ⁻¹(p).
@@ -86,8 +87,7 @@ export function studentTUpperTail(t: number, df: number): number {
 
 /** Student's t density; only the Newton polish of the quantile needs it. */
 function studentTDensity(t: number, df: number): number {
-  const logK =
-    jStat.gammaln((df + 1) / 2) - jStat.gammaln(df / 2) - 0.5 * Math.log(df * Math.PI);
+  const logK = jStat.gammaln((df + 1) / 2) - jStat.gammaln(df / 2) - 0.5 * Math.log(df * Math.PI);
   return Math.exp(logK - ((df + 1) / 2) * Math.log1p((t * t) / df));
 }
 

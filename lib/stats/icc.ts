@@ -41,10 +41,7 @@ export interface IccResult {
  * const table = [[9, 2, 5, 8], [6, 1, 3, 2], [8, 4, 6, 8], [7, 1, 2, 6], [10, 5, 6, 9], [6, 2, 4, 7]];
  * iccFromMeanSquares(twoWayMeanSquares(table)).icc21; // => 0.289763… (published: 0.29)
  */
-export function iccFromMeanSquares(
-  ms: TwoWayMeanSquares,
-  options: { confidence?: number } = {},
-): IccResult {
+export function iccFromMeanSquares(ms: TwoWayMeanSquares, options: { confidence?: number } = {}): IccResult {
   const confidence = options.confidence ?? 0.95;
   assertConfidence(confidence);
   const p = 1 - (1 - confidence) / 2;
@@ -70,8 +67,7 @@ function agreement({ n, k, msr, msc, mse }: TwoWayMeanSquares, p: number) {
   const fj = msc / mse;
   const spread = n * (1 + (k - 1) * r) - k * r;
   const v = finiteOrNull(
-    ((k - 1) * (n - 1) * (k * r * fj + spread) ** 2) /
-      ((n - 1) * k * k * r * r * fj * fj + spread * spread),
+    ((k - 1) * (n - 1) * (k * r * fj + spread) ** 2) / ((n - 1) * k * k * r * r * fj * fj + spread * spread),
   );
   if (v === null || v <= 0) return { icc21, icc21Lower: null, icc21Upper: null, icc21Df: v };
   const fLow = fQuantile(p, n - 1, v);

@@ -35,9 +35,7 @@ const MAX_TERMS = 10000;
 export function regularizedBeta(x: number, a: number, b: number): number {
   if (x <= 0) return 0;
   if (x >= 1) return 1;
-  const front = Math.exp(
-    a * Math.log(x) + b * Math.log1p(-x) - jStat.betaln(a, b),
-  );
+  const front = Math.exp(a * Math.log(x) + b * Math.log1p(-x) - jStat.betaln(a, b));
   // The fraction converges fast only on the side of the distribution's mean.
   if (x < (a + 1) / (a + b + 2)) return (front * betaContinuedFraction(x, a, b)) / a;
   return 1 - (front * betaContinuedFraction(1 - x, b, a)) / b;
@@ -61,9 +59,7 @@ export function regularizedBeta(x: number, a: number, b: number): number {
  */
 export function betaRecurrenceTerm(x: number, a: number, b: number): number {
   if (x <= 0 || x >= 1) return 0;
-  return Math.exp(
-    a * Math.log(x) + b * Math.log1p(-x) - Math.log(a) - jStat.betaln(a, b),
-  );
+  return Math.exp(a * Math.log(x) + b * Math.log1p(-x) - Math.log(a) - jStat.betaln(a, b));
 }
 
 function betaContinuedFraction(x: number, a: number, b: number): number {

@@ -3,32 +3,33 @@
  * They return numbers and codes only; words for people are in `lib/words/stats.ts`.
  * Formulas, sources and check values: ../../../shared/design/METHODS.md.
  */
-export { StatsInputError } from "./errors";
-export { mean, sampleVariance, sampleSd } from "./describe";
+
+export { mean, sampleSd, sampleVariance } from "./describe";
 export {
+  chiSquareQuantile,
+  fQuantile,
   normalCdf,
   normalQuantile,
   studentTQuantile,
   studentTUpperTail,
-  chiSquareQuantile,
-  fQuantile,
 } from "./distributions";
-export { noncentralTCdf } from "./noncentral-t";
-export { tCritical, zCritical } from "./t-critical";
-export { pairedChange, hedgesCorrection, type PairedChange, type PairedChangeOptions } from "./paired-change";
-export { smallestWorthwhileChange, swcFromCv } from "./swc";
-export { twoWayMeanSquares, type TwoWayMeanSquares } from "./two-way-anova";
-export { iccFromMeanSquares, type IccResult } from "./icc";
-export { testRetest, typicalErrorLimits, type TestRetest } from "./reliability";
+export { StatsInputError } from "./errors";
+export { type IccResult, iccFromMeanSquares } from "./icc";
 export {
-  individualChange,
-  minimalDetectableChange,
   type IndividualChange,
   type IndividualChangeInput,
+  individualChange,
+  minimalDetectableChange,
 } from "./individual-change";
-export { classifyChange, orientInterval, VERDICTS, type Verdict, type Interval } from "./verdict";
-export { pairedPower, tTestPower, type TTestDesign, type TTestPowerOptions } from "./power";
-export { pairedSampleSize, precisionSampleSize, tTestSampleSize, type SampleSizeResult } from "./sample-size";
+export { MAGNITUDE_THRESHOLDS, type Magnitude, magnitudeOfEffect } from "./magnitude";
+export { noncentralTCdf } from "./noncentral-t";
+export { hedgesCorrection, type PairedChange, type PairedChangeOptions, pairedChange } from "./paired-change";
+export { pairedPower, type TTestDesign, type TTestPowerOptions, tTestPower } from "./power";
+export { type TestRetest, testRetest, typicalErrorLimits } from "./reliability";
+export { pairedSampleSize, precisionSampleSize, type SampleSizeResult, tTestSampleSize } from "./sample-size";
+export { SENSITIVITY_CUTOFFS, type Sensitivity, type SensitivityRating, sensitivity } from "./sensitivity";
+export { smallestWorthwhileChange, swcFromCv } from "./swc";
+export { tCritical, zCritical } from "./t-critical";
 export { trialsToDetect } from "./trials";
-export { sensitivity, SENSITIVITY_CUTOFFS, type Sensitivity, type SensitivityRating } from "./sensitivity";
-export { magnitudeOfEffect, MAGNITUDE_THRESHOLDS, type Magnitude } from "./magnitude";
+export { type TwoWayMeanSquares, twoWayMeanSquares } from "./two-way-anova";
+export { classifyChange, type Interval, orientInterval, VERDICTS, type Verdict } from "./verdict";

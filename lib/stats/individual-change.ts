@@ -1,6 +1,6 @@
-import { classifyChange, orientInterval, type Verdict } from "./verdict";
 import { tCritical } from "./t-critical";
 import { assertConfidence, assertDegreesOfFreedom, assertFinite, assertNonNegative } from "./validate";
+import { classifyChange, orientInterval, type Verdict } from "./verdict";
 
 export interface IndividualChangeInput {
   pre: number;
@@ -77,11 +77,15 @@ export function individualChange(input: IndividualChangeInput): IndividualChange
   const ciUpper = change + quantile * standardError;
   const better = orientInterval(ciLower, ciUpper, higherIsBetter);
   return {
-    change, ciLower, ciUpper,
+    change,
+    ciLower,
+    ciUpper,
     betterChange: higherIsBetter ? change : 0 - change,
     betterLower: better.lower,
     betterUpper: better.upper,
-    standardError, quantile, confidence,
+    standardError,
+    quantile,
+    confidence,
     verdict: classifyChange(better, swc),
   };
 }

@@ -10,9 +10,10 @@
  * sample-size root finding calls it dozens of times. This version agrees with
  * mpmath to 2e-10 on all 378 points and takes ~3 µs.
  */
-import { jStat } from "./jstat";
-import { betaRecurrenceTerm, regularizedBeta } from "./incomplete-beta";
+
 import { normalCdf } from "./distributions";
+import { betaRecurrenceTerm, regularizedBeta } from "./incomplete-beta";
+import { jStat } from "./jstat";
 
 const ERROR_BOUND = 1e-15;
 const MAX_STEPS = 100000;
@@ -76,7 +77,12 @@ function mixtureSum(x: number, b: number, lambda: number, ncp: number): number {
   let sum = pK * iPK + qK * iQK;
 
   // Forward: j = k + 1, k + 2, …; I_x falls as j grows.
-  let p = pK, q = qK, iP = iPK, iQ = iQK, eP = ePK, eQ = eQK;
+  let p = pK,
+    q = qK,
+    iP = iPK,
+    iQ = iQK,
+    eP = ePK,
+    eQ = eQK;
   for (let j = k + 1; j <= k + MAX_STEPS; j++) {
     const aP = j - 0.5; // a of the previous P term
     const aQ = j; // a of the previous Q term
@@ -97,7 +103,12 @@ function mixtureSum(x: number, b: number, lambda: number, ncp: number): number {
   }
 
   // Backward: j = k − 1, …, 0; here I_x ≤ 1 and the weights shrink by j/λ per step.
-  p = pK; q = qK; iP = iPK; iQ = iQK; eP = ePK; eQ = eQK;
+  p = pK;
+  q = qK;
+  iP = iPK;
+  iQ = iQK;
+  eP = ePK;
+  eQ = eQK;
   for (let j = k - 1; j >= 0; j--) {
     const aP = j + 0.5;
     const aQ = j + 1;

@@ -1,5 +1,5 @@
-import { StatsInputError } from "./errors";
 import { studentTUpperTail } from "./distributions";
+import { StatsInputError } from "./errors";
 import { tCritical } from "./t-critical";
 import { assertConfidence, assertPairs } from "./validate";
 
@@ -81,11 +81,22 @@ export function pairedChange(
   const critical = tCritical(confidence, df);
   const halfWidth = critical * standardError;
   const result: PairedChange = {
-    n, df, confidence, meanPre, meanPost, meanDiff, sdDiff, standardError,
+    n,
+    df,
+    confidence,
+    meanPre,
+    meanPost,
+    meanDiff,
+    sdDiff,
+    standardError,
     tCritical: critical,
     ciLower: meanDiff - halfWidth,
     ciUpper: meanDiff + halfWidth,
-    t: null, p: null, baselineSd, effectSizeDz: null, hedgesGz: null,
+    t: null,
+    p: null,
+    baselineSd,
+    effectSizeDz: null,
+    hedgesGz: null,
   };
   if (sdDiff > 0) {
     const t = meanDiff / standardError;
@@ -123,9 +134,13 @@ function summarisePairs(pre: ArrayLike<number>, post: ArrayLike<number>): PairSu
   const n = pre.length;
   const shiftPre = pre[0];
   const shiftDiff = post[0] - pre[0];
-  let sumPre = 0, sumSqPre = 0, sumDiff = 0, sumSqDiff = 0;
+  let sumPre = 0,
+    sumSqPre = 0,
+    sumDiff = 0,
+    sumSqDiff = 0;
   for (let i = 0; i < n; i++) {
-    const a = pre[i], b = post[i];
+    const a = pre[i],
+      b = post[i];
     if (typeof a !== "number" || typeof b !== "number") assertPairs(pre, post, LABELS);
     const x = a - shiftPre;
     const d = b - a - shiftDiff;

@@ -1,5 +1,5 @@
-import { noncentralTCdf } from "./noncentral-t";
 import { studentTQuantile } from "./distributions";
+import { noncentralTCdf } from "./noncentral-t";
 import { assertAtLeast, assertFinite, assertPositive, assertProbability } from "./validate";
 
 export type TTestDesign = "paired" | "one-sample" | "two-sample";

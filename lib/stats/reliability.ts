@@ -1,6 +1,6 @@
 import { chiSquareQuantile } from "./distributions";
 import { iccFromMeanSquares } from "./icc";
-import { twoWayMeanSquares, type TwoWayMeanSquares } from "./two-way-anova";
+import { type TwoWayMeanSquares, twoWayMeanSquares } from "./two-way-anova";
 import { assertConfidence, assertDegreesOfFreedom, assertNonNegative, assertPairs } from "./validate";
 
 export interface TestRetest {
@@ -69,15 +69,20 @@ export function testRetest(
   const meanSquares = twoWayMeanSquares(rows);
   const icc = iccFromMeanSquares(meanSquares, { confidence });
   return {
-    n, df, confidence,
+    n,
+    df,
+    confidence,
     changeInMean: diff.mean,
     typicalError,
     typicalErrorLower: limits.lower,
     typicalErrorUpper: limits.upper,
     cvPercent: logCvPercent(trial1, trial2),
-    icc31: icc.icc31, icc21: icc.icc21,
-    icc31Lower: icc.icc31Lower, icc31Upper: icc.icc31Upper,
-    icc21Lower: icc.icc21Lower, icc21Upper: icc.icc21Upper,
+    icc31: icc.icc31,
+    icc21: icc.icc21,
+    icc31Lower: icc.icc31Lower,
+    icc31Upper: icc.icc31Upper,
+    icc21Lower: icc.icc21Lower,
+    icc21Upper: icc.icc21Upper,
     meanSquares,
   };
 }

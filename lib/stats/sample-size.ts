@@ -1,7 +1,7 @@
-import { findRoot } from "./root-finding";
 import { normalQuantile, studentTQuantile } from "./distributions";
 import { StatsInputError } from "./errors";
-import { tTestPower, type TTestPowerOptions } from "./power";
+import { type TTestPowerOptions, tTestPower } from "./power";
+import { findRoot } from "./root-finding";
 import { assertPositive, assertProbability } from "./validate";
 
 export interface SampleSizeInput {
@@ -49,7 +49,7 @@ export function pairedSampleSize(input: SampleSizeInput): SampleSizeResult {
   assertProbability(power, "The power");
   return solveSampleSize((n) => tTestPower({ n, delta, sd: sdDiff, alpha }), {
     power,
-    normalApproxN: ((normalQuantile(1 - alpha / 2) + normalQuantile(power)) * sdDiff / delta) ** 2,
+    normalApproxN: (((normalQuantile(1 - alpha / 2) + normalQuantile(power)) * sdDiff) / delta) ** 2,
   });
 }
 
@@ -70,9 +70,7 @@ export function pairedSampleSize(input: SampleSizeInput): SampleSizeResult {
  * // R: power.t.test(power = .90, delta = 1)$n = 22.02110
  * tTestSampleSize({ delta: 1, power: 0.9, design: "two-sample", strict: false }).exactN; // => 22.021095…
  */
-export function tTestSampleSize(
-  options: Omit<TTestPowerOptions, "n"> & { power?: number },
-): SampleSizeResult {
+export function tTestSampleSize(options: Omit<TTestPowerOptions, "n"> & { power?: number }): SampleSizeResult {
   const { power = 0.8, ...rest } = options;
   assertProbability(power, "The power");
   assertPositive(rest.delta, "The change to detect");

@@ -54,7 +54,9 @@ export function twoWayMeanSquares(rows: ArrayLike<ArrayLike<number>>): TwoWayMea
   grand /= n * k;
   for (let j = 0; j < k; j++) colMeans[j] /= n;
 
-  let ssr = 0, ssc = 0, sse = 0;
+  let ssr = 0,
+    ssc = 0,
+    sse = 0;
   for (let i = 0; i < n; i++) ssr += (rowMeans[i] - grand) ** 2;
   for (let j = 0; j < k; j++) ssc += (colMeans[j] - grand) ** 2;
   ssr *= k;
@@ -63,14 +65,19 @@ export function twoWayMeanSquares(rows: ArrayLike<ArrayLike<number>>): TwoWayMea
     const row = rows[i];
     for (let j = 0; j < k; j++) sse += (row[j] - rowMeans[i] - colMeans[j] + grand) ** 2;
   }
-  const dfRows = n - 1, dfColumns = k - 1, dfError = dfRows * dfColumns;
+  const dfRows = n - 1,
+    dfColumns = k - 1,
+    dfError = dfRows * dfColumns;
   return {
-    n, k,
+    n,
+    k,
     msr: ssr / dfRows,
     msc: ssc / dfColumns,
     mse: sse / dfError,
     msw: (ssc + sse) / (n * dfColumns),
-    dfRows, dfColumns, dfError,
+    dfRows,
+    dfColumns,
+    dfError,
   };
 }
 

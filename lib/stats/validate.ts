@@ -81,9 +81,7 @@ export function assertAtLeast(value: number, min: number, what: string): void {
  */
 export function assertProbability(value: number, what: string): void {
   if (typeof value !== "number" || !(value > 0 && value < 1)) {
-    throw new StatsInputError(
-      `${what} must be between 0 and 1, e.g. 0.9 for 90% (got ${String(value)}).`,
-    );
+    throw new StatsInputError(`${what} must be between 0 and 1, e.g. 0.9 for 90% (got ${String(value)}).`);
   }
 }
 

@@ -5,14 +5,7 @@ import { assertFinite, assertNonNegative } from "./validate";
  * Verdict codes, best to worst, then the undecided one. Words for people live
  * in `lib/words/stats.ts`, so the statistics stay free of display text.
  */
-export const VERDICTS = [
-  "clear-gain",
-  "gain",
-  "steady",
-  "decline",
-  "clear-decline",
-  "inconclusive",
-] as const;
+export const VERDICTS = ["clear-gain", "gain", "steady", "decline", "clear-decline", "inconclusive"] as const;
 
 export type Verdict = (typeof VERDICTS)[number];
 
@@ -56,9 +49,7 @@ export function classifyChange({ lower, upper }: Interval, swc: number): Verdict
   assertFinite(upper, "The upper end of the interval");
   assertNonNegative(swc, "The smallest worthwhile change");
   if (lower > upper) {
-    throw new StatsInputError(
-      `The interval's lower end (${lower}) is above its upper end (${upper}).`,
-    );
+    throw new StatsInputError(`The interval's lower end (${lower}) is above its upper end (${upper}).`);
   }
   if (lower >= -swc && upper <= swc) return "steady";
   if (lower > swc) return "clear-gain";

@@ -41,7 +41,10 @@ export const optionalText = (max: number, label = "This field", { multiline = fa
       z
         .string()
         .max(max, `${label} is limited to ${max} characters.`)
-        .refine((v) => v === "" || hasVisibleText(v), `${label} needs at least one visible character, or leave it empty.`),
+        .refine(
+          (v) => v === "" || hasVisibleText(v),
+          `${label} needs at least one visible character, or leave it empty.`,
+        ),
     )
     .nullish()
     .transform((v) => (v ? v : null));

@@ -16,7 +16,9 @@ const wideTarget = z
   .object({ testId: z.number().int().positive(), trial: z.number().int().positive().max(99) })
   .nullable();
 
-const wideMappingSchema = z.record(column, wideTarget).refine((m) => Object.keys(m).length <= 500, "At most 500 columns.");
+const wideMappingSchema = z
+  .record(column, wideTarget)
+  .refine((m) => Object.keys(m).length <= 500, "At most 500 columns.");
 
 export const importOptionsSchema = z.object({
   mode: z.enum(["preview", "commit"], { message: "mode is preview or commit." }).default("preview"),

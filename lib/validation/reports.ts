@@ -31,9 +31,15 @@ export const changeReportQuerySchema = z
       .string()
       .optional()
       .transform((v) => (v === undefined || v.trim() === "" ? undefined : Number(v.replace(",", "."))))
-      .refine((v) => v === undefined || (Number.isFinite(v) && v >= 0 && v <= 1e6), "The SWC value must be a number, zero or more."),
+      .refine(
+        (v) => v === undefined || (Number.isFinite(v) && v >= 0 && v <= 1e6),
+        "The SWC value must be a number, zero or more.",
+      ),
   })
-  .refine((q) => q.fromSessionId !== q.toSessionId, { message: "Choose two different sessions.", path: ["toSessionId"] })
+  .refine((q) => q.fromSessionId !== q.toSessionId, {
+    message: "Choose two different sessions.",
+    path: ["toSessionId"],
+  })
   .refine((q) => q.swcMethod === undefined || q.swcValue !== undefined, {
     message: "Give the SWC value (a factor, or a fixed value in the test's unit) with its method.",
     path: ["swcValue"],

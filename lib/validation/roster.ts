@@ -20,7 +20,10 @@ export type SquadUpdateInput = z.infer<typeof squadUpdateSchema>;
 const athleteFields = {
   name: requiredText(120, "Name"),
   dateOfBirth: optionalIsoDate,
-  sex: z.enum(SEXES).nullish().transform((v) => v ?? null),
+  sex: z
+    .enum(SEXES)
+    .nullish()
+    .transform((v) => v ?? null),
   position: optionalText(60, "Position or event"),
   externalId: optionalText(60, "External id"),
   notes: optionalText(2000, "Notes", { multiline: true }),

@@ -19,10 +19,19 @@ const fields = {
   plausibleMax: z.number().finite().nullable(),
 };
 
-type RangeLike = { plausibleMin?: number | null; plausibleMax?: number | null; swcMethod?: string; cvPercent?: number | null };
+type RangeLike = {
+  plausibleMin?: number | null;
+  plausibleMax?: number | null;
+  swcMethod?: string;
+  cvPercent?: number | null;
+};
 
 const rangeIsOrdered = (v: RangeLike) =>
-  v.plausibleMin === null || v.plausibleMin === undefined || v.plausibleMax === null || v.plausibleMax === undefined || v.plausibleMin < v.plausibleMax;
+  v.plausibleMin === null ||
+  v.plausibleMin === undefined ||
+  v.plausibleMax === null ||
+  v.plausibleMax === undefined ||
+  v.plausibleMin < v.plausibleMax;
 
 /** Creating a test in the Test library. */
 export const testCreateSchema = z

@@ -53,7 +53,12 @@ export const SQUAD_VERDICT_SENTENCES: Record<Verdict, string> = {
 };
 
 /** How the report's SWC was obtained, e.g. "0.2 × between-athlete SD of the first session's scores". */
-export function swcSourceWords(method: "sd-factor" | "fixed" | "cv-factor", value: number, unit: string, fromTest: boolean): string {
+export function swcSourceWords(
+  method: "sd-factor" | "fixed" | "cv-factor",
+  value: number,
+  unit: string,
+  fromTest: boolean,
+): string {
   const how =
     method === "sd-factor"
       ? `${value} × between-athlete SD of the first session's scores`

@@ -17,15 +17,23 @@ type Violation = { id: string; impact: string | null; nodes: { target: string[] 
 async function audit(page: Page, name: string) {
   await page.addScriptTag({ path: axePath });
   const violations = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, o: object) => Promise<{ violations: unknown[] }> } }).axe;
-    const result = await axe.run(document, { runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"] } });
+    const axe = (
+      window as unknown as { axe: { run: (ctx: Document, o: object) => Promise<{ violations: unknown[] }> } }
+    ).axe;
+    const result = await axe.run(document, {
+      runOnly: { type: "tag", values: ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22aa"] },
+    });
     return result.violations;
   });
   const sideways = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
   await screenshot(page, name);
   return {
     violations: (violations as Violation[]).map(
-      (v) => `${v.id} (${v.impact}) ×${v.nodes.length}: ${v.nodes.slice(0, 3).map((n) => n.target.join(" ")).join(", ")}`,
+      (v) =>
+        `${v.id} (${v.impact}) ×${v.nodes.length}: ${v.nodes
+          .slice(0, 3)
+          .map((n) => n.target.join(" "))
+          .join(", ")}`,
     ),
     sideways,
   };
@@ -41,7 +49,15 @@ describe("accessibility and fit of every screen", () => {
     await http.signIn("scientist@example.com");
     const sessions = (await http.json("/api/sessions")).json.sessions as { id: number }[];
     const squads = (await http.json("/api/squads")).json.squads as { id: number }[];
-    paths = ["/", "/squads", `/squads/${squads[0].id}`, "/tests", "/sessions", `/sessions/${sessions[0].id}`, `/sessions/${sessions[0].id}/import`];
+    paths = [
+      "/",
+      "/squads",
+      `/squads/${squads[0].id}`,
+      "/tests",
+      "/sessions",
+      `/sessions/${sessions[0].id}`,
+      `/sessions/${sessions[0].id}/import`,
+    ];
   });
   afterAll(() => browser?.close());
 

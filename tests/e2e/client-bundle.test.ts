@@ -16,7 +16,15 @@ function scripts(dir: string): string[] {
 }
 
 // Names that exist only in db/schema.ts (table and column names, drizzle's table classes).
-const SCHEMA_MARKERS = ["SQLiteTable", "sqliteTable", "password_reset_tokens", "sign_in_attempts", "password_hash", "organization_id", "audit_events"];
+const SCHEMA_MARKERS = [
+  "SQLiteTable",
+  "sqliteTable",
+  "password_reset_tokens",
+  "sign_in_attempts",
+  "password_hash",
+  "organization_id",
+  "audit_events",
+];
 
 describe("client bundle", () => {
   it("holds no schema or table names", () => {
@@ -25,7 +33,8 @@ describe("client bundle", () => {
     const hits: string[] = [];
     for (const file of files) {
       const text = readFileSync(file, "utf8");
-      for (const marker of SCHEMA_MARKERS) if (text.includes(marker)) hits.push(`${file.slice(STATIC.length + 1)}: ${marker}`);
+      for (const marker of SCHEMA_MARKERS)
+        if (text.includes(marker)) hits.push(`${file.slice(STATIC.length + 1)}: ${marker}`);
     }
     expect(hits).toEqual([]);
   });

@@ -13,7 +13,10 @@ describe("Import over HTTP against the production build", () => {
     const send = async (bytes: Uint8Array, name: string) => {
       const form = new FormData();
       form.set("file", new File([bytes as BlobPart], name, { type: "text/csv" }));
-      const response = await http.fetch(`/api/sessions/${session.id}/import?mode=preview`, { method: "POST", body: form });
+      const response = await http.fetch(`/api/sessions/${session.id}/import?mode=preview`, {
+        method: "POST",
+        body: form,
+      });
       return { status: response.status, json: await response.json() };
     };
     const big = await send(new Uint8Array(10 * 1024 * 1024 + 10).fill(0x31), "big.csv");
@@ -21,7 +24,10 @@ describe("Import over HTTP against the production build", () => {
     expect(big.json.error.message).toMatch(/larger than 10 MB/);
     const binary = await send(new Uint8Array([0x50, 0x4b, 3, 4, 0, 0, 0, 0]), "book.xlsx");
     expect(binary.status).toBe(415);
-    const fine = await send(new TextEncoder().encode("athlete,test,trial,value\nNHW001,Countermovement jump,1,33.3\n"), "ok.csv");
+    const fine = await send(
+      new TextEncoder().encode("athlete,test,trial,value\nNHW001,Countermovement jump,1,33.3\n"),
+      "ok.csv",
+    );
     expect(fine.status).toBe(200);
     expect(fine.json).toMatchObject({ mode: "preview", format: "long", canCommit: true });
   });
@@ -40,7 +46,12 @@ describe("Import in the browser", () => {
     const created = await coach.json("/api/sessions", {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ squadId: squads.find((s: any) => s.name === "Academy U18").id, date: "2026-11-23", phase: "retest", testIds }),
+      body: JSON.stringify({
+        squadId: squads.find((s: any) => s.name === "Academy U18").id,
+        date: "2026-11-23",
+        phase: "retest",
+        testIds,
+      }),
     });
     expect(created.status).toBe(201);
     session.id = created.json.session.id;
@@ -64,14 +75,19 @@ describe("Import in the browser", () => {
       "NHA008,10 m sprint,1,1.84",
       "NHA008,10 m sprint,1,1.83",
     ].join("\n");
-    await page.locator('input[type="file"]').setInputFiles({ name: "gates-export.csv", mimeType: "text/csv", buffer: Buffer.from(bad) });
+    await page
+      .locator('input[type="file"]')
+      .setInputFiles({ name: "gates-export.csv", mimeType: "text/csv", buffer: Buffer.from(bad) });
     await page.getByRole("heading", { name: /problems to fix before importing/ }).waitFor();
     expect(await page.getByRole("button", { name: /^Import \d+ results?$/ }).isDisabled()).toBe(true);
     await expect.poll(() => page.getByRole("cell", { name: /No athlete “Zed Unknown”/ }).count()).toBeGreaterThan(0);
     await screenshot(page, "import-preview-errors");
 
-    const good = "\uFEFFathlete;Countermovement jump 1;Countermovement jump #2;10 m sprint (trial 1);Position\r\nNHA008;39,4;40,1;1,84;MF\r\n";
-    await page.locator('input[type="file"]').setInputFiles({ name: "sheet.csv", mimeType: "text/csv", buffer: Buffer.from(good) });
+    const good =
+      "\uFEFFathlete;Countermovement jump 1;Countermovement jump #2;10 m sprint (trial 1);Position\r\nNHA008;39,4;40,1;1,84;MF\r\n";
+    await page
+      .locator('input[type="file"]')
+      .setInputFiles({ name: "sheet.csv", mimeType: "text/csv", buffer: Buffer.from(good) });
     const importButton = page.getByRole("button", { name: "Import 2 results" });
     await importButton.waitFor();
     expect(await importButton.isEnabled()).toBe(true);
@@ -90,7 +106,11 @@ describe("Import in the browser", () => {
     await page.goto(`${baseUrl}/sessions/${session.id}/import`);
     const input = page.locator('input[type="file"]');
 
-    await input.setInputFiles({ name: "jumps.csv", mimeType: "text/csv", buffer: Buffer.from("athlete,CMJ a\nNHA008,41.0\n") });
+    await input.setInputFiles({
+      name: "jumps.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from("athlete,CMJ a\nNHA008,41.0\n"),
+    });
     await page.getByRole("heading", { name: /1 problem to fix/ }).waitFor();
     await page.getByLabel("Test for column CMJ a").selectOption({ label: "Countermovement jump (cm)" });
     await page.getByLabel("Trial for column CMJ a").selectOption("3");
@@ -102,7 +122,11 @@ describe("Import in the browser", () => {
     await page.getByRole("heading", { name: "Imported 1 result" }).waitFor();
 
     await page.getByRole("button", { name: "Import another file" }).click();
-    await input.setInputFiles({ name: "fix.csv", mimeType: "text/csv", buffer: Buffer.from("athlete,Countermovement jump 1\nNHA008,39.9\n") });
+    await input.setInputFiles({
+      name: "fix.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from("athlete,Countermovement jump 1\nNHA008,39.9\n"),
+    });
     await page.getByRole("heading", { name: "1 stored value would be replaced" }).waitFor();
     const replaceButton = page.getByRole("button", { name: "Import 1 result" });
     expect(await replaceButton.isDisabled()).toBe(true);
@@ -113,7 +137,10 @@ describe("Import in the browser", () => {
     const sheet = await (await page.request.get(`${baseUrl}/api/sessions/${session.id}`)).json();
     const luca = sheet.athletes.find((a: any) => a.name === "Luca Dempsey");
     const cmj = sheet.tests.find((t: any) => t.name === "Countermovement jump");
-    expect(sheet.results.find((r: any) => r.athleteId === luca.id && r.testId === cmj.id)).toMatchObject({ trials: [39.9, 40.1, 41], value: 41 });
+    expect(sheet.results.find((r: any) => r.athleteId === luca.id && r.testId === cmj.id)).toMatchObject({
+      trials: [39.9, 40.1, 41],
+      value: 41,
+    });
     await page.close();
   });
 });

@@ -18,7 +18,9 @@ describe("server-prefetched pages", () => {
     const scientist = new HttpSession(baseUrl);
     await scientist.signIn("scientist@example.com");
     const { json } = await scientist.json("/api/sessions");
-    const busiest = json.sessions.reduce((a: { resultCount: number }, b: { resultCount: number }) => (b.resultCount > a.resultCount ? b : a));
+    const busiest = json.sessions.reduce((a: { resultCount: number }, b: { resultCount: number }) =>
+      b.resultCount > a.resultCount ? b : a,
+    );
     const sheet = await scientist.json(`/api/sessions/${busiest.id}`);
     const squads = await scientist.json("/api/squads");
 
@@ -33,7 +35,9 @@ describe("server-prefetched pages", () => {
     for (const [path, expected] of pages) {
       const body = await html(scientist, path);
       for (const text of expected) expect(body, `${path} holds ${text}`).toContain(text.replaceAll("&", "&amp;"));
-      expect(body, `${path} has no client loading line`).not.toMatch(/Loading (the Session sheet|squads|sessions|the Test library|athletes|changes)…/);
+      expect(body, `${path} has no client loading line`).not.toMatch(
+        /Loading (the Session sheet|squads|sessions|the Test library|athletes|changes)…/,
+      );
     }
 
     const athlete = new HttpSession(baseUrl);

@@ -17,14 +17,18 @@ type Answer = { status: number; headers: Headers };
 function raw(method: string, path: string, headers: Record<string, string> = {}, body?: string): Promise<Answer> {
   return new Promise((resolve, reject) => {
     const url = new URL(path, baseUrl);
-    const req = http.request({ host: url.hostname, port: url.port, path: url.pathname + url.search, method, headers }, (res) => {
-      res.resume();
-      res.on("end", () => {
-        const out = new Headers();
-        for (const [k, v] of Object.entries(res.headers)) if (v !== undefined) out.set(k, Array.isArray(v) ? v.join(", ") : v);
-        resolve({ status: res.statusCode ?? 0, headers: out });
-      });
-    });
+    const req = http.request(
+      { host: url.hostname, port: url.port, path: url.pathname + url.search, method, headers },
+      (res) => {
+        res.resume();
+        res.on("end", () => {
+          const out = new Headers();
+          for (const [k, v] of Object.entries(res.headers))
+            if (v !== undefined) out.set(k, Array.isArray(v) ? v.join(", ") : v);
+          resolve({ status: res.statusCode ?? 0, headers: out });
+        });
+      },
+    );
     req.on("error", reject);
     req.end(body);
   });
@@ -71,14 +75,31 @@ describe("headers on every kind of response", () => {
       ["GET /api/me", await scientist.fetch("/api/me")],
       ["GET /api/me signed out", await new HttpSession(baseUrl).fetch("/api/me")],
       ["API 404", await scientist.fetch("/api/nothing-here")],
-      ["API POST with a body", await scientist.fetch("/api/tests", { method: "POST", headers: { "content-type": "application/json" }, body: "{}" })],
+      [
+        "API POST with a body",
+        await scientist.fetch("/api/tests", {
+          method: "POST",
+          headers: { "content-type": "application/json" },
+          body: "{}",
+        }),
+      ],
       ["next-auth session", await scientist.fetch("/api/auth/session")],
     ];
     const statuses = Object.fromEntries(answers.map(([what, a]) => [what, a.status]));
-    expect(statuses).toMatchObject({ "sign-in page": 200, "home page": 200, "static script": 200, "page 404": 404, "redirect to sign-in": 307, "GET /api/me": 200, "API 404": 404, "API POST with a body": 422 });
+    expect(statuses).toMatchObject({
+      "sign-in page": 200,
+      "home page": 200,
+      "static script": 200,
+      "page 404": 404,
+      "redirect to sign-in": 307,
+      "GET /api/me": 200,
+      "API 404": 404,
+      "API POST with a body": 422,
+    });
     for (const [what, answer] of answers) {
       expectSecurityHeaders(what, answer.headers);
-      if (what.includes("API") || what.includes("api") || what.includes("next-auth")) expect(answer.headers.get("cache-control"), what).toContain("no-store");
+      if (what.includes("API") || what.includes("api") || what.includes("next-auth"))
+        expect(answer.headers.get("cache-control"), what).toContain("no-store");
     }
     // A page's policy is per request; API answers load nothing.
     expect((await scientist.fetch("/")).headers.get("content-security-policy")).not.toContain(nonce!);
@@ -93,7 +114,11 @@ describe("methods an address does not take", () => {
     const options = await raw("OPTIONS", "/api/me");
     expect(options.status).toBe(204);
     expect(options.headers.get("allow")).toBe("GET, HEAD, OPTIONS");
-    for (const [method, body] of [["TRACE", undefined], ["PATCH", undefined], ["DELETE", undefined]] as const) {
+    for (const [method, body] of [
+      ["TRACE", undefined],
+      ["PATCH", undefined],
+      ["DELETE", undefined],
+    ] as const) {
       const answer = await raw(method, "/api/me", {}, body);
       expect(answer.status, method).toBe(405);
       expect(answer.headers.get("allow"), method).toBe("GET, HEAD, OPTIONS");
@@ -110,7 +135,12 @@ describe("methods an address does not take", () => {
 
   it("pages take GET and HEAD only", async () => {
     for (const method of ["TRACE", "POST", "PUT", "DELETE"]) {
-      const answer = await raw(method, "/sign-in", method === "POST" ? { "content-type": "application/x-www-form-urlencoded" } : {}, method === "POST" ? "a=1" : undefined);
+      const answer = await raw(
+        method,
+        "/sign-in",
+        method === "POST" ? { "content-type": "application/x-www-form-urlencoded" } : {},
+        method === "POST" ? "a=1" : undefined,
+      );
       expect(answer.status, method).toBe(405);
       expect(answer.headers.get("allow"), method).toBe("GET, HEAD");
     }
@@ -125,7 +155,8 @@ describe("the pages under the policy, in the browser", () => {
   const problems: string[] = [];
   const watch = (page: Page) => {
     page.on("console", (message: ConsoleMessage) => {
-      if (message.type() === "error" && /Content[ -]Security[ -]Policy|Refused to/i.test(message.text())) problems.push(message.text());
+      if (message.type() === "error" && /Content[ -]Security[ -]Policy|Refused to/i.test(message.text()))
+        problems.push(message.text());
     });
     page.on("pageerror", (error) => problems.push(`page error: ${error.message}`));
   };
@@ -133,12 +164,15 @@ describe("the pages under the policy, in the browser", () => {
     browser = await openBrowser();
     // Reports every violation, including ones the console would fold together.
     await browser.context.addInitScript(() => {
-      document.addEventListener("securitypolicyviolation", (e) => console.error(`Content-Security-Policy violation: ${e.violatedDirective} ${e.blockedURI}`));
+      document.addEventListener("securitypolicyviolation", (e) =>
+        console.error(`Content-Security-Policy violation: ${e.violatedDirective} ${e.blockedURI}`),
+      );
     });
   });
   afterAll(async () => browser?.close());
 
-  const hydrated = (page: Page) => page.waitForFunction(() => Boolean((window as unknown as { next?: { version?: string } }).next?.version));
+  const hydrated = (page: Page) =>
+    page.waitForFunction(() => Boolean((window as unknown as { next?: { version?: string } }).next?.version));
 
   it("sign-in, home, Session sheet and Import run as a scientist with no violation", async () => {
     const page = await browser.context.newPage();
@@ -147,7 +181,10 @@ describe("the pages under the policy, in the browser", () => {
     await hydrated(page);
     await signInThroughForm(page, baseUrl, "scientist@example.com");
     await hydrated(page);
-    await page.getByRole("link", { name: /Sessions/ }).first().waitFor();
+    await page
+      .getByRole("link", { name: /Sessions/ })
+      .first()
+      .waitFor();
 
     const http = new HttpSession(baseUrl);
     await http.signIn("scientist@example.com");

@@ -17,11 +17,24 @@ describe("Edit session from the Session sheet", () => {
     ids.sprint = tests.find((t: any) => t.name === "10 m sprint").id;
     const post = (path: string, body: unknown, method = "POST") =>
       http.json(path, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-    const created = await post("/api/sessions", { squadId: squads.find((s: any) => s.name === "Senior Women").id, date: "2026-11-30", phase: "in-season", testIds: [ids.cmj] });
+    const created = await post("/api/sessions", {
+      squadId: squads.find((s: any) => s.name === "Senior Women").id,
+      date: "2026-11-30",
+      phase: "in-season",
+      testIds: [ids.cmj],
+    });
     ids.session = created.json.session.id;
     const sheet = (await http.json(`/api/sessions/${ids.session}`)).json;
     ids.athlete = sheet.athletes[0].id;
-    expect((await post(`/api/sessions/${ids.session}/results`, { results: [{ athleteId: ids.athlete, testId: ids.cmj, trials: [33.1], flag: null, version: null }] }, "PUT")).status).toBe(200);
+    expect(
+      (
+        await post(
+          `/api/sessions/${ids.session}/results`,
+          { results: [{ athleteId: ids.athlete, testId: ids.cmj, trials: [33.1], flag: null, version: null }] },
+          "PUT",
+        )
+      ).status,
+    ).toBe(200);
     browser = await openBrowser();
   });
   afterAll(async () => browser?.close());
@@ -39,7 +52,10 @@ describe("Edit session from the Session sheet", () => {
     await screenshot(page, "session-edit");
     await dialog.getByRole("button", { name: "Save session" }).click();
     await page.getByText("The session was saved.").waitFor();
-    await page.getByText(/Retest/).first().waitFor();
+    await page
+      .getByText(/Retest/)
+      .first()
+      .waitFor();
 
     const { json } = await http.json(`/api/sessions/${ids.session}`);
     expect(json.session.phase).toBe("retest");

@@ -5,7 +5,14 @@ import { HttpSession } from "../helpers/http";
 
 const baseUrl = inject("baseUrl");
 
-type Row = { athleteId: number; testId: number; trials: (number | null)[]; flag: string | null; version: number; updatedByName: string | null };
+type Row = {
+  athleteId: number;
+  testId: number;
+  trials: (number | null)[];
+  flag: string | null;
+  version: number;
+  updatedByName: string | null;
+};
 type Sheet = {
   session: { id: number };
   tests: { id: number; name: string }[];
@@ -15,7 +22,8 @@ type Sheet = {
 
 const CMJ = "Countermovement jump";
 const SPRINT = "10 m sprint";
-const trial = (page: Page, athlete: string, test: string, n: number) => page.getByLabel(`${athlete}, ${test}, trial ${n}`, { exact: true });
+const trial = (page: Page, athlete: string, test: string, n: number) =>
+  page.getByLabel(`${athlete}, ${test}, trial ${n}`, { exact: true });
 
 async function readSheet(http: HttpSession, sessionId: number) {
   const { status, json } = await http.json(`/api/sessions/${sessionId}`);
@@ -66,10 +74,14 @@ describe("Session sheet in the browser (coach, Academy U18 post-block)", () => {
     await page.keyboard.type("41.5");
     await page.keyboard.press("Enter");
     // Enter goes down to where the run of Tabs began: the next athlete's first trial.
-    expect(await page.evaluate(() => document.activeElement?.getAttribute("aria-label"))).toBe(`Mateo Rusk, ${CMJ}, trial 1`);
+    expect(await page.evaluate(() => document.activeElement?.getAttribute("aria-label"))).toBe(
+      `Mateo Rusk, ${CMJ}, trial 1`,
+    );
     await page.keyboard.type("39.9");
     await page.keyboard.press("Enter");
-    expect(await page.evaluate(() => document.activeElement?.getAttribute("aria-label"))).toBe(`Oskar Nwosu, ${CMJ}, trial 1`);
+    expect(await page.evaluate(() => document.activeElement?.getAttribute("aria-label"))).toBe(
+      `Oskar Nwosu, ${CMJ}, trial 1`,
+    );
 
     await page.getByRole("status", { name: `Saved Luca Dempsey, ${CMJ}` }).waitFor();
     await page.getByRole("status", { name: `Saved Mateo Rusk, ${CMJ}` }).waitFor();
@@ -121,7 +133,16 @@ describe("Session sheet in the browser (coach, Academy U18 post-block)", () => {
       method: "PUT",
       headers: { "content-type": "application/json" },
       body: JSON.stringify({
-        results: [{ athleteId: mateo.athleteId, testId: mateo.testId, trials: [38.0, 38.5, 38.1], flag: null, note: null, version: mateo.row!.version }],
+        results: [
+          {
+            athleteId: mateo.athleteId,
+            testId: mateo.testId,
+            trials: [38.0, 38.5, 38.1],
+            flag: null,
+            note: null,
+            version: mateo.row!.version,
+          },
+        ],
       }),
     });
     expect(put.status).toBe(200);
@@ -156,7 +177,9 @@ describe("Session sheet in the browser (coach, Academy U18 post-block)", () => {
     await page.evaluate(() => {
       const data = new DataTransfer();
       data.setData("text/plain", "1.90\t1,88\t1.93\n1.95\t1.97\t1.94\n");
-      document.activeElement?.dispatchEvent(new ClipboardEvent("paste", { clipboardData: data, bubbles: true, cancelable: true }));
+      document.activeElement?.dispatchEvent(
+        new ClipboardEvent("paste", { clipboardData: data, bubbles: true, cancelable: true }),
+      );
     });
     await page.getByText("Pasted 6 values.").waitFor();
     await page.getByRole("status", { name: `Saved Luca Dempsey, ${SPRINT}` }).waitFor();
@@ -172,7 +195,18 @@ describe("Session sheet in the browser (coach, Academy U18 post-block)", () => {
     const put = await scientist.json(`/api/sessions/${sessionId}/results`, {
       method: "PUT",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ results: [{ athleteId: luca.athleteId, testId: luca.testId, trials: [42.0, 40.8, 41.5], flag: null, note: null, version: luca.row!.version }] }),
+      body: JSON.stringify({
+        results: [
+          {
+            athleteId: luca.athleteId,
+            testId: luca.testId,
+            trials: [42.0, 40.8, 41.5],
+            flag: null,
+            note: null,
+            version: luca.row!.version,
+          },
+        ],
+      }),
     });
     expect(put.status).toBe(200);
     await trial(page, "Luca Dempsey", CMJ, 3).click();
@@ -264,7 +298,10 @@ describe("other Capture screens render for the owner", () => {
     await dialog.getByLabel("Unit", { exact: true }).fill("cm");
     await dialog.getByLabel(/Higher is better/).check();
     await dialog.getByRole("button", { name: "Add test" }).click();
-    await dialog.getByText(/already exists/).first().waitFor();
+    await dialog
+      .getByText(/already exists/)
+      .first()
+      .waitFor();
     expect(await dialog.getByLabel("Name", { exact: true }).getAttribute("aria-invalid")).toBe("true");
 
     await dialog.getByLabel("Name", { exact: true }).fill("Standing broad jump");
@@ -289,7 +326,10 @@ describe("other Capture screens render for the owner", () => {
     await page.getByRole("columnheader", { name: /Standing broad jump/ }).waitFor();
     expect(await page.getByText("0 of 24 results").count()).toBe(1);
     await page.getByRole("button", { name: "Publish…" }).click();
-    await page.getByRole("dialog", { name: "Publish this session?" }).getByText(/will see their own results/).waitFor();
+    await page
+      .getByRole("dialog", { name: "Publish this session?" })
+      .getByText(/will see their own results/)
+      .waitFor();
     await screenshot(page, "publish-confirm");
     await page.getByRole("button", { name: "Cancel" }).click();
     await page.close();

@@ -5,7 +5,8 @@ const baseUrl = inject("baseUrl");
 
 /** A signed-out page visit: a redirect to sign-in, before or (streamed) after the first byte. */
 async function sentToSignIn(response: Response): Promise<boolean> {
-  if (response.status >= 300 && response.status < 400) return (response.headers.get("location") ?? "").includes("/sign-in");
+  if (response.status >= 300 && response.status < 400)
+    return (response.headers.get("location") ?? "").includes("/sign-in");
   const html = await response.text();
   return /__next-page-redirect[^>]*url=\/sign-in|NEXT_REDIRECT;[^"]*\/sign-in/.test(html);
 }
@@ -41,7 +42,12 @@ describe("sign-out over HTTP against the production build", () => {
     const response = await browser.fetch("/api/auth/callback/credentials", {
       method: "POST",
       headers: { "content-type": "application/x-www-form-urlencoded" },
-      body: new URLSearchParams({ csrfToken: json.csrfToken, email: "scientist@example.com", password: "changewise-demo", json: "true" }),
+      body: new URLSearchParams({
+        csrfToken: json.csrfToken,
+        email: "scientist@example.com",
+        password: "changewise-demo",
+        json: "true",
+      }),
     });
     const line = response.headers.getSetCookie().find((l) => l.startsWith("next-auth.session-token=")) ?? "";
     expect(line).toMatch(/;\s*HttpOnly/i);

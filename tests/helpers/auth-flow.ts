@@ -18,7 +18,10 @@ export const headersMock = {
         .map((pair) => pair.trim())
         .filter(Boolean)
         // Next's cookies() hands values over decoded.
-        .map((pair) => ({ name: pair.slice(0, pair.indexOf("=")), value: decodeURIComponent(pair.slice(pair.indexOf("=") + 1)) })),
+        .map((pair) => ({
+          name: pair.slice(0, pair.indexOf("=")),
+          value: decodeURIComponent(pair.slice(pair.indexOf("=") + 1)),
+        })),
   }),
 };
 

@@ -1,7 +1,7 @@
 import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { chromium, type BrowserContext, type Page } from "playwright-core";
+import { type BrowserContext, chromium, type Page } from "playwright-core";
 
 export const ARTIFACTS = "tests/.artifacts";
 

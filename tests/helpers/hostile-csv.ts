@@ -36,12 +36,60 @@ function utf16(text: string, bigEndian: boolean, bom: boolean) {
   return out;
 }
 
-const ATHLETES = ["NHA001", "NHA002", "NHA003", "NHA004", "Jonah Pellegrini", "Callum Adeyemi", "Zed Unknown", "=cmd|' /C calc'!A0", ""];
-const TESTS = ["Countermovement jump", "10 m sprint", "30 m sprint", "Back squat 1RM", "Intermittent recovery run (level 1)", "Broad jump", ""];
-const FORMULAS = ['=HYPERLINK("http://example.invalid/x","click")', "=1+1", "+SUM(A1:A9)", "-2+3", "@SUM(1)", "=cmd|' /C calc'!A0", '"=IMPORTXML(A1,""//a"")"'];
+const ATHLETES = [
+  "NHA001",
+  "NHA002",
+  "NHA003",
+  "NHA004",
+  "Jonah Pellegrini",
+  "Callum Adeyemi",
+  "Zed Unknown",
+  "=cmd|' /C calc'!A0",
+  "",
+];
+const TESTS = [
+  "Countermovement jump",
+  "10 m sprint",
+  "30 m sprint",
+  "Back squat 1RM",
+  "Intermittent recovery run (level 1)",
+  "Broad jump",
+  "",
+];
+const FORMULAS = [
+  '=HYPERLINK("http://example.invalid/x","click")',
+  "=1+1",
+  "+SUM(A1:A9)",
+  "-2+3",
+  "@SUM(1)",
+  "=cmd|' /C calc'!A0",
+  '"=IMPORTXML(A1,""//a"")"',
+];
 const NUMBERS = [
-  "1e308", "-1e308", `1${"0".repeat(400)}`, `-1${"0".repeat(308)}`, `1${"0".repeat(308)}`, "NaN", "Infinity", "-Infinity", "∞", "-∞",
-  "1e-400", "0x1F", "1_000", "1,5", "1.5.5", "٣٤", "４２", "1000000001", "-0", "0.000000000000000000001", "999999999.99", "41.2", "1.83", "",
+  "1e308",
+  "-1e308",
+  `1${"0".repeat(400)}`,
+  `-1${"0".repeat(308)}`,
+  `1${"0".repeat(308)}`,
+  "NaN",
+  "Infinity",
+  "-Infinity",
+  "∞",
+  "-∞",
+  "1e-400",
+  "0x1F",
+  "1_000",
+  "1,5",
+  "1.5.5",
+  "٣٤",
+  "４２",
+  "1000000001",
+  "-0",
+  "0.000000000000000000001",
+  "999999999.99",
+  "41.2",
+  "1.83",
+  "",
 ];
 const DELIMITERS = [",", ";", "\t", "|"];
 
@@ -57,15 +105,23 @@ function cell(r: Random): string {
 function longFile(r: Random, rows: number, delimiter = ",") {
   const lines = [["athlete", "test", "trial", "value"].join(delimiter)];
   for (let i = 0; i < rows; i++) {
-    lines.push([r.pick(ATHLETES), r.pick(TESTS), String(r.int(0, 4)), r.next() < 0.5 ? r.pick(NUMBERS) : cell(r)].join(delimiter));
+    lines.push(
+      [r.pick(ATHLETES), r.pick(TESTS), String(r.int(0, 4)), r.next() < 0.5 ? r.pick(NUMBERS) : cell(r)].join(
+        delimiter,
+      ),
+    );
   }
   return lines.join(r.pick(["\n", "\r\n", "\r"]));
 }
 
 function wideFile(r: Random, columns: number, rows: number) {
-  const headers = ["athlete", ...Array.from({ length: columns }, (_, i) => (r.next() < 0.3 ? r.pick(TESTS) : `${r.pick(TESTS)} ${(i % 4) + 1}`))];
+  const headers = [
+    "athlete",
+    ...Array.from({ length: columns }, (_, i) => (r.next() < 0.3 ? r.pick(TESTS) : `${r.pick(TESTS)} ${(i % 4) + 1}`)),
+  ];
   const lines = [headers.join(",")];
-  for (let i = 0; i < rows; i++) lines.push([r.pick(ATHLETES), ...Array.from({ length: columns }, () => r.pick(NUMBERS))].join(","));
+  for (let i = 0; i < rows; i++)
+    lines.push([r.pick(ATHLETES), ...Array.from({ length: columns }, () => r.pick(NUMBERS))].join(","));
   return lines.join("\n");
 }
 
@@ -85,23 +141,76 @@ function mutate(r: Random, bytes: Uint8Array) {
 
 const KINDS: [string, (r: Random) => Uint8Array][] = [
   ["random bytes", (r) => Uint8Array.from({ length: r.int(1, 3000) }, () => r.int(0, 255))],
-  ["random printable text", (r) => utf8(Array.from({ length: r.int(1, 3000) }, () => String.fromCharCode(r.int(32, 126))).join(""))],
+  [
+    "random printable text",
+    (r) => utf8(Array.from({ length: r.int(1, 3000) }, () => String.fromCharCode(r.int(32, 126))).join("")),
+  ],
   ["UTF-16 LE with BOM", (r) => utf16(longFile(r, r.int(1, 20)), false, true)],
   ["UTF-16 BE with BOM", (r) => utf16(longFile(r, r.int(1, 20)), true, true)],
   ["UTF-16 LE without BOM", (r) => utf16(longFile(r, r.int(1, 20)), false, false)],
-  ["Latin-1", (r) => latin1(`athlete;test;trial;value\nJosé Müller;Countermovement jump;1;${r.int(20, 60)},5\nÅsa Ødegård;10 m sprint;1;1,8\n`)],
+  [
+    "Latin-1",
+    (r) =>
+      latin1(
+        `athlete;test;trial;value\nJosé Müller;Countermovement jump;1;${r.int(20, 60)},5\nÅsa Ødegård;10 m sprint;1;1,8\n`,
+      ),
+  ],
   ["UTF-8 BOM twice", (r) => utf8(`\uFEFF\uFEFF${longFile(r, r.int(1, 10))}`)],
-  ["blank-line flood", (r) => utf8(`${r.pick(["\n", "\r\n", "\r", " \n", ",,,\n"]).repeat(r.int(100, 20_000))}${longFile(r, r.int(0, 5))}`)],
-  ["one line, no line break", (r) => utf8(Array.from({ length: r.int(1, 2000) }, () => cell(r)).join(r.pick(DELIMITERS)))],
-  ["huge field", (r) => utf8(`athlete,test,trial,value\nNHA001,${r.next() < 0.5 ? `"${"x,\n".repeat(r.int(1000, 20_000))}"` : "y".repeat(r.int(1000, 60_000))},1,40\n`)],
-  ["unclosed quote", (r) => utf8(`${longFile(r, r.int(0, 10))}\nNHA001,"Countermovement jump,1,4${"1\n".repeat(r.int(0, 50))}`)],
-  ["misplaced quotes", (r) => utf8(`athlete,test,trial,value\n${'"NHA001"x,"Countermovement jump" ,1,"4"1\n'.repeat(r.int(1, 200))}`)],
-  ["formula cells", (r) => utf8(`athlete,test,trial,value\n${Array.from({ length: r.int(1, 30) }, () => [r.pick([...FORMULAS, "NHA001"]), r.pick([...FORMULAS, "10 m sprint"]), r.pick(["1", "=1", "+1"]), r.pick([...FORMULAS, "1.8"])].join(",")).join("\n")}`)],
-  ["extreme numbers", (r) => utf8(`athlete,test,trial,value\n${Array.from({ length: r.int(1, 30) }, () => `${r.pick(ATHLETES.slice(0, 4))},${r.pick(TESTS.slice(0, 4))},${r.int(1, 3)},${r.pick(NUMBERS)}`).join("\n")}`)],
+  [
+    "blank-line flood",
+    (r) =>
+      utf8(`${r.pick(["\n", "\r\n", "\r", " \n", ",,,\n"]).repeat(r.int(100, 20_000))}${longFile(r, r.int(0, 5))}`),
+  ],
+  [
+    "one line, no line break",
+    (r) => utf8(Array.from({ length: r.int(1, 2000) }, () => cell(r)).join(r.pick(DELIMITERS))),
+  ],
+  [
+    "huge field",
+    (r) =>
+      utf8(
+        `athlete,test,trial,value\nNHA001,${r.next() < 0.5 ? `"${"x,\n".repeat(r.int(1000, 20_000))}"` : "y".repeat(r.int(1000, 60_000))},1,40\n`,
+      ),
+  ],
+  [
+    "unclosed quote",
+    (r) => utf8(`${longFile(r, r.int(0, 10))}\nNHA001,"Countermovement jump,1,4${"1\n".repeat(r.int(0, 50))}`),
+  ],
+  [
+    "misplaced quotes",
+    (r) => utf8(`athlete,test,trial,value\n${'"NHA001"x,"Countermovement jump" ,1,"4"1\n'.repeat(r.int(1, 200))}`),
+  ],
+  [
+    "formula cells",
+    (r) =>
+      utf8(
+        `athlete,test,trial,value\n${Array.from({ length: r.int(1, 30) }, () => [r.pick([...FORMULAS, "NHA001"]), r.pick([...FORMULAS, "10 m sprint"]), r.pick(["1", "=1", "+1"]), r.pick([...FORMULAS, "1.8"])].join(",")).join("\n")}`,
+      ),
+  ],
+  [
+    "extreme numbers",
+    (r) =>
+      utf8(
+        `athlete,test,trial,value\n${Array.from({ length: r.int(1, 30) }, () => `${r.pick(ATHLETES.slice(0, 4))},${r.pick(TESTS.slice(0, 4))},${r.int(1, 3)},${r.pick(NUMBERS)}`).join("\n")}`,
+      ),
+  ],
   ["extreme numbers, wide", (r) => utf8(wideFile(r, r.int(1, 8), r.int(1, 20)))],
   ["10 000 columns", (r) => utf8(wideFile(r, 10_000, r.int(0, 2)))],
-  ["duplicate headers", (r) => utf8(`athlete,athlete,test,test,value,Value\n${Array.from({ length: r.int(1, 10) }, () => "NHA001,NHA002,10 m sprint,10 m sprint,1.8,1.9").join("\n")}`)],
-  ["NUL bytes", (r) => { const b = utf8(longFile(r, r.int(1, 10))); b[r.int(0, b.length - 1)] = 0; return b; }],
+  [
+    "duplicate headers",
+    (r) =>
+      utf8(
+        `athlete,athlete,test,test,value,Value\n${Array.from({ length: r.int(1, 10) }, () => "NHA001,NHA002,10 m sprint,10 m sprint,1.8,1.9").join("\n")}`,
+      ),
+  ],
+  [
+    "NUL bytes",
+    (r) => {
+      const b = utf8(longFile(r, r.int(1, 10)));
+      b[r.int(0, b.length - 1)] = 0;
+      return b;
+    },
+  ],
   ["mutated long file", (r) => mutate(r, utf8(longFile(r, r.int(1, 40), r.pick(DELIMITERS))))],
   ["mutated wide file", (r) => mutate(r, utf8(wideFile(r, r.int(1, 12), r.int(1, 20))))],
 ];
@@ -110,12 +219,26 @@ const KINDS: [string, (r: Random) => Uint8Array][] = [
 function bigFiles(r: Random): HostileFile[] {
   const MB = 1024 * 1024;
   return [
-    { kind: "big: 3 MB one line", bytes: utf8(Array.from({ length: (3 * MB) / 6 }, (_, i) => `h${i % 1000}`).join(",")) },
-    { kind: "big: 4 MB of blank lines", bytes: utf8(`${"\n".repeat(4 * MB)}athlete,test,trial,value\nNHA001,Back squat 1RM,1,${r.pick(NUMBERS)}\n`) },
+    {
+      kind: "big: 3 MB one line",
+      bytes: utf8(Array.from({ length: (3 * MB) / 6 }, (_, i) => `h${i % 1000}`).join(",")),
+    },
+    {
+      kind: "big: 4 MB of blank lines",
+      bytes: utf8(`${"\n".repeat(4 * MB)}athlete,test,trial,value\nNHA001,Back squat 1RM,1,${r.pick(NUMBERS)}\n`),
+    },
     { kind: "big: 3 MB random bytes", bytes: Uint8Array.from({ length: 3 * MB }, () => r.int(1, 255)) },
-    { kind: "big: 5 MB quoted field", bytes: utf8(`athlete,test,trial,value\nNHA001,"${'x""'.repeat((5 * MB) / 3)}",1,2\n`) },
+    {
+      kind: "big: 5 MB quoted field",
+      bytes: utf8(`athlete,test,trial,value\nNHA001,"${'x""'.repeat((5 * MB) / 3)}",1,2\n`),
+    },
     { kind: "big: 4 MB of delimiters", bytes: utf8(`athlete,test,trial,value\n${",".repeat(4 * MB)}`) },
-    { kind: "big: 2 MB of extreme numbers", bytes: utf8(`athlete,test,trial,value\n${`NHA002,Countermovement jump,1,1${"0".repeat(400)}\n`.repeat((2 * MB) / 440)}`) },
+    {
+      kind: "big: 2 MB of extreme numbers",
+      bytes: utf8(
+        `athlete,test,trial,value\n${`NHA002,Countermovement jump,1,1${"0".repeat(400)}\n`.repeat((2 * MB) / 440)}`,
+      ),
+    },
   ];
 }
 

@@ -9,7 +9,11 @@ export function uploadTo(
   handler: Handler,
   sessionId: number,
   content: string | Uint8Array,
-  { mode = "commit", fields = {}, filename = "scores.csv" }: { mode?: "preview" | "commit"; fields?: Record<string, string>; filename?: string } = {},
+  {
+    mode = "commit",
+    fields = {},
+    filename = "scores.csv",
+  }: { mode?: "preview" | "commit"; fields?: Record<string, string>; filename?: string } = {},
 ) {
   const form = new FormData();
   form.set("file", new File([content as BlobPart], filename, { type: "text/csv" }));
@@ -23,7 +27,11 @@ export function uploadTo(
 }
 
 /** A multipart body built ahead of time, so timing a request does not time building it. */
-export async function multipartBody(content: string | Uint8Array, fields: Record<string, string> = {}, filename = "scores.csv") {
+export async function multipartBody(
+  content: string | Uint8Array,
+  fields: Record<string, string> = {},
+  filename = "scores.csv",
+) {
   const form = new FormData();
   form.set("file", new File([content as BlobPart], filename, { type: "text/csv" }));
   for (const [k, v] of Object.entries(fields)) form.set(k, v);
@@ -32,7 +40,12 @@ export async function multipartBody(content: string | Uint8Array, fields: Record
 }
 
 /** Sends a prepared multipart body to the import handler; status and parsed JSON back. */
-export async function postPrepared(handler: Handler, sessionId: number, body: { bytes: Uint8Array; type: string }, mode: "preview" | "commit") {
+export async function postPrepared(
+  handler: Handler,
+  sessionId: number,
+  body: { bytes: Uint8Array; type: string },
+  mode: "preview" | "commit",
+) {
   const request = new Request(`http://test.local/api/sessions/${sessionId}/import?mode=${mode}`, {
     method: "POST",
     headers: { "content-type": body.type },
@@ -67,7 +80,9 @@ export async function storeChecksum(): Promise<string> {
  * for a core. `maxBusyMs` is the CPU time the process spent inside the longest-working gap,
  * which only our own work (and the garbage collector) fills: the robust figure to assert on.
  */
-export async function longestPause<T>(work: () => Promise<T>): Promise<{ result: T; maxGapMs: number; maxBusyMs: number; ms: number }> {
+export async function longestPause<T>(
+  work: () => Promise<T>,
+): Promise<{ result: T; maxGapMs: number; maxBusyMs: number; ms: number }> {
   const cpuMs = () => {
     const { user, system } = process.cpuUsage();
     return (user + system) / 1000;

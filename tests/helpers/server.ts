@@ -2,7 +2,7 @@
  * Serves the production build on a fresh seeded database: the browser tests and the page
  * benchmarks run against exactly what `npm run demo` serves.
  */
-import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import { type ChildProcess, spawn, spawnSync } from "node:child_process";
 import { existsSync, mkdtempSync, readdirSync, rmSync, statSync } from "node:fs";
 import { createServer } from "node:net";
 import { tmpdir } from "node:os";
@@ -16,7 +16,9 @@ function freePort(): Promise<number> {
     const server = createServer();
     server.listen(0, "127.0.0.1", () => {
       const address = server.address();
-      server.close(() => (typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port"))));
+      server.close(() =>
+        typeof address === "object" && address ? resolve(address.port) : reject(new Error("no port")),
+      );
     });
   });
 }
@@ -37,7 +39,14 @@ async function waitFor(url: string, child: ChildProcess, timeoutMs = 60_000) {
 }
 
 const SOURCE_DIRS = ["app", "components", "hooks", "lib", "db", "types"];
-const SOURCE_FILES = ["proxy.ts", "instrumentation.ts", "next.config.ts", "tailwind.config.ts", "postcss.config.mjs", "package-lock.json"];
+const SOURCE_FILES = [
+  "proxy.ts",
+  "instrumentation.ts",
+  "next.config.ts",
+  "tailwind.config.ts",
+  "postcss.config.mjs",
+  "package-lock.json",
+];
 
 function newestSourceChange(): number {
   let newest = 0;
@@ -61,7 +70,10 @@ export type RunningServer = { baseUrl: string; databaseUrl: string; stop: () => 
 /** Builds once if the build is missing or older than the code, then starts `next start` on a free port. */
 export async function startProductionServer(): Promise<RunningServer> {
   if (!buildIsCurrent() || process.env.E2E_BUILD === "1") {
-    const build = spawnSync("npx", ["next", "build"], { stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" } });
+    const build = spawnSync("npx", ["next", "build"], {
+      stdio: "inherit",
+      env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1" },
+    });
     if (build.status !== 0) throw new Error("next build failed");
   }
   const dir = mkdtempSync(join(tmpdir(), "changewise-e2e-"));

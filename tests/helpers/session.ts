@@ -34,8 +34,18 @@ type Handler<P> = (request: Request, context: { params: Promise<P> }) => Promise
 /** Calls a route handler the way Next does, and returns status and parsed JSON. */
 export async function call<P extends Record<string, string>>(
   handler: Handler<P>,
-  { url = "http://test.local/api", params = {} as P, method = "GET", body, headers = {} }: {
-    url?: string; params?: P; method?: string; body?: unknown; headers?: Record<string, string>;
+  {
+    url = "http://test.local/api",
+    params = {} as P,
+    method = "GET",
+    body,
+    headers = {},
+  }: {
+    url?: string;
+    params?: P;
+    method?: string;
+    body?: unknown;
+    headers?: Record<string, string>;
   } = {},
 ) {
   const init: RequestInit = { method, headers: { ...headers } };

@@ -32,7 +32,10 @@ type Row = [Status, Status, Status, Status, Status, Status, Status, Status];
 
 /** The records a row is aimed at: the demo club's Senior Women, or the other organisation's rowers. */
 type Target = {
-  squad: number; athlete: number; session: number; test: number;
+  squad: number;
+  athlete: number;
+  session: number;
+  test: number;
   /** An earlier session of the same squad that measured `test` too (the Change report's pair). */
   preSession: number;
   /** A cell that holds a result (version 1) on `session`'s sheet, and a score for it. */
@@ -52,7 +55,9 @@ type Entry =
       aimed?: boolean;
     };
 
-const sheetWrite = (t: Target) => ({ results: [{ athleteId: t.cell.athleteId, testId: t.cell.testId, trials: [t.cell.value], flag: null, version: 1 }] });
+const sheetWrite = (t: Target) => ({
+  results: [{ athleteId: t.cell.athleteId, testId: t.cell.testId, trials: [t.cell.value], flag: null, version: 1 }],
+});
 const csvForm = (t: Target) => {
   const form = new FormData();
   form.set("file", new File([`athlete,test,trial,value\n${t.csv}\n`], "scores.csv", { type: "text/csv" }));
@@ -62,42 +67,130 @@ const route = (path: string) => import(/* @vite-ignore */ `@/app/api${path}/rout
 
 //                                                anon owner sci coach coach2 self other otherOrg
 const MATRIX: Record<string, Entry> = {
-  "GET /api/me":                                   { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
-  "GET /api/squads":                               { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
-  "POST /api/squads":                              { expect: [401, 201, 403, 403, 403, 403, 403, 201], request: () => ({ body: { name: "Matrix squad" } }) },
-  "GET /api/squads/[squadId]":                     { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { squadId: `${t.squad}` } }) },
-  "PATCH /api/squads/[squadId]":                   { expect: [401, 200, 403, 403, 403, 403, 403, 404], aimed: true, request: (t) => ({ params: { squadId: `${t.squad}` }, body: { sport: "Mixed" } }) },
-  "GET /api/squads/[squadId]/athletes":            { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { squadId: `${t.squad}` } }) },
-  "POST /api/squads/[squadId]/athletes":           { expect: [401, 201, 201, 201, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { squadId: `${t.squad}` }, body: { name: "Matrix Newcomer" } }) },
-  "GET /api/athletes":                             { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
-  "GET /api/athletes/[athleteId]":                 { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { athleteId: `${t.athlete}` } }) },
-  "PATCH /api/athletes/[athleteId]":               { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { athleteId: `${t.athlete}` }, body: { position: "MF" } }) },
-  "GET /api/athletes/[athleteId]/results":         { expect: [401, 200, 200, 200, 404, 200, 404, 404], aimed: true, request: (t) => ({ params: { athleteId: `${t.athlete}` } }) },
-  "GET /api/coaches":                              { expect: [401, 200, 200, 403, 403, 403, 403, 200], request: () => ({}) },
-  "GET /api/tests":                                { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
-  "POST /api/tests":                               { expect: [401, 201, 201, 403, 403, 403, 403, 201], request: () => ({ body: { name: "Matrix hop", unit: "cm", direction: "higher" } }) },
-  "GET /api/tests/[testId]":                       { expect: [401, 200, 200, 200, 200, 200, 200, 404], aimed: true, request: (t) => ({ params: { testId: `${t.test}` } }) },
-  "PATCH /api/tests/[testId]":                     { expect: [401, 200, 200, 403, 403, 403, 403, 404], aimed: true, request: (t) => ({ params: { testId: `${t.test}` }, body: { version: 1, typicalErrorSource: "Matrix" } }) },
-  "DELETE /api/tests/[testId]":                    { expect: [401, 200, 200, 403, 403, 403, 403, 404], aimed: true, request: (t) => ({ params: { testId: `${t.test}` } }) },
-  "GET /api/sessions":                             { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
-  "POST /api/sessions":                            { expect: [401, 201, 201, 201, 404, 403, 403, 404], aimed: true, request: (t) => ({ body: { squadId: t.squad, date: "2026-12-01", phase: "retest", testIds: [t.test] } }) },
-  "GET /api/sessions/[sessionId]":                 { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` } }) },
-  "PATCH /api/sessions/[sessionId]":               { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` }, body: { version: 1, notes: "Matrix" } }) },
-  "PUT /api/sessions/[sessionId]/results":         { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` }, body: sheetWrite(t) }) },
-  "POST /api/sessions/[sessionId]/undo": {
-    expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true,
-    // Something of the caller's own to undo, where the caller may write at all.
-    setup: async (t) => call((await route("/sessions/[sessionId]/results")).PUT, { method: "PUT", params: { sessionId: `${t.session}` }, body: sheetWrite(t) }),
+  "GET /api/me": { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
+  "GET /api/squads": { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
+  "POST /api/squads": {
+    expect: [401, 201, 403, 403, 403, 403, 403, 201],
+    request: () => ({ body: { name: "Matrix squad" } }),
+  },
+  "GET /api/squads/[squadId]": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { squadId: `${t.squad}` } }),
+  },
+  "PATCH /api/squads/[squadId]": {
+    expect: [401, 200, 403, 403, 403, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { squadId: `${t.squad}` }, body: { sport: "Mixed" } }),
+  },
+  "GET /api/squads/[squadId]/athletes": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { squadId: `${t.squad}` } }),
+  },
+  "POST /api/squads/[squadId]/athletes": {
+    expect: [401, 201, 201, 201, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { squadId: `${t.squad}` }, body: { name: "Matrix Newcomer" } }),
+  },
+  "GET /api/athletes": { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
+  "GET /api/athletes/[athleteId]": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { athleteId: `${t.athlete}` } }),
+  },
+  "PATCH /api/athletes/[athleteId]": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { athleteId: `${t.athlete}` }, body: { position: "MF" } }),
+  },
+  "GET /api/athletes/[athleteId]/results": {
+    expect: [401, 200, 200, 200, 404, 200, 404, 404],
+    aimed: true,
+    request: (t) => ({ params: { athleteId: `${t.athlete}` } }),
+  },
+  "GET /api/coaches": { expect: [401, 200, 200, 403, 403, 403, 403, 200], request: () => ({}) },
+  "GET /api/tests": { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
+  "POST /api/tests": {
+    expect: [401, 201, 201, 403, 403, 403, 403, 201],
+    request: () => ({ body: { name: "Matrix hop", unit: "cm", direction: "higher" } }),
+  },
+  "GET /api/tests/[testId]": {
+    expect: [401, 200, 200, 200, 200, 200, 200, 404],
+    aimed: true,
+    request: (t) => ({ params: { testId: `${t.test}` } }),
+  },
+  "PATCH /api/tests/[testId]": {
+    expect: [401, 200, 200, 403, 403, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { testId: `${t.test}` }, body: { version: 1, typicalErrorSource: "Matrix" } }),
+  },
+  "DELETE /api/tests/[testId]": {
+    expect: [401, 200, 200, 403, 403, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { testId: `${t.test}` } }),
+  },
+  "GET /api/sessions": { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
+  "POST /api/sessions": {
+    expect: [401, 201, 201, 201, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ body: { squadId: t.squad, date: "2026-12-01", phase: "retest", testIds: [t.test] } }),
+  },
+  "GET /api/sessions/[sessionId]": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
     request: (t) => ({ params: { sessionId: `${t.session}` } }),
   },
-  "GET /api/sessions/[sessionId]/audit":           { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` } }) },
-  "POST /api/sessions/[sessionId]/import":         { expect: [401, 200, 200, 200, 404, 403, 403, 404], aimed: true, request: (t) => ({ params: { sessionId: `${t.session}` }, body: csvForm(t), url: "http://test.local/api?mode=preview" }) },
+  "PATCH /api/sessions/[sessionId]": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { sessionId: `${t.session}` }, body: { version: 1, notes: "Matrix" } }),
+  },
+  "PUT /api/sessions/[sessionId]/results": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { sessionId: `${t.session}` }, body: sheetWrite(t) }),
+  },
+  "POST /api/sessions/[sessionId]/undo": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    // Something of the caller's own to undo, where the caller may write at all.
+    setup: async (t) =>
+      call((await route("/sessions/[sessionId]/results")).PUT, {
+        method: "PUT",
+        params: { sessionId: `${t.session}` },
+        body: sheetWrite(t),
+      }),
+    request: (t) => ({ params: { sessionId: `${t.session}` } }),
+  },
+  "GET /api/sessions/[sessionId]/audit": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { sessionId: `${t.session}` } }),
+  },
+  "POST /api/sessions/[sessionId]/import": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({
+      params: { sessionId: `${t.session}` },
+      body: csvForm(t),
+      url: "http://test.local/api?mode=preview",
+    }),
+  },
   "GET /api/reports/change": {
     expect: [401, 200, 200, 200, 404, 403, 403, 404],
-    request: () => ({ url: `http://test.local/api/reports/change?testId=${club.test}&fromSessionId=${club.preSession}&toSessionId=${club.session}` }),
+    request: () => ({
+      url: `http://test.local/api/reports/change?testId=${club.test}&fromSessionId=${club.preSession}&toSessionId=${club.session}`,
+    }),
   },
-  "GET /api/auth/[...nextauth]": { exempt: "next-auth's own endpoints (csrf, providers, session): public by design; sign-in throttling and sign-out have their own tests" },
-  "POST /api/auth/[...nextauth]": { exempt: "next-auth's sign-in and sign-out callbacks: public by design; covered by throttle.test.ts and sign-out.test.ts" },
+  "GET /api/auth/[...nextauth]": {
+    exempt:
+      "next-auth's own endpoints (csrf, providers, session): public by design; sign-in throttling and sign-out have their own tests",
+  },
+  "POST /api/auth/[...nextauth]": {
+    exempt:
+      "next-auth's sign-in and sign-out callbacks: public by design; covered by throttle.test.ts and sign-out.test.ts",
+  },
 };
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
@@ -123,12 +216,28 @@ beforeAll(async () => {
   // The Senior Women post-block session: a draft, so its coach may write to it.
   const seniorDraft = world.sessions.filter((s) => s.squadId === senior.id && s.status === "draft").at(-1)!;
   const seniorPre = world.sessions.find((s) => s.squadId === senior.id && s.status === "published")!;
-  club = { squad: senior.id, athlete: tessa.id, session: seniorDraft.id, preSession: seniorPre.id, test: cmj.id, cell: { athleteId: tessa.id, testId: cmj.id, value: 31.5 }, csv: `${tessa.externalId},Countermovement jump,1,31.5` };
+  club = {
+    squad: senior.id,
+    athlete: tessa.id,
+    session: seniorDraft.id,
+    preSession: seniorPre.id,
+    test: cmj.id,
+    cell: { athleteId: tessa.id, testId: cmj.id, value: 31.5 },
+    csv: `${tessa.externalId},Countermovement jump,1,31.5`,
+  };
   const rower = byName(world.athletes, "Wren Abernathy");
   const erg = byName(world.tests, "2000 m ergometer");
   const rowingSquad = byName(world.squads, "Junior Sculling");
   const rowingSession = world.sessions.find((s) => s.squadId === rowingSquad.id)!.id;
-  rowing = { squad: rowingSquad.id, athlete: rower.id, session: rowingSession, preSession: rowingSession, test: erg.id, cell: { athleteId: rower.id, testId: erg.id, value: 451.2 }, csv: `${rower.externalId},2000 m ergometer,1,451.2` };
+  rowing = {
+    squad: rowingSquad.id,
+    athlete: rower.id,
+    session: rowingSession,
+    preSession: rowingSession,
+    test: erg.id,
+    cell: { athleteId: rower.id, testId: erg.id, value: 451.2 },
+    csv: `${rower.externalId},2000 m ergometer,1,451.2`,
+  };
   template = `${dirname(env.url.slice("file:".length))}/template.db`;
   await snapshotTo(template);
   switchToFreshCopy(template, dirname(template));
@@ -136,7 +245,15 @@ beforeAll(async () => {
 });
 afterAll(() => env.cleanup());
 
-type Cell = { label: string; caller: (typeof CALLERS)[number]; method: string; path: string; request: Request; expected: Status; setup?: () => Promise<unknown> };
+type Cell = {
+  label: string;
+  caller: (typeof CALLERS)[number];
+  method: string;
+  path: string;
+  request: Request;
+  expected: Status;
+  setup?: () => Promise<unknown>;
+};
 
 /** Runs one cell and records a wrong status, a leak, or a refused write that changed something. */
 async function check(cell: Cell) {
@@ -150,16 +267,22 @@ async function check(cell: Cell) {
   const { status, json } = await call(handler, { method: cell.method, params, body, url });
   tally.cells++;
   const where = `${cell.label} as ${who}`;
-  if (status !== cell.expected) tally.wrong.push(`${where}: ${status}, expected ${cell.expected} ${JSON.stringify(json).slice(0, 160)}`);
-  if (status >= 400 && !(json?.error && typeof json.error.code === "string" && typeof json.error.message === "string")) {
+  if (status !== cell.expected)
+    tally.wrong.push(`${where}: ${status}, expected ${cell.expected} ${JSON.stringify(json).slice(0, 160)}`);
+  if (
+    status >= 400 &&
+    !(json?.error && typeof json.error.code === "string" && typeof json.error.message === "string")
+  ) {
     tally.wrong.push(`${where}: ${status} without the error shape`);
   }
   const file = body instanceof FormData ? body.get("file") : null;
   const sentText = file instanceof File ? await file.text() : JSON.stringify(body ?? null);
-  for (const leak of leaksIn(json, forbiddenFor(world, email), numbersIn(params, body), sentText)) tally.leaks.push(`${where}: ${leak}`);
+  for (const leak of leaksIn(json, forbiddenFor(world, email), numbersIn(params, body), sentText))
+    tally.leaks.push(`${where}: ${leak}`);
   if (write) {
     const after = await fingerprint();
-    if (status >= 400 && after !== before) tally.changedWhenRefused.push(`${where}: refused with ${status} but the database changed`);
+    if (status >= 400 && after !== before)
+      tally.changedWhenRefused.push(`${where}: refused with ${status} but the database changed`);
     if (after !== pristine) switchToFreshCopy(template, dirname(template));
   }
 }
@@ -183,7 +306,15 @@ describe("authorisation matrix", () => {
       if ("exempt" in entry) continue;
       const [method, path] = key.split(" ");
       for (const [i, caller] of CALLERS.entries()) {
-        await check({ label: key, caller, method, path, request: entry.request(club), expected: entry.expect[i], setup: entry.setup && (() => entry.setup!(club)) });
+        await check({
+          label: key,
+          caller,
+          method,
+          path,
+          request: entry.request(club),
+          expected: entry.expect[i],
+          setup: entry.setup && (() => entry.setup!(club)),
+        });
       }
     }
     expectClean();
@@ -198,7 +329,15 @@ describe("authorisation matrix", () => {
         // Their own records answer the other owner as the club's answer its owner; to everyone
         // else in the club they do not exist (unless the role is refused before any lookup).
         const expected = own ? entry.expect[1] : [401, 403].includes(entry.expect[i]) ? entry.expect[i] : 404;
-        await check({ label: `${key} (other organisation)`, caller, method, path, request: entry.request(rowing), expected, setup: entry.setup && (() => entry.setup!(rowing)) });
+        await check({
+          label: `${key} (other organisation)`,
+          caller,
+          method,
+          path,
+          request: entry.request(rowing),
+          expected,
+          setup: entry.setup && (() => entry.setup!(rowing)),
+        });
       }
     }
     expectClean();
@@ -210,43 +349,194 @@ describe("authorisation matrix", () => {
     const seniorPublished = world.sessions.find((s) => s.squadId === club.squad && s.status === "published")!;
     const otherOwner = await userIdOf("owner@other.example.com");
     const coachId = await userIdOf("coach@example.com");
-    const write = (t: Target, cell: Partial<Target["cell"]>) => ({ results: [{ ...t.cell, ...cell, trials: [30], flag: null, version: null }] });
+    const write = (t: Target, cell: Partial<Target["cell"]>) => ({
+      results: [{ ...t.cell, ...cell, trials: [30], flag: null, version: null }],
+    });
     const [, owner, , coach2, , , , other] = CALLERS;
-    const cases: [typeof CALLERS[number], string, string, Request, Status][] = [
-      [owner, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: rowing.athlete }) }, 404],
-      [owner, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { testId: rowing.test }) }, 422],
-      [coach2, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: theo.id }) }, 404],
-      [coach2, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${seniorPublished.id}` }, body: sheetWrite(club) }, 403],
-      [other, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${rowing.session}` }, body: write(rowing, { athleteId: club.athlete }) }, 404],
-      [other, "PUT", "/api/sessions/[sessionId]/results", { params: { sessionId: `${rowing.session}` }, body: write(rowing, { testId: club.test }) }, 422],
-      [owner, "POST", "/api/squads/[squadId]/athletes", { params: { squadId: `${club.squad}` }, body: { athleteId: rowing.athlete } }, 404],
-      [coach2, "POST", "/api/squads/[squadId]/athletes", { params: { squadId: `${club.squad}` }, body: { athleteId: theo.id } }, 404],
-      [other, "POST", "/api/squads/[squadId]/athletes", { params: { squadId: `${rowing.squad}` }, body: { athleteId: club.athlete } }, 404],
-      [owner, "POST", "/api/sessions", { body: { squadId: rowing.squad, date: "2026-12-01", phase: "retest", testIds: [club.test] } }, 404],
-      [owner, "POST", "/api/sessions", { body: { squadId: club.squad, date: "2026-12-01", phase: "retest", testIds: [club.test, rowing.test] } }, 422],
-      [coach2, "POST", "/api/sessions", { body: { squadId: academy.id, date: "2026-12-01", phase: "retest", testIds: [club.test] } }, 404],
-      [other, "POST", "/api/sessions", { body: { squadId: rowing.squad, date: "2026-12-01", phase: "retest", testIds: [club.test] } }, 422],
-      [other, "POST", "/api/sessions", { body: { squadId: club.squad, date: "2026-12-01", phase: "retest", testIds: [rowing.test] } }, 404],
-      [owner, "PATCH", "/api/squads/[squadId]", { params: { squadId: `${club.squad}` }, body: { coachUserIds: [otherOwner] } }, 422],
-      [other, "PATCH", "/api/squads/[squadId]", { params: { squadId: `${rowing.squad}` }, body: { coachUserIds: [coachId] } }, 422],
-      [owner, "PATCH", "/api/athletes/[athleteId]", { params: { athleteId: `${club.athlete}` }, body: { squadIds: [rowing.squad] } }, 422],
-      [coach2, "PATCH", "/api/athletes/[athleteId]", { params: { athleteId: `${club.athlete}` }, body: { squadIds: [academy.id] } }, 422],
-      [owner, "PATCH", "/api/sessions/[sessionId]", { params: { sessionId: `${club.session}` }, body: { version: 1, testIds: [club.test, rowing.test] } }, 422],
-      [coach2, "PATCH", "/api/sessions/[sessionId]", { params: { sessionId: `${club.session}` }, body: { version: 1, status: "published" } }, 403],
-      [owner, "POST", "/api/sessions/[sessionId]/import", { params: { sessionId: `${club.session}` }, body: csvForm({ ...club, csv: rowing.csv }), url: "http://test.local/api?mode=commit" }, 422],
-      [coach2, "POST", "/api/sessions/[sessionId]/import", { params: { sessionId: `${club.session}` }, body: csvForm({ ...club, csv: `${theo.externalId},Countermovement jump,1,30` }), url: "http://test.local/api?mode=commit" }, 422],
+    const cases: [(typeof CALLERS)[number], string, string, Request, Status][] = [
+      [
+        owner,
+        "PUT",
+        "/api/sessions/[sessionId]/results",
+        { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: rowing.athlete }) },
+        404,
+      ],
+      [
+        owner,
+        "PUT",
+        "/api/sessions/[sessionId]/results",
+        { params: { sessionId: `${club.session}` }, body: write(club, { testId: rowing.test }) },
+        422,
+      ],
+      [
+        coach2,
+        "PUT",
+        "/api/sessions/[sessionId]/results",
+        { params: { sessionId: `${club.session}` }, body: write(club, { athleteId: theo.id }) },
+        404,
+      ],
+      [
+        coach2,
+        "PUT",
+        "/api/sessions/[sessionId]/results",
+        { params: { sessionId: `${seniorPublished.id}` }, body: sheetWrite(club) },
+        403,
+      ],
+      [
+        other,
+        "PUT",
+        "/api/sessions/[sessionId]/results",
+        { params: { sessionId: `${rowing.session}` }, body: write(rowing, { athleteId: club.athlete }) },
+        404,
+      ],
+      [
+        other,
+        "PUT",
+        "/api/sessions/[sessionId]/results",
+        { params: { sessionId: `${rowing.session}` }, body: write(rowing, { testId: club.test }) },
+        422,
+      ],
+      [
+        owner,
+        "POST",
+        "/api/squads/[squadId]/athletes",
+        { params: { squadId: `${club.squad}` }, body: { athleteId: rowing.athlete } },
+        404,
+      ],
+      [
+        coach2,
+        "POST",
+        "/api/squads/[squadId]/athletes",
+        { params: { squadId: `${club.squad}` }, body: { athleteId: theo.id } },
+        404,
+      ],
+      [
+        other,
+        "POST",
+        "/api/squads/[squadId]/athletes",
+        { params: { squadId: `${rowing.squad}` }, body: { athleteId: club.athlete } },
+        404,
+      ],
+      [
+        owner,
+        "POST",
+        "/api/sessions",
+        { body: { squadId: rowing.squad, date: "2026-12-01", phase: "retest", testIds: [club.test] } },
+        404,
+      ],
+      [
+        owner,
+        "POST",
+        "/api/sessions",
+        { body: { squadId: club.squad, date: "2026-12-01", phase: "retest", testIds: [club.test, rowing.test] } },
+        422,
+      ],
+      [
+        coach2,
+        "POST",
+        "/api/sessions",
+        { body: { squadId: academy.id, date: "2026-12-01", phase: "retest", testIds: [club.test] } },
+        404,
+      ],
+      [
+        other,
+        "POST",
+        "/api/sessions",
+        { body: { squadId: rowing.squad, date: "2026-12-01", phase: "retest", testIds: [club.test] } },
+        422,
+      ],
+      [
+        other,
+        "POST",
+        "/api/sessions",
+        { body: { squadId: club.squad, date: "2026-12-01", phase: "retest", testIds: [rowing.test] } },
+        404,
+      ],
+      [
+        owner,
+        "PATCH",
+        "/api/squads/[squadId]",
+        { params: { squadId: `${club.squad}` }, body: { coachUserIds: [otherOwner] } },
+        422,
+      ],
+      [
+        other,
+        "PATCH",
+        "/api/squads/[squadId]",
+        { params: { squadId: `${rowing.squad}` }, body: { coachUserIds: [coachId] } },
+        422,
+      ],
+      [
+        owner,
+        "PATCH",
+        "/api/athletes/[athleteId]",
+        { params: { athleteId: `${club.athlete}` }, body: { squadIds: [rowing.squad] } },
+        422,
+      ],
+      [
+        coach2,
+        "PATCH",
+        "/api/athletes/[athleteId]",
+        { params: { athleteId: `${club.athlete}` }, body: { squadIds: [academy.id] } },
+        422,
+      ],
+      [
+        owner,
+        "PATCH",
+        "/api/sessions/[sessionId]",
+        { params: { sessionId: `${club.session}` }, body: { version: 1, testIds: [club.test, rowing.test] } },
+        422,
+      ],
+      [
+        coach2,
+        "PATCH",
+        "/api/sessions/[sessionId]",
+        { params: { sessionId: `${club.session}` }, body: { version: 1, status: "published" } },
+        403,
+      ],
+      [
+        owner,
+        "POST",
+        "/api/sessions/[sessionId]/import",
+        {
+          params: { sessionId: `${club.session}` },
+          body: csvForm({ ...club, csv: rowing.csv }),
+          url: "http://test.local/api?mode=commit",
+        },
+        422,
+      ],
+      [
+        coach2,
+        "POST",
+        "/api/sessions/[sessionId]/import",
+        {
+          params: { sessionId: `${club.session}` },
+          body: csvForm({ ...club, csv: `${theo.externalId},Countermovement jump,1,30` }),
+          url: "http://test.local/api?mode=commit",
+        },
+        422,
+      ],
       [owner, "GET", "/api/sessions", { url: `http://test.local/api?squadId=${rowing.squad}` }, 404],
       [CALLERS[4], "GET", "/api/sessions", { url: `http://test.local/api?squadId=${club.squad}` }, 404],
     ];
     for (const [caller, method, path, request, expected] of cases) {
-      await check({ label: `${method} ${path} with ${JSON.stringify(request.body instanceof FormData ? "csv" : (request.body ?? request.url)).slice(0, 90)}`, caller, method, path, request, expected });
+      await check({
+        label: `${method} ${path} with ${JSON.stringify(request.body instanceof FormData ? "csv" : (request.body ?? request.url)).slice(0, 90)}`,
+        caller,
+        method,
+        path,
+        request,
+        expected,
+      });
     }
     expectClean();
   });
 
   it("the leak finder has teeth: the Senior Women roster, as the Academy coach would see it, is all leaks", async () => {
     await signInAs("owner@example.com");
-    const { json } = await call((await route("/squads/[squadId]/athletes")).GET, { params: { squadId: `${club.squad}` } });
+    const { json } = await call((await route("/squads/[squadId]/athletes")).GET, {
+      params: { squadId: `${club.squad}` },
+    });
     const leaks = leaksIn(json, forbiddenFor(world, "coach@example.com"), new Set());
     expect(leaks).toContain('"Tessa Lindqvist"');
     expect(leaks).toContain(`athlete #${club.athlete}`);

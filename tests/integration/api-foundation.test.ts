@@ -1,5 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { athletes } from "@/db/schema";
 import { setupTestDatabase } from "../helpers/db";
 import { call, sessionMock, signInAs } from "../helpers/session";
@@ -17,7 +17,9 @@ let tessaId = 0;
 
 beforeAll(async () => {
   env = await setupTestDatabase();
-  clubAthleteIds = (await env.db.select({ id: athletes.id }).from(athletes).where(eq(athletes.organizationId, 1))).map((a) => a.id);
+  clubAthleteIds = (await env.db.select({ id: athletes.id }).from(athletes).where(eq(athletes.organizationId, 1))).map(
+    (a) => a.id,
+  );
   tessaId = (await env.db.select({ id: athletes.id }).from(athletes).where(eq(athletes.name, "Tessa Lindqvist")))[0].id;
 });
 afterAll(() => env.cleanup());
@@ -122,8 +124,14 @@ describe("GET /api/squads", () => {
   it("lists squads with athlete counts and the latest session, scoped by role", async () => {
     await signInAs("owner@example.com");
     const owner = (await call(squadsRoute.GET)).json.squads;
-    expect(owner.map((s: any) => [s.name, s.athleteCount])).toEqual([["Academy U18", 12], ["Senior Women", 18]]);
-    expect(owner.find((s: any) => s.name === "Senior Women").latestSession).toMatchObject({ date: "2026-11-02", phase: "post-block" });
+    expect(owner.map((s: any) => [s.name, s.athleteCount])).toEqual([
+      ["Academy U18", 12],
+      ["Senior Women", 18],
+    ]);
+    expect(owner.find((s: any) => s.name === "Senior Women").latestSession).toMatchObject({
+      date: "2026-11-02",
+      phase: "post-block",
+    });
 
     await signInAs("coach@example.com");
     expect((await call(squadsRoute.GET)).json.squads.map((s: any) => s.name)).toEqual(["Academy U18"]);
@@ -139,11 +147,26 @@ describe("cross-site requests", () => {
   it("refuses a change whose Origin is another site, and accepts our own", async () => {
     await signInAs("owner@example.com");
     const squadsApi = await import("@/app/api/squads/route");
-    const foreign = await call(squadsApi.POST, { method: "POST", url: "http://changewise.test/api/squads", body: { name: "Phished" }, headers: { origin: "https://evil.example", host: "changewise.test" } });
+    const foreign = await call(squadsApi.POST, {
+      method: "POST",
+      url: "http://changewise.test/api/squads",
+      body: { name: "Phished" },
+      headers: { origin: "https://evil.example", host: "changewise.test" },
+    });
     expect(foreign.status).toBe(403);
-    const opaque = await call(squadsApi.POST, { method: "POST", url: "http://changewise.test/api/squads", body: { name: "Sandboxed" }, headers: { origin: "null", host: "changewise.test" } });
+    const opaque = await call(squadsApi.POST, {
+      method: "POST",
+      url: "http://changewise.test/api/squads",
+      body: { name: "Sandboxed" },
+      headers: { origin: "null", host: "changewise.test" },
+    });
     expect(opaque.status).toBe(403);
-    const own = await call(squadsApi.POST, { method: "POST", url: "http://changewise.test/api/squads", body: { name: "Track Masters" }, headers: { origin: "http://changewise.test", host: "changewise.test" } });
+    const own = await call(squadsApi.POST, {
+      method: "POST",
+      url: "http://changewise.test/api/squads",
+      body: { name: "Track Masters" },
+      headers: { origin: "http://changewise.test", host: "changewise.test" },
+    });
     expect(own.status).toBe(201);
   });
 });

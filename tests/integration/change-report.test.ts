@@ -15,7 +15,17 @@ const jStat = (jstatPkg as unknown as { jStat?: typeof jstatPkg }).jStat ?? jsta
 const route = await import("@/app/api/reports/change/route");
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
-const ids = { seniorPre: 0, seniorPost: 0, academyPre: 0, academyPost: 0, seniorBaseline: 0, cmj: 0, sprint10: 0, sprint30: 0, squat: 0 };
+const ids = {
+  seniorPre: 0,
+  seniorPost: 0,
+  academyPre: 0,
+  academyPost: 0,
+  seniorBaseline: 0,
+  cmj: 0,
+  sprint10: 0,
+  sprint30: 0,
+  squat: 0,
+};
 
 beforeAll(async () => {
   env = await setupTestDatabase();
@@ -38,7 +48,9 @@ beforeAll(async () => {
 afterAll(() => env.cleanup());
 
 const report = (q: Record<string, number | string>) =>
-  call(route.GET, { url: `http://test.local/api/reports/change?${new URLSearchParams(Object.entries(q).map(([k, v]) => [k, String(v)]))}` });
+  call(route.GET, {
+    url: `http://test.local/api/reports/change?${new URLSearchParams(Object.entries(q).map(([k, v]) => [k, String(v)]))}`,
+  });
 
 /** Pairs stored values (unflagged, both present) straight from the results table. */
 async function storedPairs(testId: number, fromId: number, toId: number) {
@@ -47,7 +59,11 @@ async function storedPairs(testId: number, fromId: number, toId: number) {
     .from(results)
     .where(and(eq(results.testId, testId)));
   const side = (sessionId: number) =>
-    new Map(rows.filter((r) => r.sessionId === sessionId && r.flag === null && r.value !== null).map((r) => [r.athleteId, r.value as number]));
+    new Map(
+      rows
+        .filter((r) => r.sessionId === sessionId && r.flag === null && r.value !== null)
+        .map((r) => [r.athleteId, r.value as number]),
+    );
   const pre = side(fromId);
   const post = side(toId);
   return [...pre.keys()].filter((id) => post.has(id)).map((id) => ({ id, pre: pre.get(id)!, post: post.get(id)! }));
@@ -59,13 +75,26 @@ function tInterval(d: number[], confidence: number) {
   const sd = Math.sqrt(d.reduce((a, b) => a + (b - mean) ** 2, 0) / (n - 1));
   const q = jStat.studentt.inv(1 - (1 - confidence) / 2, n - 1);
   const se = sd / Math.sqrt(n);
-  return { mean, sd, q, lower: mean - q * se, upper: mean + q * se, t: mean / se, p: 2 * (1 - jStat.studentt.cdf(Math.abs(mean / se), n - 1)) };
+  return {
+    mean,
+    sd,
+    q,
+    lower: mean - q * se,
+    upper: mean + q * se,
+    t: mean / se,
+    p: 2 * (1 - jStat.studentt.cdf(Math.abs(mean / se), n - 1)),
+  };
 }
 
 describe("GET /api/reports/change", () => {
   it("agrees with an independent paired t calculation for the CMJ (higher is better)", async () => {
     await signInAs("scientist@example.com");
-    const { status, json } = await report({ testId: ids.cmj, fromSessionId: ids.seniorPre, toSessionId: ids.seniorPost, confidence: 0.9 });
+    const { status, json } = await report({
+      testId: ids.cmj,
+      fromSessionId: ids.seniorPre,
+      toSessionId: ids.seniorPost,
+      confidence: 0.9,
+    });
     expect(status).toBe(200);
     const pairs = await storedPairs(ids.cmj, ids.seniorPre, ids.seniorPost);
     const d = pairs.map((p) => p.post - p.pre);
@@ -93,13 +122,28 @@ describe("GET /api/reports/change", () => {
   it("orients sprint times: a faster post-block time is a gain, for both sprint tests", async () => {
     await signInAs("scientist@example.com");
     for (const testId of [ids.sprint10, ids.sprint30]) {
-      const { json } = await report({ testId, fromSessionId: ids.seniorPre, toSessionId: ids.seniorPost, confidence: 0.9 });
+      const { json } = await report({
+        testId,
+        fromSessionId: ids.seniorPre,
+        toSessionId: ids.seniorPost,
+        confidence: 0.9,
+      });
       const faster = json.athletes.find((a: { change: number }) => a.change < 0);
       expect(faster.betterChange).toBeCloseTo(-faster.change, 12);
       const { lower, upper } = { lower: -json.squad.ciUpper, upper: -json.squad.ciLower };
       const swc = json.squad.swc;
       const expected =
-        lower > swc ? "clear-gain" : upper < -swc ? "clear-decline" : lower >= -swc && upper <= swc ? "steady" : lower > 0 ? "gain" : upper < 0 ? "decline" : "inconclusive";
+        lower > swc
+          ? "clear-gain"
+          : upper < -swc
+            ? "clear-decline"
+            : lower >= -swc && upper <= swc
+              ? "steady"
+              : lower > 0
+                ? "gain"
+                : upper < 0
+                  ? "decline"
+                  : "inconclusive";
       expect(json.squad.verdict).toBe(expected);
     }
   });
@@ -110,7 +154,11 @@ describe("GET /api/reports/change", () => {
     const stored = await storedPairs(ids.squat, ids.seniorPre, ids.seniorPost);
     expect(json.athletes.length).toBe(stored.length);
     expect(json.excluded.length).toBeGreaterThan(0);
-    expect(json.excluded.every((e: { reason: string }) => ["no-pre", "no-post", "flagged-pre", "flagged-post"].includes(e.reason))).toBe(true);
+    expect(
+      json.excluded.every((e: { reason: string }) =>
+        ["no-pre", "no-post", "flagged-pre", "flagged-post"].includes(e.reason),
+      ),
+    ).toBe(true);
     expect(json.athletes.length + json.excluded.length).toBeGreaterThanOrEqual(18);
   });
 
@@ -123,7 +171,11 @@ describe("GET /api/reports/change", () => {
     expect(Math.abs(a.ciUpper - (a.change + q * Math.SQRT2 * withTe.json.test.typicalError))).toBeLessThan(1e-6);
     expect(a.verdict).not.toBeNull();
     const without = await report({ testId: ids.cmj, fromSessionId: ids.seniorPre, toSessionId: ids.seniorPost });
-    expect(without.json.athletes.every((x: { verdict: unknown; ciLower: unknown }) => x.verdict === null && x.ciLower === null)).toBe(true);
+    expect(
+      without.json.athletes.every(
+        (x: { verdict: unknown; ciLower: unknown }) => x.verdict === null && x.ciLower === null,
+      ),
+    ).toBe(true);
     expect(without.json.squad.individualResponseSd).toBeNull();
   });
 
@@ -136,7 +188,9 @@ describe("GET /api/reports/change", () => {
     expect((await report({ ...base, fromSessionId: "6.0" })).status).toBe(422);
     expect((await report({ ...base, toSessionId: ids.academyPost })).status).toBe(422);
     // The baseline session measured only CMJ and 10 m sprint.
-    expect((await report({ testId: ids.squat, fromSessionId: ids.seniorBaseline, toSessionId: ids.seniorPost })).status).toBe(422);
+    expect(
+      (await report({ testId: ids.squat, fromSessionId: ids.seniorBaseline, toSessionId: ids.seniorPost })).status,
+    ).toBe(422);
     const fixed = await report({ ...base, swcMethod: "fixed", swcValue: "1,5" });
     expect(fixed.status).toBe(200);
     expect(fixed.json.squad.swc).toBe(1.5);
@@ -151,7 +205,9 @@ describe("GET /api/reports/change", () => {
     const outside = await report(q);
     expect(outside.status).toBe(404);
     expect(JSON.stringify(outside.json)).not.toContain("Senior");
-    expect((await report({ testId: ids.cmj, fromSessionId: ids.academyPre, toSessionId: ids.academyPost })).status).toBe(200);
+    expect(
+      (await report({ testId: ids.cmj, fromSessionId: ids.academyPre, toSessionId: ids.academyPost })).status,
+    ).toBe(200);
     await signInAs("owner@other.example.com");
     expect((await report(q)).status).toBe(404);
   });

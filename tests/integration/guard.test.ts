@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { athletes, squads, testingSessions, tests } from "@/db/schema";
-import { sessionMock, signInAs } from "../helpers/session";
 import { setupTestDatabase } from "../helpers/db";
+import { sessionMock, signInAs } from "../helpers/session";
 
 vi.mock("@/lib/auth/session", () => sessionMock);
 
@@ -11,7 +11,20 @@ const { ApiError } = await import("@/lib/errors");
 const { endAllSessions } = await import("@/lib/data/actors");
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
-const ids = { senior: 0, academy: 0, rowing: 0, seniorAthlete: 0, academyAthlete: 0, tessa: 0, rower: 0, seniorPublished: 0, seniorDraft: 0, rowingSession: 0, clubTest: 0, otherTest: 0 };
+const ids = {
+  senior: 0,
+  academy: 0,
+  rowing: 0,
+  seniorAthlete: 0,
+  academyAthlete: 0,
+  tessa: 0,
+  rower: 0,
+  seniorPublished: 0,
+  seniorDraft: 0,
+  rowingSession: 0,
+  clubTest: 0,
+  otherTest: 0,
+};
 
 async function statusOf(promise: Promise<unknown>): Promise<number> {
   try {
@@ -34,7 +47,14 @@ beforeAll(async () => {
   ids.seniorAthlete = ath.find((a) => a.name === "Maren Oduya")!.id;
   ids.academyAthlete = ath.find((a) => a.name === "Theo Varga")!.id;
   ids.rower = ath.find((a) => a.name === "Wren Abernathy")!.id;
-  const sessions = await env.db.select({ id: testingSessions.id, squadId: testingSessions.squadId, status: testingSessions.status, phase: testingSessions.phase }).from(testingSessions);
+  const sessions = await env.db
+    .select({
+      id: testingSessions.id,
+      squadId: testingSessions.squadId,
+      status: testingSessions.status,
+      phase: testingSessions.phase,
+    })
+    .from(testingSessions);
   ids.seniorPublished = sessions.find((s) => s.squadId === ids.senior && s.status === "published")!.id;
   ids.seniorDraft = sessions.find((s) => s.squadId === ids.senior && s.phase === "post-block")!.id;
   ids.rowingSession = sessions.find((s) => s.squadId === ids.rowing)!.id;
@@ -88,10 +108,21 @@ describe("guard: reach", () => {
   it("owner and scientist reach every record of their organisation and none of the other", async () => {
     for (const email of ["owner@example.com", "scientist@example.com"]) {
       await signInAs(email);
-      for (const options of [{ squadId: ids.senior }, { squadId: ids.academy }, { athleteId: ids.seniorAthlete }, { sessionId: ids.seniorDraft }, { testId: ids.clubTest }]) {
+      for (const options of [
+        { squadId: ids.senior },
+        { squadId: ids.academy },
+        { athleteId: ids.seniorAthlete },
+        { sessionId: ids.seniorDraft },
+        { testId: ids.clubTest },
+      ]) {
         expect(await statusOf(guard(options))).toBe(200);
       }
-      for (const options of [{ squadId: ids.rowing }, { athleteId: ids.rower }, { sessionId: ids.rowingSession }, { testId: ids.otherTest }]) {
+      for (const options of [
+        { squadId: ids.rowing },
+        { athleteId: ids.rower },
+        { sessionId: ids.rowingSession },
+        { testId: ids.otherTest },
+      ]) {
         expect(await statusOf(guard(options))).toBe(404);
       }
     }

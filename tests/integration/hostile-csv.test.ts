@@ -4,8 +4,9 @@
  * mode. No answer may be a 5xx, and a refused commit leaves every stored result, upload and
  * audit event exactly as it was. HOSTILE_SEED and HOSTILE_FILES replay or widen the run.
  */
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+
 import { eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { getClient } from "@/db/client";
 import { sessionTests, squads, testingSessions, tests } from "@/db/schema";
 import { setupTestDatabase } from "../helpers/db";
@@ -26,7 +27,10 @@ let sessionId = 0;
 beforeAll(async () => {
   env = await setupTestDatabase();
   const [academy] = await env.db.select({ id: squads.id }).from(squads).where(eq(squads.name, "Academy U18"));
-  [{ id: sessionId }] = await env.db.insert(testingSessions).values({ organizationId: 1, squadId: academy.id, date: "2026-12-24", phase: "retest" }).returning({ id: testingSessions.id });
+  [{ id: sessionId }] = await env.db
+    .insert(testingSessions)
+    .values({ organizationId: 1, squadId: academy.id, date: "2026-12-24", phase: "retest" })
+    .returning({ id: testingSessions.id });
   const battery = await env.db.select({ id: tests.id }).from(tests).where(eq(tests.organizationId, 1));
   await env.db.insert(sessionTests).values(battery.map((t, position) => ({ sessionId, testId: t.id, position })));
 });
@@ -52,7 +56,8 @@ describe("hostile CSV uploads", () => {
         const ms = performance.now() - start;
         if (ms > maxMs) [maxMs, slowest] = [ms, `${label} ${mode}`];
         count(`${mode} ${answer.status}`);
-        if (answer.status >= 500) serverErrors.push(`${label} ${mode}: ${answer.status} ${JSON.stringify(answer.json).slice(0, 200)}`);
+        if (answer.status >= 500)
+          serverErrors.push(`${label} ${mode}: ${answer.status} ${JSON.stringify(answer.json).slice(0, 200)}`);
         if (mode === "commit") {
           const now = await storeChecksum();
           if (answer.status === 200) baseline = now;
@@ -68,8 +73,13 @@ describe("hostile CSV uploads", () => {
       args: [sessionId],
     });
 
-    const byStatus = [...statuses.entries()].sort().map(([k, v]) => `${k}: ${v}`).join(", ");
-    console.log(`hostile CSV: ${files.length} files, ${files.length * 2} requests; ${byStatus}; slowest ${maxMs.toFixed(0)} ms (${slowest})`);
+    const byStatus = [...statuses.entries()]
+      .sort()
+      .map(([k, v]) => `${k}: ${v}`)
+      .join(", ");
+    console.log(
+      `hostile CSV: ${files.length} files, ${files.length * 2} requests; ${byStatus}; slowest ${maxMs.toFixed(0)} ms (${slowest})`,
+    );
     expect(serverErrors).toEqual([]);
     expect(changedByRefusal).toEqual([]);
     expect(Number(rows[0].bad)).toBe(0);

@@ -3,8 +3,9 @@
  * hold the server, an error list must never be too large to answer, and a number that cannot be
  * stored as written is refused by name rather than stored as something else.
  */
-import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
+
 import { and, eq } from "drizzle-orm";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { athletes, results, sessionTests, squads, testingSessions, tests } from "@/db/schema";
 import { setupTestDatabase } from "../helpers/db";
 import { longestPause, multipartBody, postPrepared, storeChecksum, uploadTo } from "../helpers/import-upload";
@@ -28,15 +29,32 @@ beforeAll(async () => {
   // A mean-of-trials test: the rule whose reduction could overflow.
   [{ id: meanTestId }] = await env.db
     .insert(tests)
-    .values({ organizationId: 1, name: "Reactive strength index", unit: "ratio", direction: "higher", trialRule: "mean", trialsPerSession: 3 })
+    .values({
+      organizationId: 1,
+      name: "Reactive strength index",
+      unit: "ratio",
+      direction: "higher",
+      trialRule: "mean",
+      trialsPerSession: 3,
+    })
     .returning({ id: tests.id });
-  [{ id: sessionId }] = await env.db.insert(testingSessions).values({ organizationId: 1, squadId: academy.id, date: "2026-12-20", phase: "retest" }).returning({ id: testingSessions.id });
-  await env.db.insert(sessionTests).values([{ sessionId, testId: cmj.id, position: 0 }, { sessionId, testId: meanTestId, position: 1 }]);
-  [{ id: athleteId }] = await env.db.select({ id: athletes.id }).from(athletes).where(eq(athletes.externalId, "NHA001"));
+  [{ id: sessionId }] = await env.db
+    .insert(testingSessions)
+    .values({ organizationId: 1, squadId: academy.id, date: "2026-12-20", phase: "retest" })
+    .returning({ id: testingSessions.id });
+  await env.db.insert(sessionTests).values([
+    { sessionId, testId: cmj.id, position: 0 },
+    { sessionId, testId: meanTestId, position: 1 },
+  ]);
+  [{ id: athleteId }] = await env.db
+    .select({ id: athletes.id })
+    .from(athletes)
+    .where(eq(athletes.externalId, "NHA001"));
 });
 afterAll(() => env.cleanup());
 
-const upload = (content: string | Uint8Array, mode: "preview" | "commit" = "commit") => uploadTo(importRoute.POST, sessionId, content, { mode });
+const upload = (content: string | Uint8Array, mode: "preview" | "commit" = "commit") =>
+  uploadTo(importRoute.POST, sessionId, content, { mode });
 const header = "athlete,test,trial,value";
 
 describe("a file never holds the server (linear work, yielding to the event loop)", () => {
@@ -47,14 +65,20 @@ describe("a file never holds the server (linear work, yielding to the event loop
   const body = (line: string) => line.repeat(Math.floor((10 * MB - 200) / line.length));
   const files: [string, () => string][] = [
     ["one 10 MB line of delimiters", () => ",".repeat(10 * MB - 1)],
-    ["100 000 columns", () => {
-      const wide = Array.from({ length: 100_000 }, (_, i) => `c${i}`).join(",");
-      return `${wide}\n${"1,".repeat(Math.floor((10 * MB - wide.length - 10) / 2))}`;
-    }],
+    [
+      "100 000 columns",
+      () => {
+        const wide = Array.from({ length: 100_000 }, (_, i) => `c${i}`).join(",");
+        return `${wide}\n${"1,".repeat(Math.floor((10 * MB - wide.length - 10) / 2))}`;
+      },
+    ],
     ["one huge quoted field", () => `${header}\nNHA001,"${"x".repeat(10 * MB - 100)}",1,2\n`],
     ["misplaced quotes on every line", () => `${header}\n${body('"x"y,"a"b,1,2\n')}`],
     ["250 000 ordinary rows", () => `${header}\n${body("NHA001,Countermovement jump,1,41.2\n")}`],
-    ["10 MB of blank lines before the header", () => `${"\n".repeat(10 * MB - 100)}${header}\nNHA001,Countermovement jump,1,41.2\n`],
+    [
+      "10 MB of blank lines before the header",
+      () => `${"\n".repeat(10 * MB - 100)}${header}\nNHA001,Countermovement jump,1,41.2\n`,
+    ],
   ];
   for (const [what, make] of files) {
     it(`${what}: answered without holding the event loop`, async () => {
@@ -63,8 +87,12 @@ describe("a file never holds the server (linear work, yielding to the event loop
       const before = await storeChecksum();
       let committed = 0;
       for (const mode of ["preview", "commit"] as const) {
-        const { result, maxGapMs, maxBusyMs, ms } = await longestPause(() => postPrepared(importRoute.POST, sessionId, body, mode));
-        console.log(`${what} (${mode}): ${result.status} in ${ms.toFixed(0)} ms, longest pause ${maxGapMs.toFixed(0)} ms (${maxBusyMs.toFixed(0)} ms CPU)`);
+        const { result, maxGapMs, maxBusyMs, ms } = await longestPause(() =>
+          postPrepared(importRoute.POST, sessionId, body, mode),
+        );
+        console.log(
+          `${what} (${mode}): ${result.status} in ${ms.toFixed(0)} ms, longest pause ${maxGapMs.toFixed(0)} ms (${maxBusyMs.toFixed(0)} ms CPU)`,
+        );
         expect(result.status).toBeLessThan(500);
         expect(maxBusyMs).toBeLessThan(250);
         if (mode === "commit" && result.status === 200) committed = result.json.counts.values;
@@ -80,7 +108,7 @@ describe("a file with millions of problems still gets a short answer", () => {
   it("a 3 MB one-line file: 422 listing the first 200 problems and saying how many more", async () => {
     await signInAs("coach@example.com");
     const before = await storeChecksum();
-    const line = Array.from({ length: 3 * MB / 6 }, (_, i) => `h${i % 1000}`).join(",");
+    const line = Array.from({ length: (3 * MB) / 6 }, (_, i) => `h${i % 1000}`).join(",");
     for (const mode of ["preview", "commit"] as const) {
       const answer = await upload(line, mode);
       const listed = mode === "commit" ? answer.json.error.rows : answer.json.errors;
@@ -123,8 +151,16 @@ describe("numbers that cannot be stored as written are refused by cell", () => {
   const big = `1${"0".repeat(308)}`;
   const cases: [string, string, number][] = [
     ["1 followed by 400 zeros (Infinity in floating point)", `${header}\nNHA002,Reactive strength index,1,${huge}`, 2],
-    ["two 309-digit numbers whose mean overflows", `${header}\nNHA002,Reactive strength index,1,${big}\nNHA002,Reactive strength index,2,${big}`, 2],
-    ["a negative 309-digit number", `${header}\nNHA002,Countermovement jump,1,2\nNHA002,Countermovement jump,2,-${big}`, 3],
+    [
+      "two 309-digit numbers whose mean overflows",
+      `${header}\nNHA002,Reactive strength index,1,${big}\nNHA002,Reactive strength index,2,${big}`,
+      2,
+    ],
+    [
+      "a negative 309-digit number",
+      `${header}\nNHA002,Countermovement jump,1,2\nNHA002,Countermovement jump,2,-${big}`,
+      3,
+    ],
   ];
   for (const [what, csv, row] of cases) {
     it(`import: ${what} → 422 at row ${row}, column "value", nothing stored`, async () => {
@@ -134,7 +170,9 @@ describe("numbers that cannot be stored as written are refused by cell", () => {
       expect(preview.json.canCommit).toBe(false);
       const answer = await upload(csv);
       expect(answer.status).toBe(422);
-      expect(answer.json.error.rows).toEqual(expect.arrayContaining([expect.objectContaining({ row, column: "value" })]));
+      expect(answer.json.error.rows).toEqual(
+        expect.arrayContaining([expect.objectContaining({ row, column: "value" })]),
+      );
       expect(await storeChecksum()).toBe(before);
     });
   }

@@ -187,7 +187,6 @@ const BASES: Record<string, Base> = {
   },
 };
 
-
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
 let template = "";
 let ids: Ids;
@@ -325,9 +324,7 @@ describe("JSON fuzzing", () => {
     }
     const byStatus = Object.fromEntries(Object.entries(tally.byStatus).sort());
     const fiveXx = tally.serverErrors.length;
-    console.log(
-      `json fuzz: ${tally.requests} requests, by status ${JSON.stringify(byStatus)}, ${fiveXx} 5xx`,
-    );
+    console.log(`json fuzz: ${tally.requests} requests, by status ${JSON.stringify(byStatus)}, ${fiveXx} 5xx`);
     for (const line of tally.serverErrors) console.log(`  5xx: ${line}`);
     expect(tally.requests).toBeGreaterThanOrEqual(1000);
     expect(tally.serverErrors).toEqual([]);

@@ -23,9 +23,13 @@ afterEach(() => {
   delete process.env.TRUST_PROXY;
 });
 
-type Authorize = (credentials: Record<string, string>, request: { headers: Record<string, string> }) => Promise<unknown>;
+type Authorize = (
+  credentials: Record<string, string>,
+  request: { headers: Record<string, string> },
+) => Promise<unknown>;
 /** The authorize next-auth calls, with the request headers it hands over. */
-const authorizeOverHttp = (authOptions.providers[0] as unknown as { options: { authorize: Authorize } }).options.authorize;
+const authorizeOverHttp = (authOptions.providers[0] as unknown as { options: { authorize: Authorize } }).options
+  .authorize;
 
 /** "checked" when the password was checked, "held" when throttled before that. */
 async function outcome(attempt: Promise<unknown>): Promise<"signed-in" | "checked" | "held"> {
@@ -39,7 +43,9 @@ async function outcome(attempt: Promise<unknown>): Promise<"signed-in" | "checke
 
 describe("sign-in throttling", () => {
   it("accepts the right password and refuses a wrong one", async () => {
-    expect(await authorizeCredentials({ email: "coach@example.com", password: "changewise-demo" }, "10.0.0.1")).toMatchObject({ email: "coach@example.com" });
+    expect(
+      await authorizeCredentials({ email: "coach@example.com", password: "changewise-demo" }, "10.0.0.1"),
+    ).toMatchObject({ email: "coach@example.com" });
     expect(await authorizeCredentials({ email: "coach@example.com", password: "nope" }, "10.0.0.1")).toBeNull();
     expect(await authorizeCredentials({ email: "nobody@example.com", password: "x" }, "10.0.0.1")).toBeNull();
     expect(await authorizeCredentials({ email: "not an email" }, "10.0.0.1")).toBeNull();
@@ -52,29 +58,41 @@ describe("sign-in throttling", () => {
       expect(await authorizeCredentials({ email, password: `wrong-${i}` }, `192.0.2.${i}`)).toBeNull();
     }
     // An address that failed on the account is held, even with the right password...
-    await expect(authorizeCredentials({ email, password: "changewise-demo" }, "192.0.2.0")).rejects.toThrow(THROTTLED_MESSAGE);
+    await expect(authorizeCredentials({ email, password: "changewise-demo" }, "192.0.2.0")).rejects.toThrow(
+      THROTTLED_MESSAGE,
+    );
     // ...but the member at an address that has not been failing still gets in: nobody can lock
     // them out with five wrong passwords from elsewhere.
     expect(await authorizeCredentials({ email, password: "changewise-demo" }, "192.0.2.200")).toMatchObject({ email });
     // A fresh address gets one try while the account is under attack, not a fresh allowance.
     expect(await authorizeCredentials({ email, password: "guess" }, "192.0.2.201")).toBeNull();
-    await expect(authorizeCredentials({ email, password: "changewise-demo" }, "192.0.2.201")).rejects.toThrow(THROTTLED_MESSAGE);
+    await expect(authorizeCredentials({ email, password: "changewise-demo" }, "192.0.2.201")).rejects.toThrow(
+      THROTTLED_MESSAGE,
+    );
   });
 
   it("when the address is unknown (no trusted proxy), a held account is held for every caller", async () => {
     const email = "athlete@example.com";
     for (let i = 0; i < MAX_FAILURES_PER_EMAIL; i++) {
-      expect(await authorizeOverHttp({ email, password: `wrong-${i}` }, { headers: { "x-forwarded-for": `198.18.0.${i}` } })).toBeNull();
+      expect(
+        await authorizeOverHttp({ email, password: `wrong-${i}` }, { headers: { "x-forwarded-for": `198.18.0.${i}` } }),
+      ).toBeNull();
     }
     // A made-up X-Forwarded-For is not a clean address.
-    await expect(authorizeOverHttp({ email, password: "changewise-demo" }, { headers: { "x-forwarded-for": "198.18.9.9" } })).rejects.toThrow(THROTTLED_MESSAGE);
-    await expect(authorizeOverHttp({ email, password: "changewise-demo" }, { headers: {} })).rejects.toThrow(THROTTLED_MESSAGE);
+    await expect(
+      authorizeOverHttp({ email, password: "changewise-demo" }, { headers: { "x-forwarded-for": "198.18.9.9" } }),
+    ).rejects.toThrow(THROTTLED_MESSAGE);
+    await expect(authorizeOverHttp({ email, password: "changewise-demo" }, { headers: {} })).rejects.toThrow(
+      THROTTLED_MESSAGE,
+    );
   });
 
   it("a parallel burst checks no more passwords than the limit", async () => {
     const email = "owner@other.example.com";
     const burst = await Promise.all(
-      Array.from({ length: 12 }, (_, i) => outcome(authorizeCredentials({ email, password: `burst-${i}` }, "192.0.2.50"))),
+      Array.from({ length: 12 }, (_, i) =>
+        outcome(authorizeCredentials({ email, password: `burst-${i}` }, "192.0.2.50")),
+      ),
     );
     expect(burst.filter((o) => o === "checked")).toHaveLength(MAX_FAILURES_PER_EMAIL);
     expect(burst.filter((o) => o === "held")).toHaveLength(12 - MAX_FAILURES_PER_EMAIL);
@@ -86,13 +104,19 @@ describe("sign-in throttling", () => {
     // Each attempt claims a new address at the left; the proxy appends the real one at the right.
     for (let i = 0; i < MAX_FAILURES_PER_ADDRESS; i++) {
       const headers = { "x-forwarded-for": `10.9.${i}.1, 203.0.113.9` };
-      expect(await authorizeOverHttp({ email: accounts[i % accounts.length], password: "spray" }, { headers })).toBeNull();
+      expect(
+        await authorizeOverHttp({ email: accounts[i % accounts.length], password: "spray" }, { headers }),
+      ).toBeNull();
     }
     const rotated = { "x-forwarded-for": "10.9.99.1, 203.0.113.9" };
-    await expect(authorizeOverHttp({ email: "coach@example.com", password: "changewise-demo" }, { headers: rotated })).rejects.toThrow(THROTTLED_MESSAGE);
+    await expect(
+      authorizeOverHttp({ email: "coach@example.com", password: "changewise-demo" }, { headers: rotated }),
+    ).rejects.toThrow(THROTTLED_MESSAGE);
     // Another real address is unaffected.
     const other = { "x-forwarded-for": "10.9.99.1, 203.0.113.10" };
-    expect(await authorizeOverHttp({ email: "coach@example.com", password: "changewise-demo" }, { headers: other })).not.toBeNull();
+    expect(
+      await authorizeOverHttp({ email: "coach@example.com", password: "changewise-demo" }, { headers: other }),
+    ).not.toBeNull();
   });
 
   it("blocks an address that tries many e-mails, but not after a few typos from a shared address", async () => {
@@ -101,12 +125,20 @@ describe("sign-in throttling", () => {
     // count can hold the last attempt.
     const accounts = SPREAD;
     for (let i = 0; i < MAX_FAILURES_PER_ADDRESS - 1; i++) {
-      expect(await authorizeCredentials({ email: accounts[i % accounts.length], password: "typo" }, address)).toBeNull();
+      expect(
+        await authorizeCredentials({ email: accounts[i % accounts.length], password: "typo" }, address),
+      ).toBeNull();
     }
-    expect(await authorizeCredentials({ email: "owner@example.com", password: "changewise-demo" }, address)).not.toBeNull();
+    expect(
+      await authorizeCredentials({ email: "owner@example.com", password: "changewise-demo" }, address),
+    ).not.toBeNull();
     expect(await authorizeCredentials({ email: "owner@example.com", password: "typo" }, address)).toBeNull();
-    await expect(authorizeCredentials({ email: "owner@example.com", password: "changewise-demo" }, address)).rejects.toThrow(THROTTLED_MESSAGE);
+    await expect(
+      authorizeCredentials({ email: "owner@example.com", password: "changewise-demo" }, address),
+    ).rejects.toThrow(THROTTLED_MESSAGE);
     // Another address is unaffected.
-    expect(await authorizeCredentials({ email: "owner@example.com", password: "changewise-demo" }, "198.51.100.8")).not.toBeNull();
+    expect(
+      await authorizeCredentials({ email: "owner@example.com", password: "changewise-demo" }, "198.51.100.8"),
+    ).not.toBeNull();
   });
 });

@@ -42,6 +42,7 @@ describe("chiSquareQuantile", () => {
 
   it("equals z² on 1 df", () => {
     // χ² on 1 df is the square of a standard normal: χ²_p(1) = z²_{(1+p)/2}
-    for (const p of [0.5, 0.9, 0.95, 0.99]) expectRelClose(chiSquareQuantile(p, 1), normalQuantile((1 + p) / 2) ** 2, 1e-9);
+    for (const p of [0.5, 0.9, 0.95, 0.99])
+      expectRelClose(chiSquareQuantile(p, 1), normalQuantile((1 + p) / 2) ** 2, 1e-9);
   });
 });

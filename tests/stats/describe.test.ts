@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { mean, sampleSd, sampleVariance, StatsInputError } from "@/lib/stats";
+import { mean, StatsInputError, sampleSd, sampleVariance } from "@/lib/stats";
 
 describe("mean / sampleVariance / sampleSd", () => {
   it("use the n − 1 divisor", () => {

@@ -11,7 +11,11 @@ describe("hedgesCorrection", () => {
 
   it("equals Lakens's two-group form 1 − 3/(4(n1 + n2) − 9) with df = n1 + n2 − 2", () => {
     // Lakens 2013 writes J with group sizes (METHODS.md §5 [M]); the two forms are the same algebra
-    for (const [n1, n2] of [[10, 10], [6, 9], [20, 35]]) {
+    for (const [n1, n2] of [
+      [10, 10],
+      [6, 9],
+      [20, 35],
+    ]) {
       expectRelClose(hedgesCorrection(n1 + n2 - 2), 1 - 3 / (4 * (n1 + n2) - 9), 1e-15);
     }
   });

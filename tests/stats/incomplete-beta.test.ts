@@ -1,5 +1,5 @@
-import { describe, expect, it } from "vitest";
 import jstatPkg from "jstat";
+import { describe, expect, it } from "vitest";
 import { betaRecurrenceTerm, regularizedBeta } from "@/lib/stats/incomplete-beta";
 import { expectRelClose } from "./close";
 
@@ -16,14 +16,19 @@ describe("regularizedBeta: identities that follow from the definition I_x(a, b) 
 
   it("I_x(1, b) = 1 − (1 − x)^b", () => {
     for (const b of [0.5, 1, 4.5, 12]) {
-      for (const x of [0.05, 0.3, 0.5, 0.9]) expect(Math.abs(regularizedBeta(x, 1, b) - (1 - (1 - x) ** b))).toBeLessThan(ABS);
+      for (const x of [0.05, 0.3, 0.5, 0.9])
+        expect(Math.abs(regularizedBeta(x, 1, b) - (1 - (1 - x) ** b))).toBeLessThan(ABS);
     }
   });
 
   it("I_½(a, a) = ½ and I_x(a, b) = 1 − I_{1−x}(b, a)", () => {
     // Symmetry of the beta distribution (Abramowitz & Stegun 1964, §26.5; from memory)
     for (const a of [0.5, 2, 7, 40, 500]) expect(Math.abs(regularizedBeta(0.5, a, a) - 0.5)).toBeLessThan(ABS);
-    for (const [x, a, b] of [[0.2, 3, 5], [0.7, 4.5, 0.5], [0.45, 50, 60]]) {
+    for (const [x, a, b] of [
+      [0.2, 3, 5],
+      [0.7, 4.5, 0.5],
+      [0.45, 50, 60],
+    ]) {
       expect(Math.abs(regularizedBeta(x, a, b) - (1 - regularizedBeta(1 - x, b, a)))).toBeLessThan(ABS);
     }
   });
@@ -41,7 +46,12 @@ describe("regularizedBeta: identities that follow from the definition I_x(a, b) 
     };
     expect(Math.abs(regularizedBeta(0.5, 2, 3) - 11 / 16)).toBeLessThan(ABS);
     expect(Math.abs(regularizedBeta(0.2, 3, 5) - 0.148032)).toBeLessThan(ABS);
-    for (const [k, n, p] of [[3, 10, 0.25], [7, 12, 0.6], [1, 20, 0.01], [15, 30, 0.5]]) {
+    for (const [k, n, p] of [
+      [3, 10, 0.25],
+      [7, 12, 0.6],
+      [1, 20, 0.01],
+      [15, 30, 0.5],
+    ]) {
       expect(Math.abs(regularizedBeta(p, k, n - k + 1) - binomialAtLeast(k, n, p))).toBeLessThan(ABS);
     }
   });
@@ -83,7 +93,13 @@ describe("regularizedBeta: independent values", () => {
     // jStat 1.9.6 stops its continued fraction at 3e-7 per step; for small shape parameters its
     // result is good to ~3e-8, so agreement is checked to 1e-7.
     const { jStat } = jstatPkg;
-    for (const [x, a, b] of [[0.2, 3, 5], [0.5, 2, 3], [0.35, 1.5, 2.5], [0.8, 4, 2], [0.6, 0.5, 0.5]]) {
+    for (const [x, a, b] of [
+      [0.2, 3, 5],
+      [0.5, 2, 3],
+      [0.35, 1.5, 2.5],
+      [0.8, 4, 2],
+      [0.6, 0.5, 0.5],
+    ]) {
       expect(Math.abs(regularizedBeta(x, a, b) - jStat.ibeta(x, a, b))).toBeLessThan(1e-7);
     }
   });
@@ -93,7 +109,11 @@ describe("betaRecurrenceTerm", () => {
   it("is the step I_x(a, b) − I_x(a + 1, b)", () => {
     // The recurrence of DLMF §8.17(iv) (section from memory); at x = ½, a = 2, b = 3 it is 11/16 − 1/2
     expect(Math.abs(betaRecurrenceTerm(0.5, 2, 3) - 3 / 16)).toBeLessThan(ABS);
-    for (const [x, a, b] of [[0.2, 3, 5], [0.7, 4.5, 0.5], [0.45, 50, 60]]) {
+    for (const [x, a, b] of [
+      [0.2, 3, 5],
+      [0.7, 4.5, 0.5],
+      [0.45, 50, 60],
+    ]) {
       const step = regularizedBeta(x, a, b) - regularizedBeta(x, a + 1, b);
       expect(Math.abs(betaRecurrenceTerm(x, a, b) - step)).toBeLessThan(ABS);
     }

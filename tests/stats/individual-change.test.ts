@@ -93,7 +93,14 @@ describe("individualChange: 20 m sprint (lower is better)", () => {
 
   it("flips the verdict when the same numbers are read as higher-is-better", () => {
     // Property: orientation mirrors the verdict (gain ↔ decline, clear-gain ↔ clear-decline).
-    const mirror = { "clear-gain": "clear-decline", gain: "decline", steady: "steady", decline: "gain", "clear-decline": "clear-gain", inconclusive: "inconclusive" } as const;
+    const mirror = {
+      "clear-gain": "clear-decline",
+      gain: "decline",
+      steady: "steady",
+      decline: "gain",
+      "clear-decline": "clear-gain",
+      inconclusive: "inconclusive",
+    } as const;
     for (const confidence of [0.5, 0.75, 0.9, 0.95]) {
       for (const post of [2.9, 3.0, 3.05, 3.09, 3.1, 3.12, 3.2, 3.3]) {
         const lower = individualChange({ ...SPRINT, post, confidence });
@@ -108,7 +115,9 @@ describe("individualChange: 20 m sprint (lower is better)", () => {
 
 describe("individualChange: input errors", () => {
   it("rejects bad input", () => {
-    expect(() => individualChange({ ...CMJ, typicalError: -1 })).toThrow("The typical error cannot be negative (got -1).");
+    expect(() => individualChange({ ...CMJ, typicalError: -1 })).toThrow(
+      "The typical error cannot be negative (got -1).",
+    );
     expect(() => individualChange({ ...CMJ, swc: -0.1 })).toThrow(StatsInputError);
     expect(() => individualChange({ ...CMJ, pre: NaN })).toThrow(StatsInputError);
     expect(() => individualChange({ ...CMJ, post: Infinity })).toThrow(StatsInputError);

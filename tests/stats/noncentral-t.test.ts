@@ -1,5 +1,5 @@
-import { describe, expect, it } from "vitest";
 import jstatPkg from "jstat";
+import { describe, expect, it } from "vitest";
 import { noncentralTCdf, studentTUpperTail } from "@/lib/stats";
 import { expectRelClose } from "./close";
 
@@ -31,7 +31,11 @@ describe("noncentralTCdf", () => {
   });
 
   it("reduces to the central t when δ = 0", () => {
-    for (const [t, df] of [[1.3, 5], [-2, 12], [0.2, 100]]) {
+    for (const [t, df] of [
+      [1.3, 5],
+      [-2, 12],
+      [0.2, 100],
+    ]) {
       expect(noncentralTCdf(t, df, 0)).toBeCloseTo(1 - studentTUpperTail(t, df), 12);
     }
   });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { pairedChange, orientInterval, sampleSd, StatsInputError } from "@/lib/stats";
+import { orientInterval, pairedChange, StatsInputError, sampleSd } from "@/lib/stats";
 import { expectDp, expectRelClose } from "./close";
 
 // Student's sleep data, R datasets::sleep (Cushny & Peebles 1905; Student 1908), METHODS.md §1.3

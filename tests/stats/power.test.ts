@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { pairedPower, tTestPower, StatsInputError } from "@/lib/stats";
+import { pairedPower, StatsInputError, tTestPower } from "@/lib/stats";
 import { expectRelClose } from "./close";
 
 describe("tTestPower: R power.t.test help-page examples (two-sample, sd 1, sig.level 0.05)", () => {

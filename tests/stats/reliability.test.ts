@@ -1,13 +1,13 @@
 import { describe, expect, it } from "vitest";
 import {
+  iccFromMeanSquares,
+  minimalDetectableChange,
+  StatsInputError,
+  smallestWorthwhileChange,
+  swcFromCv,
   testRetest,
   twoWayMeanSquares,
-  iccFromMeanSquares,
   typicalErrorLimits,
-  smallestWorthwhileChange,
-  minimalDetectableChange,
-  swcFromCv,
-  StatsInputError,
 } from "@/lib/stats";
 import { expectDp } from "./close";
 
@@ -191,14 +191,21 @@ describe("testRetest: properties and edge cases", () => {
   });
 
   it("rejects bad input", () => {
-    expect(() => testRetest([1, 2, 3], [1, 2])).toThrow("Trial 1 and trial 2 need the same number of scores (got 3 and 2).");
+    expect(() => testRetest([1, 2, 3], [1, 2])).toThrow(
+      "Trial 1 and trial 2 need the same number of scores (got 3 and 2).",
+    );
     expect(() => testRetest([1], [1])).toThrow(StatsInputError);
     expect(() => testRetest([1, NaN], [1, 2])).toThrow("Trial 1 score 2 is not a number (got NaN).");
     expect(() => testRetest([1, 2], [1, 2], { confidence: 1 })).toThrow(StatsInputError);
     expect(() => twoWayMeanSquares([[1, 2], [3]])).toThrow(/same number of trials/);
     expect(() => twoWayMeanSquares([[1], [3]])).toThrow(/At least 2 trials/);
     expect(() => twoWayMeanSquares([[1, 2]])).toThrow(/At least 2 athletes/);
-    expect(() => twoWayMeanSquares([[1, 2], [3, NaN]])).toThrow("Athlete 2 score 2 is not a number (got NaN).");
+    expect(() =>
+      twoWayMeanSquares([
+        [1, 2],
+        [3, NaN],
+      ]),
+    ).toThrow("Athlete 2 score 2 is not a number (got NaN).");
     expect(() => typicalErrorLimits(-1, 10)).toThrow(StatsInputError);
     expect(() => iccFromMeanSquares(twoWayMeanSquares(SHROUT_FLEISS), { confidence: 0 })).toThrow(StatsInputError);
   });

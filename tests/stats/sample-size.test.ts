@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { pairedPower, pairedSampleSize, precisionSampleSize, tTestSampleSize, StatsInputError } from "@/lib/stats";
+import { pairedPower, pairedSampleSize, precisionSampleSize, StatsInputError, tTestSampleSize } from "@/lib/stats";
 import { expectDp, expectRelClose } from "./close";
 
 describe("tTestSampleSize: R power.t.test help-page examples (two-sample, sd 1, sig.level 0.05)", () => {
@@ -86,7 +86,9 @@ describe("CMJ planning example (TE 1.5 cm → σ_d = √2·1.5 = 2.12132 cm; SWC
 
 describe("sample size: input errors", () => {
   it("rejects non-positive sdDiff/delta and alpha/power outside (0, 1)", () => {
-    expect(() => pairedSampleSize({ sdDiff: 0, delta: 1 })).toThrow("The SD of the change scores must be above zero (got 0).");
+    expect(() => pairedSampleSize({ sdDiff: 0, delta: 1 })).toThrow(
+      "The SD of the change scores must be above zero (got 0).",
+    );
     expect(() => pairedSampleSize({ sdDiff: -1, delta: 1 })).toThrow(StatsInputError);
     expect(() => pairedSampleSize({ sdDiff: 1, delta: 0 })).toThrow(StatsInputError);
     expect(() => pairedSampleSize({ sdDiff: 1, delta: -0.5 })).toThrow(StatsInputError);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { sensitivity, StatsInputError } from "@/lib/stats";
+import { StatsInputError, sensitivity } from "@/lib/stats";
 
 // Comparing TE with the SWC is common practice, usually credited to Hopkins 2004 (Sportscience 8:1–7;
 // exact wording not confirmed, METHODS.md §4.3). The 0.8 and 1.2 cut-offs are our own convention.

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { tCritical, zCritical, studentTQuantile, studentTUpperTail, StatsInputError } from "@/lib/stats";
+import { StatsInputError, studentTQuantile, studentTUpperTail, tCritical, zCritical } from "@/lib/stats";
 import { expectDp, expectRelClose } from "./close";
 
 // NIST/SEMATECH e-Handbook of Statistical Methods §1.3.6.7.2, critical values of

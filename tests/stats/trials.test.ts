@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { trialsToDetect, StatsInputError } from "@/lib/stats";
+import { StatsInputError, trialsToDetect } from "@/lib/stats";
 
 // The error of a mean of k trials is TE/√k (standard error of a mean; PRODUCT.md §4, planning).
 describe("trialsToDetect", () => {
@@ -10,7 +10,11 @@ describe("trialsToDetect", () => {
     expect(trialsToDetect(1.5, 1)).toBe(3); // 1.5/√3 = 0.866
     expect(trialsToDetect(0.3, 0.1)).toBe(10); // 0.3/0.1 is 2.9999999999999996 in floats
     expect(trialsToDetect(0, 1)).toBe(1);
-    for (const [te, swc] of [[0.7, 0.3], [3, 1], [0.021, 0.0093]]) {
+    for (const [te, swc] of [
+      [0.7, 0.3],
+      [3, 1],
+      [0.021, 0.0093],
+    ]) {
       const k = trialsToDetect(te, swc);
       expect(te / Math.sqrt(k)).toBeLessThan(swc);
       if (k > 1) expect(te / Math.sqrt(k - 1)).toBeGreaterThanOrEqual(swc);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { classifyChange, orientInterval, VERDICTS, StatsInputError, type Verdict } from "@/lib/stats";
+import { classifyChange, orientInterval, StatsInputError, VERDICTS, type Verdict } from "@/lib/stats";
 
 // Rules: PRODUCT.md §5 (our own scheme), applied in order.
 describe("classifyChange", () => {

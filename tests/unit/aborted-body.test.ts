@@ -11,7 +11,12 @@ function interrupted(): Request {
       setTimeout(() => controller.error(Object.assign(new Error("aborted"), { code: "ECONNRESET" })), 5);
     },
   });
-  return new Request("http://test.local/api/squads", { method: "POST", body, duplex: "half", headers: { "content-type": "application/json" } } as RequestInit);
+  return new Request("http://test.local/api/squads", {
+    method: "POST",
+    body,
+    duplex: "half",
+    headers: { "content-type": "application/json" },
+  } as RequestInit);
 }
 
 afterEach(() => vi.restoreAllMocks());
@@ -22,13 +27,18 @@ describe("an interrupted body", () => {
     const handler = withApi(async (request) => json(await readJson(request, z.object({ name: z.string() }))));
     const response = await handler(interrupted(), { params: Promise.resolve({}) });
     expect(response.status).toBe(400);
-    expect((await response.json()).error).toMatchObject({ code: "bad_request", message: expect.stringContaining("interrupted") });
+    expect((await response.json()).error).toMatchObject({
+      code: "bad_request",
+      message: expect.stringContaining("interrupted"),
+    });
     expect(log).not.toHaveBeenCalled();
   });
 
   it("answers 400 from the upload reader too", async () => {
     const log = vi.spyOn(console, "error").mockImplementation(() => undefined);
-    const handler = withApi(async (request) => json({ size: (await readCappedBytes(request, 1024, "too large")).byteLength }));
+    const handler = withApi(async (request) =>
+      json({ size: (await readCappedBytes(request, 1024, "too large")).byteLength }),
+    );
     expect((await handler(interrupted(), { params: Promise.resolve({}) })).status).toBe(400);
     expect(log).not.toHaveBeenCalled();
   });

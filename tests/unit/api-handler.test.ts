@@ -20,7 +20,9 @@ describe("withApi cannot fail", () => {
     // JSON cannot hold a BigInt: building this error's body throws, as a too-long error list does.
     const { status, body } = await answer(new ApiError(422, "invalid_input", "Bad file.", { details: { count: 10n } }));
     expect(status).toBe(500);
-    expect(JSON.parse(body)).toEqual({ error: { code: "internal", message: expect.stringMatching(/Nothing was changed/) } });
+    expect(JSON.parse(body)).toEqual({
+      error: { code: "internal", message: expect.stringMatching(/Nothing was changed/) },
+    });
     expect(log).toHaveBeenCalled();
   });
 
@@ -28,10 +30,17 @@ describe("withApi cannot fail", () => {
     vi.spyOn(console, "error").mockImplementation(() => {
       throw new Error("log sink down");
     });
-    const hostile = new Proxy({}, {
-      get() { throw new Error("no property"); },
-      getPrototypeOf() { throw new Error("no prototype"); },
-    });
+    const hostile = new Proxy(
+      {},
+      {
+        get() {
+          throw new Error("no property");
+        },
+        getPrototypeOf() {
+          throw new Error("no prototype");
+        },
+      },
+    );
     const { status, body } = await answer(hostile);
     expect(status).toBe(500);
     expect(JSON.parse(body).error.code).toBe("internal");

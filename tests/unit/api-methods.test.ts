@@ -20,7 +20,14 @@ function exportedMethods(source: string): string[] {
   const found = new Set<string>();
   for (const m of source.matchAll(/export\s+(?:const|async\s+function|function)\s+([A-Z]+)\b/g)) found.add(m[1]);
   for (const block of source.matchAll(/export\s*\{([^}]*)\}/g)) {
-    for (const part of block[1].split(",")) found.add(part.trim().split(/\s+as\s+/).pop()!.trim());
+    for (const part of block[1].split(","))
+      found.add(
+        part
+          .trim()
+          .split(/\s+as\s+/)
+          .pop()!
+          .trim(),
+      );
   }
   return METHODS.filter((m) => found.has(m));
 }
@@ -28,9 +35,14 @@ function exportedMethods(source: string): string[] {
 describe("API methods", () => {
   it("lists every route file with the methods it exports", () => {
     const actual = Object.fromEntries(
-      routeFiles(apiDir).map((file) => [relative(apiDir, file).replace(/\/?route\.ts$/, ""), exportedMethods(readFileSync(file, "utf8"))]),
+      routeFiles(apiDir).map((file) => [
+        relative(apiDir, file).replace(/\/?route\.ts$/, ""),
+        exportedMethods(readFileSync(file, "utf8")),
+      ]),
     );
-    const listed = Object.fromEntries(Object.entries(ROUTE_METHODS).map(([route, methods]) => [route, [...methods].sort()]));
+    const listed = Object.fromEntries(
+      Object.entries(ROUTE_METHODS).map(([route, methods]) => [route, [...methods].sort()]),
+    );
     const sorted = Object.fromEntries(Object.entries(actual).map(([route, methods]) => [route, [...methods].sort()]));
     expect(listed).toEqual(sorted);
   });
@@ -46,10 +58,18 @@ describe("API methods", () => {
 
   it("refuses what an address does not take, in the API's error shape on the API", () => {
     expect(methodRefusal("GET", "/api/me")).toBeNull();
-    expect(methodRefusal("PATCH", "/api/me")).toMatchObject({ status: 405, allow: ["GET", "HEAD", "OPTIONS"], contentType: "application/json" });
+    expect(methodRefusal("PATCH", "/api/me")).toMatchObject({
+      status: 405,
+      allow: ["GET", "HEAD", "OPTIONS"],
+      contentType: "application/json",
+    });
     expect(JSON.parse(methodRefusal("TRACE", "/api/me")!.body).error.code).toBe("method_not_allowed");
     expect(methodRefusal("GET", "/api/nothing-here")).toMatchObject({ status: 404, allow: null });
-    expect(methodRefusal("TRACE", "/sign-in")).toMatchObject({ status: 405, allow: ["GET", "HEAD"], contentType: expect.stringContaining("text/plain") });
+    expect(methodRefusal("TRACE", "/sign-in")).toMatchObject({
+      status: 405,
+      allow: ["GET", "HEAD"],
+      contentType: expect.stringContaining("text/plain"),
+    });
     expect(methodRefusal("POST", "/sessions/4")).toMatchObject({ status: 405 });
     // A server action posts to its page; Next.js's own addresses answer for themselves.
     expect(methodRefusal("POST", "/sessions/4", { serverAction: true })).toBeNull();

@@ -15,9 +15,21 @@ const G1 = [0.7, -1.6, -0.2, -1.2, -0.1, 3.4, 3.7, 0.8, 0.0, 2.0];
 const G2 = [1.9, 0.8, 1.1, 0.1, -0.1, 4.4, 5.5, 1.6, 4.6, 3.4];
 
 const rowsOf = (pre: number[], post: number[]): ReportRow[] =>
-  pre.map((v, i) => ({ athleteId: i + 1, name: `Athlete ${i + 1}`, pre: { value: v, flag: null }, post: { value: post[i], flag: null } }));
+  pre.map((v, i) => ({
+    athleteId: i + 1,
+    name: `Athlete ${i + 1}`,
+    pre: { value: v, flag: null },
+    post: { value: post[i], flag: null },
+  }));
 
-const higher: ReportTest = { direction: "higher", swcMethod: "sd-factor", swcValue: 0.2, cvPercent: null, typicalError: null, typicalErrorDf: null };
+const higher: ReportTest = {
+  direction: "higher",
+  swcMethod: "sd-factor",
+  swcValue: 0.2,
+  cvPercent: null,
+  typicalError: null,
+  typicalErrorDf: null,
+};
 
 describe("buildChangeReport", () => {
   it("matches R's paired t.test on the sleep data (90 % interval, g2 − g1)", () => {
@@ -86,13 +98,30 @@ describe("buildChangeReport", () => {
   });
 
   it("takes an SWC override: fixed, or a factor × CV% of the mean pre score", () => {
-    const fixed = buildChangeReport({ test: higher, rows: rowsOf(G1, G2), confidence: 0.95, swc: { method: "fixed", value: 1 } });
+    const fixed = buildChangeReport({
+      test: higher,
+      rows: rowsOf(G1, G2),
+      confidence: 0.95,
+      swc: { method: "fixed", value: 1 },
+    });
     expect(fixed.squad.swc).toBe(1);
     expect(fixed.settings.swcSource).toBe("report");
     // 0.3 × CV 2 % × mean pre 0.75 → 0.0045 (METHODS.md §2 formula)
-    const cv = buildChangeReport({ test: { ...higher, cvPercent: 2 }, rows: rowsOf(G1, G2), confidence: 0.95, swc: { method: "cv-factor", value: 0.3 } });
+    const cv = buildChangeReport({
+      test: { ...higher, cvPercent: 2 },
+      rows: rowsOf(G1, G2),
+      confidence: 0.95,
+      swc: { method: "cv-factor", value: 0.3 },
+    });
     expectRelClose(cv.squad.swc, (0.3 * 2 * 0.75) / 100, 1e-12);
-    expect(() => buildChangeReport({ test: higher, rows: rowsOf(G1, G2), confidence: 0.9, swc: { method: "cv-factor", value: 0.3 } })).toThrow(StatsInputError);
+    expect(() =>
+      buildChangeReport({
+        test: higher,
+        rows: rowsOf(G1, G2),
+        confidence: 0.9,
+        swc: { method: "cv-factor", value: 0.3 },
+      }),
+    ).toThrow(StatsInputError);
   });
 
   it("refuses fewer than two pairs", () => {

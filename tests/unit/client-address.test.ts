@@ -1,9 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { UNKNOWN_ADDRESS, clientAddress, trustedProxyHops } from "@/lib/auth/client-address";
+import { clientAddress, trustedProxyHops, UNKNOWN_ADDRESS } from "@/lib/auth/client-address";
 
 describe("clientAddress: which address sign-in throttling counts", () => {
   it("reads TRUST_PROXY as a number of proxies; unset means none", () => {
-    expect([undefined, "", "0", "false", "no", "-1", "x"].map((v) => trustedProxyHops(v))).toEqual([0, 0, 0, 0, 0, 0, 0]);
+    expect([undefined, "", "0", "false", "no", "-1", "x"].map((v) => trustedProxyHops(v))).toEqual([
+      0, 0, 0, 0, 0, 0, 0,
+    ]);
     expect([trustedProxyHops("1"), trustedProxyHops("true"), trustedProxyHops(" 2 ")]).toEqual([1, 1, 2]);
   });
 

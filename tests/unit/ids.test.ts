@@ -11,9 +11,27 @@ describe("ids in URLs", () => {
   });
 
   it("refuses every other spelling that Number() would turn into the same record", () => {
-    for (const alias of ["6.0", "6e0", "0x6", "0b110", "0o6", " 6", "6 ", "\t6", "+6", "06", "6.", "٦", "６", "6n", "1_0"]) {
+    for (const alias of [
+      "6.0",
+      "6e0",
+      "0x6",
+      "0b110",
+      "0o6",
+      " 6",
+      "6 ",
+      "\t6",
+      "+6",
+      "06",
+      "6.",
+      "٦",
+      "６",
+      "6n",
+      "1_0",
+    ]) {
       expect(canonicalId(alias), alias).toBeNull();
-      expect(() => parseId(alias, "Squad"), alias).toThrow(expect.objectContaining({ status: 404, message: "Squad was not found." }));
+      expect(() => parseId(alias, "Squad"), alias).toThrow(
+        expect.objectContaining({ status: 404, message: "Squad was not found." }),
+      );
     }
   });
 
@@ -25,6 +43,7 @@ describe("ids in URLs", () => {
 
   it("ids in JSON bodies are checked by the schema: whole, positive, safe", () => {
     expect(idSchema.safeParse(6).success).toBe(true);
-    for (const value of [6.5, 0, -6, "6", 2 ** 53, Number.NaN, Number.POSITIVE_INFINITY]) expect(idSchema.safeParse(value).success, String(value)).toBe(false);
+    for (const value of [6.5, 0, -6, "6", 2 ** 53, Number.NaN, Number.POSITIVE_INFINITY])
+      expect(idSchema.safeParse(value).success, String(value)).toBe(false);
   });
 });

@@ -33,7 +33,17 @@ describe("parseTrialHeader", () => {
 
 describe("suggestWideColumns", () => {
   it("matches whole names first, then name + trial, case-insensitively, with a unit suffix allowed", () => {
-    const headers = ["Athlete", "countermovement jump 1", "Countermovement jump (cm) #2", "10 M SPRINT", "Intermittent recovery run (level 1)", "Back squat 1RM", "Position", "30 m sprint 1", "Broad jump"];
+    const headers = [
+      "Athlete",
+      "countermovement jump 1",
+      "Countermovement jump (cm) #2",
+      "10 M SPRINT",
+      "Intermittent recovery run (level 1)",
+      "Back squat 1RM",
+      "Position",
+      "30 m sprint 1",
+      "Broad jump",
+    ];
     const s = suggestWideColumns(headers, context, "Athlete");
     expect(s.map((c) => [c.header, c.status, c.testId, c.trial])).toEqual([
       ["Athlete", "athlete", null, null],
@@ -54,23 +64,40 @@ describe("resolveMapping (header errors land on the header row)", () => {
 
   it("suggests long columns", () => {
     const r = resolve("Athlete,Test,Trial,Value\n");
-    expect(r.mapping).toEqual({ format: "long", columns: { athlete: "Athlete", test: "Test", trial: "Trial", value: "Value" } });
+    expect(r.mapping).toEqual({
+      format: "long",
+      columns: { athlete: "Athlete", test: "Test", trial: "Trial", value: "Value" },
+    });
     expect(r.errors).toEqual([]);
   });
 
   it("lists unknown and not-in-battery wide columns as row 1 errors", () => {
     const r = resolve("athlete,Countermovement jump 1,Broad jump,30 m sprint\n");
-    expect(r.errors.map((e) => [e.row, e.column])).toEqual([[1, "Broad jump"], [1, "30 m sprint"]]);
+    expect(r.errors.map((e) => [e.row, e.column])).toEqual([
+      [1, "Broad jump"],
+      [1, "30 m sprint"],
+    ]);
     expect(r.errors[1].message).toMatch(/not in this session's battery/);
-    expect(r.unknownTests.map((t) => [t.name, t.reason])).toEqual([["Broad jump", "unknown"], ["30 m sprint", "not-in-battery"]]);
+    expect(r.unknownTests.map((t) => [t.name, t.reason])).toEqual([
+      ["Broad jump", "unknown"],
+      ["30 m sprint", "not-in-battery"],
+    ]);
   });
 
   it("an explicit mapping is authoritative: unnamed columns are ignored, wrong targets refused", () => {
-    const ok = resolve("athlete,Broad jump,CMJ a,CMJ b\n", { columns: { "CMJ a": { testId: 1, trial: 1 }, "CMJ b": { testId: 1, trial: 2 }, "Broad jump": null } });
+    const ok = resolve("athlete,Broad jump,CMJ a,CMJ b\n", {
+      columns: { "CMJ a": { testId: 1, trial: 1 }, "CMJ b": { testId: 1, trial: 2 }, "Broad jump": null },
+    });
     expect(ok.errors).toEqual([]);
-    expect(ok.mapping).toMatchObject({ format: "wide", athleteColumn: "athlete", columns: { "CMJ a": { testId: 1, trial: 1 }, "CMJ b": { testId: 1, trial: 2 } } });
+    expect(ok.mapping).toMatchObject({
+      format: "wide",
+      athleteColumn: "athlete",
+      columns: { "CMJ a": { testId: 1, trial: 1 }, "CMJ b": { testId: 1, trial: 2 } },
+    });
 
-    const bad = resolve("athlete,a,b,c\n", { columns: { a: { testId: 1, trial: 1 }, b: { testId: 1, trial: 1 }, c: { testId: 99, trial: 1 }, d: null } });
+    const bad = resolve("athlete,a,b,c\n", {
+      columns: { a: { testId: 1, trial: 1 }, b: { testId: 1, trial: 1 }, c: { testId: 99, trial: 1 }, d: null },
+    });
     expect(bad.errors.map((e) => e.column)).toEqual(["b", "c", "d"]);
     expect(bad.errors[0].message).toMatch(/both mapped/);
     const trialTooHigh = resolve("athlete,a\n", { columns: { a: { testId: 5, trial: 2 } } });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { detectDelimiter, parseCsv } from "@/lib/import/csv";
-import { ImportFileError, decodeCsvBytes } from "@/lib/import/decode";
+import { decodeCsvBytes, ImportFileError } from "@/lib/import/decode";
 
 const bytes = (text: string) => new TextEncoder().encode(text);
 
@@ -48,7 +48,9 @@ describe("detectDelimiter", () => {
 
 describe("parseCsv", () => {
   it("splits quoted fields the RFC 4180 way: delimiters, doubled quotes and line breaks inside quotes", () => {
-    const table = parseCsv('athlete,test,value\n"Silva, Ana","Countermovement ""CMJ"" jump","33.1"\n"Okoro\nBen",10 m sprint,1.9\n');
+    const table = parseCsv(
+      'athlete,test,value\n"Silva, Ana","Countermovement ""CMJ"" jump","33.1"\n"Okoro\nBen",10 m sprint,1.9\n',
+    );
     expect(table.rows).toEqual([
       ["Silva, Ana", 'Countermovement "CMJ" jump', "33.1"],
       ["Okoro\nBen", "10 m sprint", "1.9"],
@@ -59,13 +61,19 @@ describe("parseCsv", () => {
   it("handles CRLF line ends (RFC 4180 §2.1) and a missing final line break", () => {
     const table = parseCsv("athlete,test,value\r\nAna,CMJ,1\r\nBen,CMJ,2");
     expect(table.headers).toEqual(["athlete", "test", "value"]);
-    expect(table.rows).toEqual([["Ana", "CMJ", "1"], ["Ben", "CMJ", "2"]]);
+    expect(table.rows).toEqual([
+      ["Ana", "CMJ", "1"],
+      ["Ben", "CMJ", "2"],
+    ]);
   });
 
   it("skips blank rows but keeps spreadsheet row numbers", () => {
     const table = parseCsv("\nathlete;value\n\nAna;1,5\n;\nBen;2\n\n");
     expect(table.headerRow).toBe(2);
-    expect(table.rows).toEqual([["Ana", "1,5"], ["Ben", "2"]]);
+    expect(table.rows).toEqual([
+      ["Ana", "1,5"],
+      ["Ben", "2"],
+    ]);
     expect(table.rowNumbers).toEqual([4, 6]);
   });
 

@@ -43,7 +43,8 @@ describe("parseScore: numbers that cannot be stored as written", () => {
       expect(parseScore(raw, ",")).toMatch(/outside the range of a score/);
     }
     expect(parseScore(huge, ",")).toMatch(/^“1000000000000000000000000000000000000000…”/);
-    for (const raw of ["NaN", "Infinity", "-Infinity", "∞", "1e308", "-1e308"]) expect(typeof parseScore(raw, ",")).toBe("string");
+    for (const raw of ["NaN", "Infinity", "-Infinity", "∞", "1e308", "-1e308"])
+      expect(typeof parseScore(raw, ",")).toBe("string");
     expect(parseScore("1000000000", ",")).toBe(1e9);
     expect(parseScore("-1000000000,0", ";")).toBe(-1e9);
   });
@@ -51,7 +52,8 @@ describe("parseScore: numbers that cannot be stored as written", () => {
   it("reads a very long cell in linear time (no backtracking blow-up)", () => {
     const digits = "1".repeat(2_000_000);
     const start = performance.now();
-    for (const raw of [digits, `${digits}#`, `${digits}x`, `${digits}.${digits}#`]) expect(typeof parseScore(raw, ";")).toBe("string");
+    for (const raw of [digits, `${digits}#`, `${digits}x`, `${digits}.${digits}#`])
+      expect(typeof parseScore(raw, ";")).toBe("string");
     // A quadratic pattern takes hours on these; a linear one milliseconds. The bound is loose on purpose.
     expect(performance.now() - start).toBeLessThan(2000);
   });

@@ -1,16 +1,22 @@
 import { describe, expect, it } from "vitest";
-import { mappingRequestOf } from "@/lib/validation/import";
-import { importOptionsSchema } from "@/lib/validation/import";
+import { importOptionsSchema, mappingRequestOf } from "@/lib/validation/import";
 
 describe("importOptionsSchema (the multipart fields besides the file)", () => {
   it("defaults to a preview and never replaces unless told", () => {
     expect(importOptionsSchema.parse({})).toMatchObject({ mode: "preview", replace: false });
-    for (const yes of ["yes", "YES", "true", "1", "on"]) expect(importOptionsSchema.parse({ replace: yes }).replace).toBe(true);
-    for (const no of ["no", "", "false", "0", "maybe"]) expect(importOptionsSchema.parse({ replace: no }).replace).toBe(false);
+    for (const yes of ["yes", "YES", "true", "1", "on"])
+      expect(importOptionsSchema.parse({ replace: yes }).replace).toBe(true);
+    for (const no of ["no", "", "false", "0", "maybe"])
+      expect(importOptionsSchema.parse({ replace: no }).replace).toBe(false);
   });
 
   it("reads the wide mapping as JSON: column → { testId, trial } or null", () => {
-    const options = importOptionsSchema.parse({ mode: "commit", format: "wide", athleteColumn: "Player", mapping: '{"CMJ a":{"testId":3,"trial":2},"Notes":null}' });
+    const options = importOptionsSchema.parse({
+      mode: "commit",
+      format: "wide",
+      athleteColumn: "Player",
+      mapping: '{"CMJ a":{"testId":3,"trial":2},"Notes":null}',
+    });
     expect(mappingRequestOf(options)).toEqual({
       format: "wide",
       athleteColumn: "Player",

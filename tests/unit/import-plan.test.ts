@@ -11,7 +11,8 @@ const values = (csv: string, request?: MappingRequest) =>
 
 describe("long format", () => {
   it("reads athlete by external id or name, test by name, trial and value", () => {
-    const csv = "athlete,test,trial,value\nNHA001,Countermovement jump,1,33.1\nana silva,countermovement jump,2,34.0\n  Ben Okoro ,10 m sprint,1,1.91\n";
+    const csv =
+      "athlete,test,trial,value\nNHA001,Countermovement jump,1,33.1\nana silva,countermovement jump,2,34.0\n  Ben Okoro ,10 m sprint,1,1.91\n";
     const plan = analyse(csv);
     expect(plan.errors).toEqual([]);
     expect(plan.format).toBe("long");
@@ -20,7 +21,12 @@ describe("long format", () => {
       [11, 1, 2, 34, 3],
       [12, 2, 1, 1.91, 4],
     ]);
-    expect(plan.sample[0]).toMatchObject({ athleteName: "Ana Silva", testName: "Countermovement jump", trial: 1, value: 33.1 });
+    expect(plan.sample[0]).toMatchObject({
+      athleteName: "Ana Silva",
+      testName: "Countermovement jump",
+      trial: 1,
+      value: 33.1,
+    });
   });
 
   it("reads a ; file with decimal commas and a BOM-free CRLF body", () => {
@@ -31,7 +37,9 @@ describe("long format", () => {
   });
 
   it("skips empty values, and without a trial column every row is trial 1", () => {
-    expect(values("athlete,test,value\nNHA001,Back squat 1RM,92.5\nNHA002,Back squat 1RM,\n")).toEqual([[11, 5, 1, 92.5, 2]]);
+    expect(values("athlete,test,value\nNHA001,Back squat 1RM,92.5\nNHA002,Back squat 1RM,\n")).toEqual([
+      [11, 5, 1, 92.5, 2],
+    ]);
   });
 
   it("names row and column of every problem, and lists unknown athletes and tests", () => {
@@ -50,7 +58,15 @@ describe("long format", () => {
     ].join("\n");
     const plan = analyse(csv);
     expect(plan.errors.map((e) => [e.row, e.column])).toEqual([
-      [2, "value"], [3, "athlete"], [4, "test"], [5, "test"], [6, "trial"], [7, "trial"], [9, "trial"], [10, "athlete"], [11, "athlete"],
+      [2, "value"],
+      [3, "athlete"],
+      [4, "test"],
+      [5, "test"],
+      [6, "trial"],
+      [7, "trial"],
+      [9, "trial"],
+      [10, "athlete"],
+      [11, "athlete"],
     ]);
     expect(plan.errorCount).toBe(9);
     const byRow = new Map(plan.errors.map((e) => [e.row, e.message]));
@@ -63,7 +79,10 @@ describe("long format", () => {
       { value: "Zoe Nobody", reason: "unknown", count: 1, rows: [3] },
       { value: "Sam Lee", reason: "ambiguous", count: 1, rows: [10] },
     ]);
-    expect(plan.unknownTests.map((t) => [t.name, t.reason, t.rows])).toEqual([["Broad jump", "unknown", [4]], ["30 m sprint", "not-in-battery", [5]]]);
+    expect(plan.unknownTests.map((t) => [t.name, t.reason, t.rows])).toEqual([
+      ["Broad jump", "unknown", [4]],
+      ["30 m sprint", "not-in-battery", [5]],
+    ]);
   });
 
   it("warns (without blocking) about implausible values, e.g. a sprint typed in hundredths", () => {
@@ -90,7 +109,8 @@ describe("long format", () => {
 
 describe("wide format", () => {
   it("reads one column per test-trial; a plain test-name column is trial 1", () => {
-    const csv = "athlete,Countermovement jump 1,Countermovement jump #2,Countermovement jump (trial 3),10 m sprint,Position\nNHA001,33.1,,34.2,1.88,Winger\nBen Okoro,,,,1.95,\n";
+    const csv =
+      "athlete,Countermovement jump 1,Countermovement jump #2,Countermovement jump (trial 3),10 m sprint,Position\nNHA001,33.1,,34.2,1.88,Winger\nBen Okoro,,,,1.95,\n";
     const plan = analyse(csv);
     expect(plan.errors).toEqual([]);
     expect(plan.format).toBe("wide");
@@ -104,7 +124,11 @@ describe("wide format", () => {
 
   it("uses the mapping chosen in the UI, ignoring columns it leaves out", () => {
     const csv = "Player;CMJ-a;CMJ-b;Notes\nNHA002;31,5;32,0;tired\n";
-    const request: MappingRequest = { format: "wide", athleteColumn: "Player", columns: { "CMJ-a": { testId: 1, trial: 1 }, "CMJ-b": { testId: 1, trial: 2 } } };
+    const request: MappingRequest = {
+      format: "wide",
+      athleteColumn: "Player",
+      columns: { "CMJ-a": { testId: 1, trial: 1 }, "CMJ-b": { testId: 1, trial: 2 } },
+    };
     expect(values(csv, request)).toEqual([
       [12, 1, 1, 31.5, 2],
       [12, 1, 2, 32, 2],
@@ -114,7 +138,11 @@ describe("wide format", () => {
   it("names row and column of bad cells; an unknown athlete is one error on the athlete column", () => {
     const csv = "athlete,Countermovement jump 1,10 m sprint\nNHA001,33.1,fast\nNobody,30,1.9\nNHA001,34,\n";
     const plan = analyse(csv);
-    expect(plan.errors.map((e) => [e.row, e.column])).toEqual([[2, "10 m sprint"], [3, "athlete"], [4, "Countermovement jump 1"]]);
+    expect(plan.errors.map((e) => [e.row, e.column])).toEqual([
+      [2, "10 m sprint"],
+      [3, "athlete"],
+      [4, "Countermovement jump 1"],
+    ]);
     expect(plan.errors[2].message).toMatch(/Rows 2 and 4 both give Countermovement jump trial 1 for Ana Silva/);
   });
 

@@ -42,7 +42,10 @@ const isClient = (file: string) => /^["']use client["']/.test(readFileSync(file,
 const PLAIN_AUTH = "(?!password|permissions)";
 const SERVER_ONLY = [/^db\//, /^lib\/data\//, new RegExp(`^lib/auth/${PLAIN_AUTH}`), /^lib\/api\//];
 
-const files = LAYERS.flatMap((layer) => sourceFiles(join(root, layer))).map((f) => ({ abs: f, rel: relative(root, f) }));
+const files = LAYERS.flatMap((layer) => sourceFiles(join(root, layer))).map((f) => ({
+  abs: f,
+  rel: relative(root, f),
+}));
 
 describe("layers", () => {
   it("finds the source tree", () => {
@@ -76,14 +79,20 @@ describe("layers", () => {
   it("the data layer, the auth gate and the database client are marked server-only", () => {
     const guarded = files.filter((f) => new RegExp(`^(lib/data/|db/client\\.ts$|lib/auth/${PLAIN_AUTH})`).test(f.rel));
     expect(guarded.length).toBeGreaterThan(10);
-    const unmarked = guarded.filter((f) => !/^import "server-only";$/m.test(readFileSync(f.abs, "utf8"))).map((f) => f.rel);
+    const unmarked = guarded
+      .filter((f) => !/^import "server-only";$/m.test(readFileSync(f.abs, "utf8")))
+      .map((f) => f.rel);
     expect(unmarked).toEqual([]);
   });
 
   it("the data layer does not import the HTTP layer", () => {
     const wrong = files
       .filter((f) => f.rel.startsWith("lib/data/"))
-      .flatMap((f) => importsOf(f.abs).filter((i) => i.target.startsWith("lib/api/")).map((i) => `${f.rel} → ${i.target}`));
+      .flatMap((f) =>
+        importsOf(f.abs)
+          .filter((i) => i.target.startsWith("lib/api/"))
+          .map((i) => `${f.rel} → ${i.target}`),
+      );
     expect(wrong).toEqual([]);
   });
 
@@ -93,7 +102,8 @@ describe("layers", () => {
       graph.set(f.rel.replace(/\.tsx?$/, ""), new Set(importsOf(f.abs).map((i) => i.target.replace(/\.tsx?$/, ""))));
     }
     const cycles: string[] = [];
-    for (const [a, targets] of graph) for (const b of targets) if (a < b && graph.get(b)?.has(a)) cycles.push(`${a} ↔ ${b}`);
+    for (const [a, targets] of graph)
+      for (const b of targets) if (a < b && graph.get(b)?.has(a)) cycles.push(`${a} ↔ ${b}`);
     expect(cycles).toEqual([]);
   });
 });

@@ -4,8 +4,19 @@
  */
 import { describe, expect, it } from "vitest";
 import {
-  MANAGERS, OWNERS, STAFF, canEditRoster, canEditSession, canEditTestLibrary, canManageSquad, canPublish,
-  isAthlete, isCoach, isManager, isOwner, isStaff,
+  canEditRoster,
+  canEditSession,
+  canEditTestLibrary,
+  canManageSquad,
+  canPublish,
+  isAthlete,
+  isCoach,
+  isManager,
+  isOwner,
+  isStaff,
+  MANAGERS,
+  OWNERS,
+  STAFF,
 } from "@/lib/auth/permissions";
 import { ROLES, type Role } from "@/lib/domain";
 

@@ -30,9 +30,16 @@ afterAll(async () => {
   await new Promise((resolve) => server.close(resolve));
 });
 
-function send(method: string, path: string, body?: string): Promise<{ status: number; headers: http.IncomingHttpHeaders; body: string }> {
+function send(
+  method: string,
+  path: string,
+  body?: string,
+): Promise<{ status: number; headers: http.IncomingHttpHeaders; body: string }> {
   return new Promise((resolve, reject) => {
-    const headers = body === undefined ? {} : { "content-type": "application/json", "content-length": String(Buffer.byteLength(body)) };
+    const headers =
+      body === undefined
+        ? {}
+        : { "content-type": "application/json", "content-length": String(Buffer.byteLength(body)) };
     const req = http.request({ host: "127.0.0.1", port, method, path, headers }, (res) => {
       let body = "";
       res.on("data", (chunk) => (body += chunk));

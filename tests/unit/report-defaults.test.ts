@@ -1,7 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { defaultComparison } from "@/lib/reports/defaults";
 
-const s = (id: number, date: string, phase: "baseline" | "pre-block" | "post-block" | "retest" | "in-season", testIds = [1, 2], squadId = 1) => ({
+const s = (
+  id: number,
+  date: string,
+  phase: "baseline" | "pre-block" | "post-block" | "retest" | "in-season",
+  testIds = [1, 2],
+  squadId = 1,
+) => ({
   id,
   squadId,
   date,
@@ -11,7 +17,12 @@ const s = (id: number, date: string, phase: "baseline" | "pre-block" | "post-blo
 
 describe("defaultComparison", () => {
   it("opens on the latest post-block session against the pre-block before it", () => {
-    const sessions = [s(1, "2026-08-24", "baseline"), s(2, "2026-09-07", "pre-block"), s(3, "2026-11-02", "post-block"), s(4, "2026-09-01", "retest")];
+    const sessions = [
+      s(1, "2026-08-24", "baseline"),
+      s(2, "2026-09-07", "pre-block"),
+      s(3, "2026-11-02", "post-block"),
+      s(4, "2026-09-01", "retest"),
+    ];
     expect(defaultComparison(sessions, 1)).toEqual({ fromSessionId: 2, toSessionId: 3, testId: 1 });
   });
 
@@ -21,7 +32,9 @@ describe("defaultComparison", () => {
       toSessionId: 3,
       testId: 2,
     });
-    expect(defaultComparison([s(5, "2026-01-01", "in-season", [7]), s(6, "2026-02-01", "in-season", [8, 7])], 1)).toEqual({
+    expect(
+      defaultComparison([s(5, "2026-01-01", "in-season", [7]), s(6, "2026-02-01", "in-season", [8, 7])], 1),
+    ).toEqual({
       fromSessionId: 5,
       toSessionId: 6,
       testId: 7,
@@ -29,7 +42,11 @@ describe("defaultComparison", () => {
   });
 
   it("is null without two sessions of the squad that share a test", () => {
-    expect(defaultComparison([s(1, "2026-01-01", "pre-block", [1]), s(2, "2026-02-01", "post-block", [2])], 1)).toBeNull();
-    expect(defaultComparison([s(1, "2026-01-01", "pre-block"), s(2, "2026-02-01", "post-block", [1], 2)], 1)).toBeNull();
+    expect(
+      defaultComparison([s(1, "2026-01-01", "pre-block", [1]), s(2, "2026-02-01", "post-block", [2])], 1),
+    ).toBeNull();
+    expect(
+      defaultComparison([s(1, "2026-01-01", "pre-block"), s(2, "2026-02-01", "post-block", [1], 2)], 1),
+    ).toBeNull();
   });
 });

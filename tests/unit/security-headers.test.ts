@@ -25,7 +25,9 @@ describe("next.config.ts headers (every response)", () => {
       "Permissions-Policy": expect.stringContaining("camera=()"),
     });
     expect(all["Content-Security-Policy"]).toContain("frame-ancestors 'none'");
-    expect(all["Content-Security-Policy"]).not.toMatch(/unsafe-eval|'unsafe-inline'[^;]*;.*script|script-src[^;]*unsafe-inline/);
+    expect(all["Content-Security-Policy"]).not.toMatch(
+      /unsafe-eval|'unsafe-inline'[^;]*;.*script|script-src[^;]*unsafe-inline/,
+    );
     const api = Object.fromEntries(rules.find((r) => r.source === "/api/:path*")!.headers.map((h) => [h.key, h.value]));
     expect(api["Cache-Control"]).toBe("no-store");
     expect(api["Content-Security-Policy"]).toContain("default-src 'none'");
@@ -68,9 +70,13 @@ describe("proxy.ts", () => {
     expect((await proxy(request("/sign-in"))).headers.get("strict-transport-security")).toBeNull();
     vi.stubEnv("NEXTAUTH_URL", "https://club.example");
     for (const path of ["/sign-in", "/", "/api/me", "/_next/static/chunks/x.js"]) {
-      expect((await proxy(request(path))).headers.get("strict-transport-security"), path).toMatch(/^max-age=\d{8,}; includeSubDomains$/);
+      expect((await proxy(request(path))).headers.get("strict-transport-security"), path).toMatch(
+        /^max-age=\d{8,}; includeSubDomains$/,
+      );
     }
-    expect((await proxy(request("/sign-in"))).headers.get("content-security-policy")).toContain("upgrade-insecure-requests");
+    expect((await proxy(request("/sign-in"))).headers.get("content-security-policy")).toContain(
+      "upgrade-insecure-requests",
+    );
   });
 
   it("marks API answers no-store", async () => {
@@ -91,7 +97,8 @@ describe("proxy.ts", () => {
       expect(page.status, method).toBe(405);
       expect(page.headers.get("allow")).toBe("GET, HEAD");
     }
-    for (const method of ["GET", "HEAD", "OPTIONS"]) expect((await proxy(request("/api/me", method))).headers.get("x-middleware-next"), method).toBe("1");
+    for (const method of ["GET", "HEAD", "OPTIONS"])
+      expect((await proxy(request("/api/me", method))).headers.get("x-middleware-next"), method).toBe("1");
     expect((await proxy(request("/api/sessions/4/results", "GET"))).headers.get("allow")).toBe("OPTIONS, PUT");
   });
 
@@ -106,7 +113,9 @@ describe("withApi", () => {
   it("marks every API answer no-store, errors included, and adds HSTS over https", async () => {
     vi.stubEnv("NEXTAUTH_URL", "https://club.example");
     const log = vi.spyOn(console, "error").mockImplementation(() => undefined);
-    const ok = await withApi(async () => json({ ok: true }))(new Request("http://test.local/api/x"), { params: Promise.resolve({}) });
+    const ok = await withApi(async () => json({ ok: true }))(new Request("http://test.local/api/x"), {
+      params: Promise.resolve({}),
+    });
     const failed = await withApi(async () => {
       throw new Error("boom");
     })(new Request("http://test.local/api/x"), { params: Promise.resolve({}) });

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { numberOrNull, paddedNumber, parseDecimal } from "@/lib/decimal";
-import { parseBlock, isBlock } from "@/lib/sheet/columns";
+import { isBlock, parseBlock } from "@/lib/sheet/columns";
 
 describe("parseDecimal: what a coach types into a Session sheet cell", () => {
   it("reads decimal points and decimal commas, and empty as an empty trial", () => {
@@ -39,7 +39,10 @@ describe("form numbers", () => {
 
 describe("pasting a block from a spreadsheet", () => {
   it("splits rows by newline (any style) and cells by tab, ignoring the trailing newline", () => {
-    expect(parseBlock("1.81\t1.79\r\n1.90\t1,88\n")).toEqual([["1.81", "1.79"], ["1.90", "1,88"]]);
+    expect(parseBlock("1.81\t1.79\r\n1.90\t1,88\n")).toEqual([
+      ["1.81", "1.79"],
+      ["1.90", "1,88"],
+    ]);
     expect(isBlock("41.2\n")).toBe(false);
     expect(isBlock("41.2\t40.8")).toBe(true);
   });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { MAGNITUDE_THRESHOLDS, magnitudeOfEffect, sensitivity, VERDICTS, type Magnitude } from "@/lib/stats";
+import { MAGNITUDE_THRESHOLDS, type Magnitude, magnitudeOfEffect, sensitivity, VERDICTS } from "@/lib/stats";
 import {
   explainSensitivity,
   MAGNITUDE_LABELS,
@@ -13,7 +13,14 @@ const MBI_WORDING = /likely|possibly|probabl|almost certain|beneficial|harmful/i
 
 describe("verdict words (PRODUCT.md §5)", () => {
   it("lists every verdict with a plain label", () => {
-    expect(VERDICTS.map(verdictLabel)).toEqual(["Clear gain", "Gain", "Steady", "Decline", "Clear decline", "Inconclusive"]);
+    expect(VERDICTS.map(verdictLabel)).toEqual([
+      "Clear gain",
+      "Gain",
+      "Steady",
+      "Decline",
+      "Clear decline",
+      "Inconclusive",
+    ]);
     expect(Object.keys(VERDICT_LABELS).sort()).toEqual([...VERDICTS].sort());
   });
 
@@ -48,7 +55,9 @@ describe("sensitivity words", () => {
   it("uses none of the traditional labels or probabilistic wording", () => {
     for (const te of [0.5, 1, 2]) {
       const s = sensitivity(te, 1);
-      expect(`${SENSITIVITY_LABELS[s.rating]} ${explainSensitivity(s)}`).not.toMatch(/\bgood\b|\bOK\b|marginal|likely|possibly/i);
+      expect(`${SENSITIVITY_LABELS[s.rating]} ${explainSensitivity(s)}`).not.toMatch(
+        /\bgood\b|\bOK\b|marginal|likely|possibly/i,
+      );
     }
   });
 });

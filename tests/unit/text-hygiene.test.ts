@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { squadCreateSchema } from "@/lib/validation/roster";
 import { cleanText, optionalText, requiredText } from "@/lib/validation/common";
+import { squadCreateSchema } from "@/lib/validation/roster";
 import { sessionCreateSchema } from "@/lib/validation/sessions";
 
 const name = requiredText(80, "Name");
@@ -8,7 +8,20 @@ const position = optionalText(60, "Position");
 
 describe("required text", () => {
   it("refuses text with nothing visible in it", () => {
-    for (const value of ["", "\u0000", "\u200b", "\u202e", "\u2066\u2069", " \t\r\n ", "\ufeff", "\u200b\u200d\u200b", "\u3164", "\u2800", "\u0085\u00a0", "\u0301"]) {
+    for (const value of [
+      "",
+      "\u0000",
+      "\u200b",
+      "\u202e",
+      "\u2066\u2069",
+      " \t\r\n ",
+      "\ufeff",
+      "\u200b\u200d\u200b",
+      "\u3164",
+      "\u2800",
+      "\u0085\u00a0",
+      "\u0301",
+    ]) {
       const parsed = name.safeParse(value);
       expect(parsed.success, JSON.stringify(value)).toBe(false);
     }
@@ -41,7 +54,8 @@ describe("required text", () => {
 
 describe("optional text", () => {
   it("turns empty or only-invisible text into null", () => {
-    for (const value of [undefined, null, "", "  ", "\u200b", "\u202e\u0000"]) expect(position.parse(value), JSON.stringify(value)).toBeNull();
+    for (const value of [undefined, null, "", "  ", "\u200b", "\u202e\u0000"])
+      expect(position.parse(value), JSON.stringify(value)).toBeNull();
   });
 
   it("refuses text that draws nothing on its own rather than storing it", () => {
@@ -58,7 +72,13 @@ describe("optional text", () => {
 describe("every form and route shares the rule", () => {
   it("squads and sessions use it", () => {
     expect(squadCreateSchema.safeParse({ name: "\u200b" }).success).toBe(false);
-    const session = sessionCreateSchema.parse({ squadId: 1, date: "2026-09-14", phase: "retest", testIds: [1], notes: "Wet track.\r\n\u202eWind 2 m/s\u0000" });
+    const session = sessionCreateSchema.parse({
+      squadId: 1,
+      date: "2026-09-14",
+      phase: "retest",
+      testIds: [1],
+      notes: "Wet track.\r\n\u202eWind 2 m/s\u0000",
+    });
     expect(session.notes).toBe("Wet track.\nWind 2 m/s");
   });
 });

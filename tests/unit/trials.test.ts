@@ -5,7 +5,8 @@ import { trialValue } from "@/lib/validation/sessions";
 describe("trial magnitude limit (shared by the Session sheet schema and the import)", () => {
   it("accepts finite scores up to ±1e9 and nothing else", () => {
     for (const v of [0, -0, 1.86, -MAX_TRIAL_MAGNITUDE, MAX_TRIAL_MAGNITUDE]) expect(isStorableTrial(v)).toBe(true);
-    for (const v of [Infinity, -Infinity, NaN, 1e308, -1e308, MAX_TRIAL_MAGNITUDE + 1]) expect(isStorableTrial(v)).toBe(false);
+    for (const v of [Infinity, -Infinity, NaN, 1e308, -1e308, MAX_TRIAL_MAGNITUDE + 1])
+      expect(isStorableTrial(v)).toBe(false);
     expect(trialValue.safeParse(1e308).success).toBe(false);
     expect(trialValue.safeParse(null).success).toBe(true);
     expect(trialValue.safeParse(1e9).success).toBe(true);

@@ -1,19 +1,23 @@
-import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { SessionList } from "@/components/sessions/session-list";
 import { STAFF } from "@/lib/auth/guard";
-import { canPublish } from "@/lib/auth/permissions";
 import { pageGuard } from "@/lib/auth/page-guard";
-import { canonicalId } from "@/lib/ids";
+import { canPublish } from "@/lib/auth/permissions";
 import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
 import { listSessions } from "@/lib/data/sessions";
 import { listSquads } from "@/lib/data/squads";
 import { listTests } from "@/lib/data/tests";
+import { canonicalId } from "@/lib/ids";
 import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
 
 export const metadata: Metadata = { title: "Sessions" };
 
-export default async function SessionsPage({ searchParams }: { searchParams: Promise<{ squadId?: string | string[] }> }) {
+export default async function SessionsPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ squadId?: string | string[] }>;
+}) {
   const actor = await pageGuard({ roles: STAFF });
   const raw = (await searchParams).squadId;
   // A malformed filter shows every session rather than an error page.

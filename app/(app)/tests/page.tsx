@@ -1,9 +1,9 @@
-import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { TestLibrary } from "@/components/tests/test-library";
 import { STAFF } from "@/lib/auth/guard";
-import { canEditTestLibrary } from "@/lib/auth/permissions";
 import { pageGuard } from "@/lib/auth/page-guard";
+import { canEditTestLibrary } from "@/lib/auth/permissions";
 import { testQueries } from "@/lib/client/queries";
 import { listTests } from "@/lib/data/tests";
 import { prefetch, serverQueryClient } from "@/lib/query/prefetch";

@@ -12,8 +12,8 @@ export default function SignInPage() {
         <SignInForm />
       </Suspense>
       <p className="mt-6 border-t border-line pt-4 text-xs leading-relaxed text-ink-faint">
-        Athlete data is personal, often health-related data. Use Changewise under your organisation&apos;s consent
-        and data-protection rules.
+        Athlete data is personal, often health-related data. Use Changewise under your organisation&apos;s consent and
+        data-protection rules.
       </p>
     </div>
   );

@@ -1,5 +1,5 @@
-import { guard } from "@/lib/auth/guard";
 import { json, withApi } from "@/lib/api/handler";
+import { guard } from "@/lib/auth/guard";
 import { listAthletes } from "@/lib/data/athletes";
 
 /** Owner and scientist: the organisation; coach: their squads; athlete: only themself. */

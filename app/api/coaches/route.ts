@@ -1,5 +1,5 @@
-import { guard, MANAGERS } from "@/lib/auth/guard";
 import { json, withApi } from "@/lib/api/handler";
+import { guard, MANAGERS } from "@/lib/auth/guard";
 import { listCoaches } from "@/lib/data/squads";
 
 export const GET = withApi(async () => {

@@ -1,5 +1,5 @@
-import { guard } from "@/lib/auth/guard";
 import { json, withApi } from "@/lib/api/handler";
+import { guard } from "@/lib/auth/guard";
 
 export const GET = withApi(async () => {
   const actor = await guard();

@@ -1,5 +1,5 @@
-import { authorize, guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
+import { authorize, guard, STAFF } from "@/lib/auth/guard";
 import { createSession, listSessions } from "@/lib/data/sessions";
 import { sessionCreateSchema } from "@/lib/validation/sessions";
 

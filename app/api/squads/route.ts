@@ -1,5 +1,5 @@
-import { guard, OWNERS, STAFF } from "@/lib/auth/guard";
 import { json, readJson, withApi } from "@/lib/api/handler";
+import { guard, OWNERS, STAFF } from "@/lib/auth/guard";
 import { createSquad, listSquads } from "@/lib/data/squads";
 import { squadCreateSchema } from "@/lib/validation/roster";
 

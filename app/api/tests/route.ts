@@ -1,5 +1,5 @@
-import { guard, MANAGERS } from "@/lib/auth/guard";
 import { json, readJson, withApi } from "@/lib/api/handler";
+import { guard, MANAGERS } from "@/lib/auth/guard";
 import { createTest, listTests } from "@/lib/data/tests";
 import { testCreateSchema } from "@/lib/validation/tests";
 

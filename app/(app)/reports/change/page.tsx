@@ -1,4 +1,4 @@
-import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
@@ -18,7 +18,8 @@ import { changeReportQuerySchema } from "@/lib/validation/reports";
 export const metadata: Metadata = { title: "Change report" };
 
 type Search = Record<string, string | string[] | undefined>;
-const first = (search: Search) => Object.fromEntries(Object.entries(search).map(([k, v]) => [k, Array.isArray(v) ? v[0] : v]));
+const first = (search: Search) =>
+  Object.fromEntries(Object.entries(search).map(([k, v]) => [k, Array.isArray(v) ? v[0] : v]));
 
 export default async function ChangeReportPage({ searchParams }: { searchParams: Promise<Search> }) {
   const actor = await pageGuard({ roles: STAFF });
@@ -38,7 +39,9 @@ export default async function ChangeReportPage({ searchParams }: { searchParams:
       }
       return <Empty message="No squad of yours has two sessions that measured the same test yet." />;
     }
-    return <Empty message={`This link's settings cannot be read: ${parsed.error.issues.map((i) => i.message).join(" ")}`} />;
+    return (
+      <Empty message={`This link's settings cannot be read: ${parsed.error.issues.map((i) => i.message).join(" ")}`} />
+    );
   }
 
   await Promise.all([
@@ -66,8 +69,12 @@ function Empty({ message }: { message: string }) {
       <h1 className="text-xl font-bold">Change report</h1>
       <p className="mt-2 text-ink-soft">{message}</p>
       <div className="mt-4 flex gap-2">
-        <Link href="/reports/change" className="btn-quiet">Open the latest comparison</Link>
-        <Link href="/sessions" className="btn-quiet">Sessions</Link>
+        <Link href="/reports/change" className="btn-quiet">
+          Open the latest comparison
+        </Link>
+        <Link href="/sessions" className="btn-quiet">
+          Sessions
+        </Link>
       </div>
     </div>
   );

@@ -1,4 +1,4 @@
-import { HydrationBoundary, dehydrate } from "@tanstack/react-query";
+import { dehydrate, HydrationBoundary } from "@tanstack/react-query";
 import type { Metadata } from "next";
 import { SessionSheet } from "@/components/sheet/session-sheet";
 import { STAFF } from "@/lib/auth/guard";

@@ -1,5 +1,5 @@
-import { guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
+import { guard, STAFF } from "@/lib/auth/guard";
 import { getAthlete, updateAthlete } from "@/lib/data/athletes";
 import { athleteUpdateSchema } from "@/lib/validation/roster";
 

@@ -1,5 +1,5 @@
-import { guard, STAFF } from "@/lib/auth/guard";
 import { json, withApi } from "@/lib/api/handler";
+import { guard, STAFF } from "@/lib/auth/guard";
 import { getChangeReport } from "@/lib/data/reports";
 import { changeReportQuerySchema, searchParamsObject } from "@/lib/validation/reports";
 

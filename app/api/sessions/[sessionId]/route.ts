@@ -1,5 +1,5 @@
-import { guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
+import { guard, STAFF } from "@/lib/auth/guard";
 import { getSessionSheet, updateSession } from "@/lib/data/sessions";
 import { sessionUpdateSchema } from "@/lib/validation/sessions";
 

@@ -1,5 +1,5 @@
-import { guard, OWNERS, STAFF } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
+import { guard, OWNERS, STAFF } from "@/lib/auth/guard";
 import { getSquad, updateSquad } from "@/lib/data/squads";
 import { squadUpdateSchema } from "@/lib/validation/roster";
 

@@ -1,5 +1,5 @@
-import { guard, MANAGERS } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
+import { guard, MANAGERS } from "@/lib/auth/guard";
 import { deleteOrArchiveTest, getTest, updateTest } from "@/lib/data/tests";
 import { testUpdateSchema } from "@/lib/validation/tests";
 

@@ -3,11 +3,11 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Breadcrumbs } from "@/components/breadcrumbs";
 import { ImportFlow } from "@/components/import/import-flow";
-import { ApiError } from "@/lib/errors";
 import { STAFF } from "@/lib/auth/guard";
 import { pageGuard, pageId } from "@/lib/auth/page-guard";
 import { getImportSession, loadImportContext } from "@/lib/data/import";
-import { PHASE_LABELS, STATUS_LABELS, formatDate } from "@/lib/labels";
+import { ApiError } from "@/lib/errors";
+import { formatDate, PHASE_LABELS, STATUS_LABELS } from "@/lib/labels";
 
 export const metadata: Metadata = { title: "Import" };
 
@@ -28,10 +28,16 @@ export default async function ImportPage({ params }: { params: Promise<{ session
   return (
     <section aria-labelledby="import-heading" className="space-y-4">
       <Breadcrumbs
-        trail={[{ href: "/sessions", label: "Sessions" }, { href: `/sessions/${session.id}`, label: "Session sheet" }, { label: "Import" }]}
+        trail={[
+          { href: "/sessions", label: "Sessions" },
+          { href: `/sessions/${session.id}`, label: "Session sheet" },
+          { label: "Import" },
+        ]}
       />
       <div>
-        <h1 id="import-heading" className="text-2xl font-bold">Import</h1>
+        <h1 id="import-heading" className="text-2xl font-bold">
+          Import
+        </h1>
         <p className="text-ink-soft">
           <span className="font-semibold text-ink">{session.squadName}</span> · {PHASE_LABELS[session.phase]} ·{" "}
           <span className="num">{formatDate(session.date)}</span> · {STATUS_LABELS[session.status]} ·{" "}
@@ -43,14 +49,23 @@ export default async function ImportPage({ params }: { params: Promise<{ session
       {!session.canImport ? (
         <div className="card max-w-2xl p-6">
           <h2 className="text-lg font-bold">This session is published</h2>
-          <p className="mt-2 text-sm text-ink-soft">A sport scientist or the owner can import into a published session. Ask one of them, or import into a draft session.</p>
-          <Link href={`/sessions/${session.id}`} className="btn-quiet mt-4">Back to the Session sheet</Link>
+          <p className="mt-2 text-sm text-ink-soft">
+            A sport scientist or the owner can import into a published session. Ask one of them, or import into a draft
+            session.
+          </p>
+          <Link href={`/sessions/${session.id}`} className="btn-quiet mt-4">
+            Back to the Session sheet
+          </Link>
         </div>
       ) : context.tests.length === 0 ? (
         <div className="card max-w-2xl p-6">
           <h2 className="text-lg font-bold">No tests in this session's battery</h2>
-          <p className="mt-2 text-sm text-ink-soft">Add tests to the session first; a file can only fill tests the session measures.</p>
-          <Link href={`/sessions/${session.id}`} className="btn-quiet mt-4">Back to the Session sheet</Link>
+          <p className="mt-2 text-sm text-ink-soft">
+            Add tests to the session first; a file can only fill tests the session measures.
+          </p>
+          <Link href={`/sessions/${session.id}`} className="btn-quiet mt-4">
+            Back to the Session sheet
+          </Link>
         </div>
       ) : (
         <>
@@ -67,11 +82,23 @@ export default async function ImportPage({ params }: { params: Promise<{ session
               </div>
             </div>
             <ul className="mt-3 list-disc space-y-1 pl-5 text-ink-soft">
-              <li>Athletes are matched on the {session.squadName} roster by external id, then by name (capitals and spaces do not matter). Nobody is added.</li>
-              <li>Tests are matched by name within this session's battery. “Countermovement jump #2” and “Countermovement jump (trial 2)” also work; a plain test name is trial 1.</li>
-              <li>, ; tab or | between columns; in files separated by ; or tab a comma is a decimal comma. Empty cells are empty trials.</li>
+              <li>
+                Athletes are matched on the {session.squadName} roster by external id, then by name (capitals and spaces
+                do not matter). Nobody is added.
+              </li>
+              <li>
+                Tests are matched by name within this session's battery. “Countermovement jump #2” and “Countermovement
+                jump (trial 2)” also work; a plain test name is trial 1.
+              </li>
+              <li>
+                , ; tab or | between columns; in files separated by ; or tab a comma is a decimal comma. Empty cells are
+                empty trials.
+              </li>
               <li>Scores already stored are never replaced unless you say so.</li>
-              <li>The file holds personal data. It is kept with this session as the record of where the scores came from, and is deleted with the session; upload only what your consent and data-protection rules allow.</li>
+              <li>
+                The file holds personal data. It is kept with this session as the record of where the scores came from,
+                and is deleted with the session; upload only what your consent and data-protection rules allow.
+              </li>
             </ul>
           </details>
           <ImportFlow sessionId={session.id} />

@@ -1,5 +1,5 @@
-import { guard } from "@/lib/auth/guard";
 import { json, parseId, withApi } from "@/lib/api/handler";
+import { guard } from "@/lib/auth/guard";
 import { listAthleteResults } from "@/lib/data/athlete-results";
 
 export const GET = withApi<{ athleteId: string }>(async (_request, { params }) => {

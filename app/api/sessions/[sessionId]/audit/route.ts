@@ -1,5 +1,5 @@
-import { guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, withApi } from "@/lib/api/handler";
+import { guard, STAFF } from "@/lib/auth/guard";
 import { listSessionAudit } from "@/lib/data/audit";
 
 type Params = { sessionId: string };

@@ -3,10 +3,11 @@
  * (plus format, athleteColumn, testColumn, trialColumn, valueColumn, mapping, replace).
  * Preview checks the file and writes nothing; commit writes all of it or nothing.
  */
-import { ApiError, invalidInput } from "@/lib/errors";
+
 import { json, parseId, readCappedBytes, withApi } from "@/lib/api/handler";
 import { guard, STAFF } from "@/lib/auth/guard";
 import { runImport } from "@/lib/data/import";
+import { ApiError, invalidInput } from "@/lib/errors";
 import { MAX_IMPORT_BYTES, MULTIPART_ALLOWANCE_BYTES, TOO_LARGE_MESSAGE } from "@/lib/import/limits";
 import { type Multipart, parseMultipart } from "@/lib/import/multipart";
 import { importOptionsSchema } from "@/lib/validation/import";
@@ -17,20 +18,29 @@ export const POST = withApi<{ sessionId: string }>(async (request, { params }) =
 
   const type = request.headers.get("content-type") ?? "";
   if (!/^multipart\/form-data\b/i.test(type)) {
-    throw new ApiError(415, "unsupported_media_type", "Send the CSV as multipart/form-data with the file in a field called “file”.");
+    throw new ApiError(
+      415,
+      "unsupported_media_type",
+      "Send the CSV as multipart/form-data with the file in a field called “file”.",
+    );
   }
   const body = await readCappedBytes(request, MAX_IMPORT_BYTES + MULTIPART_ALLOWANCE_BYTES, TOO_LARGE_MESSAGE);
   let form: Multipart;
   try {
     form = parseMultipart(body, type);
   } catch {
-    throw new ApiError(400, "bad_request", "The upload is not well-formed multipart/form-data. Choose the file again and retry.");
+    throw new ApiError(
+      400,
+      "bad_request",
+      "The upload is not well-formed multipart/form-data. Choose the file again and retry.",
+    );
   }
   const text = (name: string) => form.fields.get(name);
 
   const file = form.files.get("file");
   if (!file) {
-    if (form.fields.has("file")) throw invalidInput("The “file” field must be a file upload, not text.", { file: "Not a file." });
+    if (form.fields.has("file"))
+      throw invalidInput("The “file” field must be a file upload, not text.", { file: "Not a file." });
     throw invalidInput("Choose a CSV file to import.", { file: "No file was sent (field “file”)." });
   }
   if (file.bytes.length > MAX_IMPORT_BYTES) throw new ApiError(413, "payload_too_large", TOO_LARGE_MESSAGE);
@@ -46,5 +56,7 @@ export const POST = withApi<{ sessionId: string }>(async (request, { params }) =
     mapping: text("mapping"),
     replace: url.searchParams.get("replace") ?? text("replace"),
   });
-  return json(await runImport(actor, sessionId, { bytes: file.bytes, filename: file.filename, contentType: file.type }, options));
+  return json(
+    await runImport(actor, sessionId, { bytes: file.bytes, filename: file.filename, contentType: file.type }, options),
+  );
 });

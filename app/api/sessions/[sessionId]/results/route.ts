@@ -1,5 +1,5 @@
-import { guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
+import { guard, STAFF } from "@/lib/auth/guard";
 import { writeResults } from "@/lib/data/results";
 import { resultsBatchSchema } from "@/lib/validation/sessions";
 

@@ -1,5 +1,5 @@
-import { guard, STAFF } from "@/lib/auth/guard";
 import { json, parseId, readJson, withApi } from "@/lib/api/handler";
+import { guard, STAFF } from "@/lib/auth/guard";
 import { addAthleteToSquad, listSquadAthletes } from "@/lib/data/athletes";
 import { squadAthleteAddSchema } from "@/lib/validation/roster";
 
