@@ -96,8 +96,12 @@ afterAll(() => rmSync(dir, { recursive: true, force: true }));
 /** Runs the child on a copy of the base and kills it as `kill` says; what did it print? */
 function runAndKill(path: string, kill: Kill): Promise<{ lines: string[]; killed: boolean }> {
   return new Promise((resolve, reject) => {
+    // node itself with tsx as a loader, not the tsx command: that one runs the script in a child
+    // of its own, which a SIGKILL to the command would leave running with the database open.
     const args = [
       "--conditions=react-server",
+      "--import",
+      "tsx",
       "tests/helpers/crash-import.ts",
       `file:${path}`,
       `${fixture.userId}`,
@@ -105,7 +109,7 @@ function runAndKill(path: string, kill: Kill): Promise<{ lines: string[]; killed
       csvPath,
       kill.pause ?? "",
     ];
-    const child = spawn("node_modules/.bin/tsx", args, { stdio: ["ignore", "pipe", "pipe"] });
+    const child = spawn(process.execPath, args, { stdio: ["ignore", "pipe", "pipe"] });
     const lines: string[] = [];
     let killed = false;
     let stderr = "";
