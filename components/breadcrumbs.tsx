@@ -8,6 +8,7 @@ export function Breadcrumbs({ trail }: { trail: Crumb[] }) {
     <nav aria-label="Breadcrumb" className="text-sm text-ink-soft">
       <ol className="flex flex-wrap items-center gap-1">
         {trail.map((crumb, i) => (
+          // biome-ignore lint/suspicious/noArrayIndexKey: a trail may name a page twice; its place in the trail is what tells the two apart
           <li key={`${crumb.label}-${i}`} className="flex items-center gap-1">
             {i > 0 && <span aria-hidden>›</span>}
             {crumb.href ? (

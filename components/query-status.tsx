@@ -12,7 +12,7 @@ export function LoadFailure({ failure, error, onRetry }: { failure: string; erro
       <p className="font-semibold">
         {failure}: {error.message}
       </p>
-      <button className="btn-quiet mt-2" onClick={() => onRetry()}>
+      <button type="button" className="btn-quiet mt-2" onClick={() => onRetry()}>
         Try again
       </button>
     </div>

@@ -35,6 +35,7 @@ export function TableCard({
           <tr>
             {columns.map(({ label, align, srOnly, className, ...th }, i) => (
               <th
+                // biome-ignore lint/suspicious/noArrayIndexKey: headings are fixed columns, in order
                 key={i}
                 scope="col"
                 {...th}

@@ -13,7 +13,7 @@ function secret() {
   if (process.env.NEXTAUTH_SECRET) return process.env.NEXTAUTH_SECRET;
   if (existsSync(secretFile)) return readFileSync(secretFile, "utf8").trim();
   const generated = randomBytes(32).toString("base64url");
-  writeFileSync(secretFile, generated + "\n", { mode: 0o600 });
+  writeFileSync(secretFile, `${generated}\n`, { mode: 0o600 });
   return generated;
 }
 

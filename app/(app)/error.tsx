@@ -7,7 +7,7 @@ export default function SignedInError({ error, reset }: { error: Error & { diges
       <p className="mt-2 text-sm text-ink-soft">
         Nothing was changed. {error.digest ? `Reference ${error.digest}.` : ""}
       </p>
-      <button className="btn-primary mt-4" onClick={() => reset()}>
+      <button type="button" className="btn-primary mt-4" onClick={() => reset()}>
         Try again
       </button>
     </div>

@@ -191,6 +191,7 @@ export function MappingStep({
                             onChange={(e) => set({ testId: target.testId, trial: Number(e.target.value) })}
                           >
                             {Array.from({ length: Math.max(test.trialsPerSession, target.trial) }, (_, i) => (
+                              // biome-ignore lint/suspicious/noArrayIndexKey: the options are the trial numbers 1…n themselves
                               <option key={i + 1} value={i + 1}>
                                 {i + 1}
                               </option>

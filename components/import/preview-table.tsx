@@ -64,6 +64,7 @@ export function PreviewTable({ preview }: { preview: ImportPreview }) {
             const warning = warnings.get(cellKey(row, h));
             return (
               <td
+                // biome-ignore lint/suspicious/noArrayIndexKey: cells of a file row: the column position is the cell's identity
                 key={i}
                 title={problem ?? warning}
                 className={`num whitespace-nowrap px-3 py-1.5 ${problem ? "bg-decline-soft font-semibold outline outline-1 -outline-offset-1 outline-decline" : warning ? "bg-band" : ""}`}

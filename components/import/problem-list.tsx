@@ -91,6 +91,7 @@ export function ProblemList({
         </thead>
         <tbody>
           {shown.map((e, i) => (
+            // biome-ignore lint/suspicious/noArrayIndexKey: a fixed list, never reordered; two problems may read the same
             <tr key={i} className="border-b border-line last:border-0 align-top">
               <td className="num py-1.5 pr-3 text-right">{e.row}</td>
               <td className="py-1.5 pr-3 font-semibold">{e.column ?? "–"}</td>
@@ -123,6 +124,7 @@ export function WarningList({ warnings, count }: { warnings: RowError[]; count: 
       </summary>
       <ul className="mt-2 space-y-1 text-sm">
         {warnings.slice(0, 50).map((w, i) => (
+          // biome-ignore lint/suspicious/noArrayIndexKey: a fixed list, never reordered; two problems may read the same
           <li key={i}>
             <span className="num font-semibold">Row {w.row}</span>
             {w.column ? ` · ${w.column}` : ""}: {w.message}
@@ -169,6 +171,7 @@ export function ReplacementList({ rows, count }: { rows: ReplacementRow[]; count
         </thead>
         <tbody>
           {rows.slice(0, 50).map((r, i) => (
+            // biome-ignore lint/suspicious/noArrayIndexKey: a fixed list, never reordered; two problems may read the same
             <tr key={i} className="border-b border-line last:border-0">
               <td className="num py-1.5 pr-3 text-right">{r.row}</td>
               <td className="py-1.5 pr-3">{r.athleteName}</td>

@@ -88,7 +88,7 @@ export function SheetGrid({
     if (!isBlock(text)) return; // one value: the input takes it as typed
     event.preventDefault();
     const start = nav[Number(el.dataset.col)];
-    if (!start || start.kind !== "trial") return;
+    if (start?.kind !== "trial") return;
     const startRow = Number(el.dataset.row);
     const entries: Parameters<SessionSheetState["enterTrials"]>[0] = [];
     let outside = 0;

@@ -32,6 +32,7 @@ export function SheetHead({ tests }: { tests: SheetTest[] }) {
         {tests.map((t) => [
           ...Array.from({ length: t.trialsPerSession }, (_, i) => (
             <th
+              // biome-ignore lint/suspicious/noArrayIndexKey: trial columns are numbered slots of the test
               key={`${t.id}-${i}`}
               scope="col"
               className={`border-b border-line px-1 pb-1 text-right font-semibold ${i === 0 ? "border-l-2 pl-2" : ""}`}

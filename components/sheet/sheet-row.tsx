@@ -62,6 +62,7 @@ export function SheetRow({
                 const trialLabel = `${label}, trial ${index + 1}`;
                 return (
                   <td
+                    // biome-ignore lint/suspicious/noArrayIndexKey: trial slots: the trial number is the identity
                     key={index}
                     className={`border-b border-line px-0.5 py-1 ${index === 0 ? "border-l-2 pl-2" : ""}`}
                   >
@@ -83,10 +84,10 @@ export function SheetRow({
                       />
                     ) : (
                       <span
-                        aria-label={trialLabel}
                         title={outside ? `Outside the plausible range ${outside}` : undefined}
                         className={`num block w-[4.25rem] rounded px-1.5 py-2 text-right ${outside ? "border border-dashed border-decline" : ""}`}
                       >
+                        <span className="sr-only">{trialLabel}: </span>
                         {v === null ? "–" : paddedNumber(v, test.decimals)}
                       </span>
                     )}
@@ -96,10 +97,8 @@ export function SheetRow({
               <td className="whitespace-nowrap border-b border-line px-2 py-1 text-right">
                 <span className="flex items-center justify-end gap-1.5">
                   <span className="flex flex-col items-end leading-tight">
-                    <span
-                      className="num text-base font-semibold"
-                      aria-label={`${label}, ${test.trialRule === "best" ? "best" : "mean"}`}
-                    >
+                    <span className="num text-base font-semibold">
+                      <span className="sr-only">{`${label}, ${test.trialRule === "best" ? "best" : "mean"}: `}</span>
                       {shown.flag && value === null ? (
                         <em className="text-sm font-normal text-ink-soft">{FLAG_LABELS[shown.flag]}</em>
                       ) : (

@@ -26,7 +26,7 @@ export async function authorizeCredentials(raw: unknown, address: string): Promi
   if (!reservation) throw new SignInError(THROTTLED_MESSAGE);
   const user = await findUserCredentials(email);
   const ok = await verifyPassword(password, user?.passwordHash ?? (await timingDummy()));
-  if (!user || !user.passwordHash || !ok) return null;
+  if (!user?.passwordHash || !ok) return null;
   await releaseSignIn(reservation);
   return { id: String(user.id), email: user.email, name: user.name, sessionVersion: user.sessionVersion };
 }

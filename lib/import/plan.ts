@@ -96,7 +96,10 @@ class Tally<T extends { count: number; rows: number[] }> {
   readonly byKey = new Map<string, T>();
   add(key: string, row: number, make: () => T) {
     let entry = this.byKey.get(key);
-    if (!entry) this.byKey.set(key, (entry = make()));
+    if (!entry) {
+      entry = make();
+      this.byKey.set(key, entry);
+    }
     entry.count++;
     if (entry.rows.length < 10) entry.rows.push(row);
   }
@@ -245,7 +248,8 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
     columnOf = () => valueColumn;
 
     for (let i = 0; readable && i < rows.length; i++) {
-      if ((work += 4) >= STEP_CELLS) {
+      work += 4;
+      if (work >= STEP_CELLS) {
         work = 0;
         yield;
       }
@@ -360,7 +364,8 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
     });
 
     for (let i = 0; ai >= 0 && targets.length > 0 && i < rows.length; i++) {
-      if ((work += targets.length + unnamed.length) >= STEP_CELLS) {
+      work += targets.length + unnamed.length;
+      if (work >= STEP_CELLS) {
         work = 0;
         yield;
       }

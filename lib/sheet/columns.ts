@@ -15,7 +15,9 @@ export function sheetColumns(tests: SheetTest[]) {
   }
   const trials = nav.filter((c): c is Extract<NavColumn, { kind: "trial" }> => c.kind === "trial");
   const navIndex = new Map<string, number>();
-  nav.forEach((c, i) => navIndex.set(c.kind === "trial" ? `${c.test.id}:${c.index}` : `${c.test.id}:flag`, i));
+  nav.forEach((c, i) => {
+    navIndex.set(c.kind === "trial" ? `${c.test.id}:${c.index}` : `${c.test.id}:flag`, i);
+  });
   return { nav, trials, navIndex };
 }
 

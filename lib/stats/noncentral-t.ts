@@ -128,5 +128,5 @@ function mixtureSum(x: number, b: number, lambda: number, ncp: number): number {
 }
 
 function clampProbability(value: number): number {
-  return value < 0 ? 0 : value > 1 ? 1 : value;
+  return value < 0 ? 0 : Math.min(value, 1);
 }

@@ -212,7 +212,7 @@ describe("the pages under the policy, in the browser", () => {
     await page.setContent(`<iframe src="${baseUrl}/sign-in"></iframe>`);
     await page.waitForTimeout(1000);
     const framed = page.frames().find((f) => f.url().includes("/sign-in"));
-    const rendered = framed ? await framed.evaluate(() => document.body?.innerText ?? "").catch(() => "") : "";
+    const rendered = framed ? await framed.evaluate(() => document.body?.textContent ?? "").catch(() => "") : "";
     expect(rendered).not.toContain("Sign in");
     await page.close();
   });

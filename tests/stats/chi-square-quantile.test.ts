@@ -1,4 +1,4 @@
-import { describe, expect, it } from "vitest";
+import { describe, it } from "vitest";
 import { chiSquareQuantile, normalQuantile } from "@/lib/stats";
 import { expectDp, expectRelClose } from "./close";
 

@@ -12,7 +12,10 @@ function group(athleteId: number, testId: number, cells: [number, number, number
   const values: (number | null)[] = [];
   const rows: number[] = [];
   for (const [trial, value, row = 2] of cells) {
-    while (values.length < trial) values.push(null), rows.push(0);
+    while (values.length < trial) {
+      values.push(null);
+      rows.push(0);
+    }
     values[trial - 1] = value;
     rows[trial - 1] = row;
   }
