@@ -7,7 +7,7 @@ import { SignOutButton } from "./sign-out-button";
 export function AppShell({ actor, children }: { actor: Actor; children: React.ReactNode }) {
   return (
     <div className="min-h-screen">
-      <header className="bg-ink text-white">
+      <header className="bg-ink text-white print:hidden">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <Link href="/" className="text-lg font-bold tracking-tight">
             Changewise
@@ -26,7 +26,7 @@ export function AppShell({ actor, children }: { actor: Actor; children: React.Re
           </div>
         </div>
       </header>
-      <main className="mx-auto max-w-6xl px-4 py-6">{children}</main>
+      <main className="mx-auto max-w-6xl px-4 py-6 print:max-w-none print:p-0">{children}</main>
     </div>
   );
 }

@@ -81,7 +81,7 @@ export function AthleteChanges({ report }: { report: ChangeReportData }) {
           .
         </p>
         {test.typicalError === null && (
-          <p className="mt-2 rounded-md border border-line bg-band px-3 py-2 text-sm">
+          <p className="mt-2 rounded-md border border-line bg-band px-3 py-2 print:py-0 text-sm">
             {test.name} has no typical error yet, so no athlete gets an interval or a verdict: a change alone cannot be
             told from test noise. Measure it on a test–retest pair, or enter a published value, in the{" "}
             <Link href="/tests" className="font-semibold underline">
@@ -94,21 +94,21 @@ export function AthleteChanges({ report }: { report: ChangeReportData }) {
       <TableCard columns={columns} caption={`Change of each athlete in ${test.name}`}>
         {rows.map((a) => (
           <tr key={a.athleteId} className="border-b border-line last:border-0">
-            <th scope="row" className="px-3 py-2 text-left font-semibold">
+            <th scope="row" className="px-3 py-2 print:py-0 text-left font-semibold">
               {a.name}
             </th>
-            <td className="num px-3 py-2 text-right">{plain(a.pre, test.decimals)}</td>
-            <td className="num px-3 py-2 text-right">{plain(a.post, test.decimals)}</td>
-            <td className="num px-3 py-2 text-right">{signed(a.change, test.decimals)}</td>
-            <td className="num px-3 py-2 text-right">{percentWords(a.percentChange)}</td>
+            <td className="num px-3 py-2 print:py-0 text-right">{plain(a.pre, test.decimals)}</td>
+            <td className="num px-3 py-2 print:py-0 text-right">{plain(a.post, test.decimals)}</td>
+            <td className="num px-3 py-2 print:py-0 text-right">{signed(a.change, test.decimals)}</td>
+            <td className="num px-3 py-2 print:py-0 text-right">{percentWords(a.percentChange)}</td>
             {test.typicalError !== null && (
-              <td className="num whitespace-nowrap px-3 py-2 text-right">
+              <td className="num whitespace-nowrap px-3 py-2 print:py-0 text-right">
                 {a.ciLower === null || a.ciUpper === null
                   ? "–"
                   : intervalWords(a.ciLower, a.ciUpper, test.decimals, test.unit)}
               </td>
             )}
-            <td className="px-3 py-2">
+            <td className="px-3 py-2 print:py-0">
               <VerdictBadge verdict={a.verdict} />
             </td>
           </tr>

@@ -4,6 +4,7 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { LoadFailure } from "@/components/query-status";
 import { changeReportSearch, reportQueries } from "@/lib/client/queries";
+import { formatDate } from "@/lib/labels";
 import type { ChangeReportQuery } from "@/lib/validation/reports";
 import { AthleteChanges } from "./athlete-changes";
 import { AthleteCharts } from "./report-charts";
@@ -23,30 +24,50 @@ export function ChangeReport({ initial }: { initial: ChangeReportQuery }) {
 
   const data = report.data;
   return (
-    <section aria-labelledby="report-heading" className="space-y-4">
-      <div>
-        <h1 id="report-heading" className="text-2xl font-bold">
-          Change report
-        </h1>
-        <p className="text-ink-soft">
-          {data ? (
-            <>
-              <span className="font-semibold text-ink">{data.test.name}</span> · {data.sessions.from.squadName}
-            </>
-          ) : (
-            "Pick a squad, two sessions and a test."
-          )}
-          {report.isFetching && <span role="status"> · updating…</span>}
-        </p>
+    <section aria-labelledby="report-heading" className="space-y-4 print:space-y-2 print:text-[10px]">
+      <div className="flex flex-wrap items-start justify-between gap-3">
+        <div>
+          <h1 id="report-heading" className="text-2xl font-bold print:text-base">
+            Change report
+          </h1>
+          <p className="text-ink-soft">
+            {data ? (
+              <>
+                <span className="font-semibold text-ink">{data.test.name}</span> · {data.sessions.from.squadName}
+                <span className="hidden print:inline">
+                  {" "}
+                  · {formatDate(data.sessions.from.date)} → {formatDate(data.sessions.to.date)}
+                </span>
+              </>
+            ) : (
+              "Pick a squad, two sessions and a test."
+            )}
+            {report.isFetching && <span role="status"> · updating…</span>}
+          </p>
+        </div>
+        {data && (
+          <div className="flex gap-2 print:hidden">
+            <a className="btn-quiet" href={`/api/reports/change.csv?${changeReportSearch(query)}`} download>
+              Download CSV
+            </a>
+            <button type="button" className="btn-quiet" onClick={() => window.print()}>
+              Print
+            </button>
+          </div>
+        )}
       </div>
-      <ReportSettings query={query} unit={data?.test.unit ?? ""} onChange={change} />
+      <div className="print:hidden">
+        <ReportSettings query={query} unit={data?.test.unit ?? ""} onChange={change} />
+      </div>
       {report.error && (
         <LoadFailure failure="This report cannot be drawn" error={report.error} onRetry={report.refetch} />
       )}
       {data && !report.error && (
         <>
           <SquadPanel report={data} />
-          <AthleteCharts report={data} />
+          <div className="print:hidden">
+            <AthleteCharts report={data} />
+          </div>
           <AthleteChanges report={data} />
         </>
       )}

@@ -16,7 +16,7 @@ import { VerdictBadge } from "./verdict-badge";
 
 function Figure({ label, children, note }: { label: string; children: ReactNode; note?: ReactNode }) {
   return (
-    <div className="border-t border-line py-2">
+    <div className="border-t border-line py-2 print:py-0.5">
       <dt className="text-xs font-semibold uppercase tracking-wide text-ink-faint">{label}</dt>
       <dd className="num text-base">{children}</dd>
       {note && <dd className="text-xs text-ink-soft">{note}</dd>}
@@ -41,7 +41,7 @@ export function SquadPanel({ report }: { report: ChangeReportData }) {
       </div>
       <p className="mt-1 text-sm">{SQUAD_VERDICT_SENTENCES[squad.verdict]}</p>
       <SquadIntervalChart report={report} />
-      <dl className="grid gap-x-6 sm:grid-cols-2 lg:grid-cols-3">
+      <dl className="grid gap-x-6 sm:grid-cols-2 lg:grid-cols-3 print:grid-cols-5 print:gap-x-3">
         <Figure
           label="Athletes paired"
           note={report.excluded.length > 0 ? `${report.excluded.length} left out (listed below)` : undefined}

@@ -23,6 +23,7 @@ export const ROUTE_METHODS = {
   "sessions/[sessionId]/audit": ["GET"],
   "sessions/[sessionId]/import": ["POST"],
   "reports/change": ["GET"],
+  "reports/change.csv": ["GET"],
 } as const satisfies Record<string, readonly string[]>;
 
 const patternOf = (route: string) =>

@@ -183,6 +183,12 @@ const MATRIX: Record<string, Entry> = {
       url: `http://test.local/api/reports/change?testId=${club.test}&fromSessionId=${club.preSession}&toSessionId=${club.session}`,
     }),
   },
+  "GET /api/reports/change.csv": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    request: () => ({
+      url: `http://test.local/api/reports/change.csv?testId=${club.test}&fromSessionId=${club.preSession}&toSessionId=${club.session}`,
+    }),
+  },
   "GET /api/auth/[...nextauth]": {
     exempt:
       "next-auth's own endpoints (csrf, providers, session): public by design; sign-in throttling and sign-out have their own tests",

@@ -5,7 +5,7 @@
 import { and, eq } from "drizzle-orm";
 import jstatPkg from "jstat";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
-import { results, squads, testingSessions, tests } from "@/db/schema";
+import { athletes, results, squads, testingSessions, tests } from "@/db/schema";
 import { setupTestDatabase } from "../helpers/db";
 import { call, sessionMock, signInAs } from "../helpers/session";
 
@@ -13,6 +13,7 @@ vi.mock("@/lib/auth/session", () => sessionMock);
 
 const jStat = (jstatPkg as unknown as { jStat?: typeof jstatPkg }).jStat ?? jstatPkg;
 const route = await import("@/app/api/reports/change/route");
+const csvRoute = await import("@/app/api/reports/change.csv/route");
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
 const ids = {
@@ -210,5 +211,32 @@ describe("GET /api/reports/change", () => {
     ).toBe(200);
     await signInAs("owner@other.example.com");
     expect((await report(q)).status).toBe(404);
+  });
+
+  it("exports the same numbers as CSV, with cells a spreadsheet would execute neutralised", async () => {
+    await signInAs("scientist@example.com");
+    const [first] = await env.db.select({ id: athletes.id }).from(athletes).where(eq(athletes.name, "Maren Oduya"));
+    await env.db.update(athletes).set({ name: '=HYPERLINK("http://x","y")' }).where(eq(athletes.id, first.id));
+    const q = new URLSearchParams({
+      testId: `${ids.cmj}`,
+      fromSessionId: `${ids.seniorPre}`,
+      toSessionId: `${ids.seniorPost}`,
+    });
+    const response = await csvRoute.GET(new Request(`http://test.local/api/reports/change.csv?${q}`), {
+      params: Promise.resolve({}),
+    });
+    expect(response.status).toBe(200);
+    expect(response.headers.get("content-type")).toContain("text/csv");
+    const text = await response.text();
+    const { json } = await report({ testId: ids.cmj, fromSessionId: ids.seniorPre, toSessionId: ids.seniorPost });
+    // OWASP "CSV Injection": a leading = is prefixed with ' and the field quoted (RFC 4180).
+    expect(text).toContain(`"'=HYPERLINK(""http://x"",""y"")"`);
+    expect(text).not.toMatch(/^=|,=/m);
+    expect(text).toContain(`Mean change (second − first),${json.squad.meanDiff},cm`);
+    expect(
+      text.split("\r\n").filter((l) => /^[^,]+,-?\d/.test(l) && !l.startsWith("Athletes") && !l.startsWith("Degrees"))
+        .length,
+    ).toBeGreaterThan(5);
+    await env.db.update(athletes).set({ name: "Maren Oduya" }).where(eq(athletes.id, first.id));
   });
 });
