@@ -52,10 +52,11 @@ export const AUDIT_ACTIONS = [
   "test.update",
   "test.archive",
   "test.delete",
+  "report.save",
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 
-export const AUDIT_ENTITY_TYPES = ["session", "result", "upload", "squad", "athlete", "test"] as const;
+export const AUDIT_ENTITY_TYPES = ["session", "result", "upload", "squad", "athlete", "test", "report"] as const;
 export type AuditEntityType = (typeof AUDIT_ENTITY_TYPES)[number];
 
 /** The changes a Session sheet lists under Recent changes: its scores, typed or imported. */

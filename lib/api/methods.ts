@@ -24,6 +24,8 @@ export const ROUTE_METHODS = {
   "sessions/[sessionId]/import": ["POST"],
   "reports/change": ["GET"],
   "reports/change.csv": ["GET"],
+  "reports/saved": ["GET", "POST"],
+  "reports/saved/[reportId]": ["GET"],
 } as const satisfies Record<string, readonly string[]>;
 
 const patternOf = (route: string) =>

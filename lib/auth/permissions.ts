@@ -34,6 +34,9 @@ export const canEditRoster = isStaff;
 /** How many results use each test (all athletes of the organisation together): staff only. */
 export const canSeeResultCounts = isStaff;
 
+/** Interpretation notes are the sport scientist's (PRODUCT.md §2); coaches read them for their squads. */
+export const canWriteInterpretation = isManager;
+
 /** Every member reads the Test library; only these change it. */
 export const canEditTestLibrary = isManager;
 

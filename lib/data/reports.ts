@@ -1,13 +1,24 @@
 import "server-only";
-import { and, asc, eq, inArray, or } from "drizzle-orm";
-import { getDb } from "@/db/client";
-import { athletes, results, sessionTests, squadAthletes, squads, testingSessions, tests } from "@/db/schema";
+import { and, asc, desc, eq, inArray, or } from "drizzle-orm";
+import { getDb, writeTransaction } from "@/db/client";
+import {
+  athletes,
+  results,
+  savedReports,
+  sessionTests,
+  squadAthletes,
+  squads,
+  testingSessions,
+  tests,
+  users,
+} from "@/db/schema";
 import { invalidInput, notFound } from "@/lib/errors";
 import { buildChangeReport, type ReportRow } from "@/lib/reports/change-report";
 import { StatsInputError } from "@/lib/stats";
-import type { ChangeReportQuery } from "@/lib/validation/reports";
+import type { ChangeReportQuery, SavedReportCreateInput } from "@/lib/validation/reports";
 import type { Actor } from "./actors";
-import { findSessionInScope } from "./scope";
+import { recordAudit } from "./audit";
+import { findSessionInScope, squadScope } from "./scope";
 
 const sessionFields = {
   id: testingSessions.id,
@@ -123,4 +134,99 @@ export async function getChangeReport(actor: Actor, query: ChangeReportQuery) {
     if (error instanceof StatsInputError) throw invalidInput(error.message);
     throw error;
   }
+}
+
+/**
+ * Saves a report with its note. The numbers are recomputed here from the stored scores, never
+ * taken from the client, and kept as a snapshot so the saved report reopens exactly as written.
+ */
+export async function saveReport(actor: Actor, input: SavedReportCreateInput) {
+  const { note, ...settings } = input;
+  const report = await getChangeReport(actor, { ...settings, swcValue: settings.swcValue });
+  return writeTransaction(async (tx) => {
+    const [saved] = await tx
+      .insert(savedReports)
+      .values({
+        organizationId: actor.organizationId,
+        squadId: report.sessions.from.squadId,
+        testId: report.test.id,
+        fromSessionId: report.sessions.from.id,
+        toSessionId: report.sessions.to.id,
+        settings,
+        snapshot: report,
+        note,
+        createdBy: actor.userId,
+      })
+      .returning({ id: savedReports.id, createdAt: savedReports.createdAt });
+    await recordAudit(tx, actor, {
+      action: "report.save",
+      entity: { type: "report", id: saved.id },
+      after: { settings, note },
+    });
+    return { id: saved.id, createdAt: saved.createdAt.getTime() };
+  });
+}
+
+const savedColumns = {
+  id: savedReports.id,
+  squadId: savedReports.squadId,
+  fromSessionId: savedReports.fromSessionId,
+  toSessionId: savedReports.toSessionId,
+  settings: savedReports.settings,
+  note: savedReports.note,
+  createdAt: savedReports.createdAt,
+  authorName: users.name,
+  testName: tests.name,
+};
+
+/** Saved reports of the squads in reach (one squad when asked), newest first. */
+export async function listSavedReports(actor: Actor, { squadId }: { squadId?: number } = {}) {
+  const rows = await getDb()
+    .select(savedColumns)
+    .from(savedReports)
+    .innerJoin(squads, eq(squads.id, savedReports.squadId))
+    .innerJoin(tests, eq(tests.id, savedReports.testId))
+    .leftJoin(users, eq(users.id, savedReports.createdBy))
+    .where(
+      and(
+        eq(savedReports.organizationId, actor.organizationId),
+        squadScope(actor),
+        squadId ? eq(savedReports.squadId, squadId) : undefined,
+      ),
+    )
+    .orderBy(desc(savedReports.createdAt), desc(savedReports.id))
+    .limit(100);
+  return rows.map((r) => ({ ...r, settings: r.settings as ChangeReportQuery, createdAt: r.createdAt.getTime() }));
+}
+
+type Snapshot = Awaited<ReturnType<typeof getChangeReport>>;
+
+/** The figures that make a report: if any differ when recomputed, the data changed since it was saved. */
+const figures = (r: Snapshot) => JSON.stringify([r.squad, r.athletes, r.excluded, r.settings]);
+
+/** One saved report as it was saved, and whether today's scores would give different figures. */
+export async function getSavedReport(actor: Actor, id: number) {
+  const [row] = await getDb()
+    .select({ ...savedColumns, snapshot: savedReports.snapshot })
+    .from(savedReports)
+    .innerJoin(squads, eq(squads.id, savedReports.squadId))
+    .innerJoin(tests, eq(tests.id, savedReports.testId))
+    .leftJoin(users, eq(users.id, savedReports.createdBy))
+    .where(and(eq(savedReports.id, id), eq(savedReports.organizationId, actor.organizationId), squadScope(actor)));
+  if (!row) throw notFound("Saved report");
+  const snapshot = row.snapshot as unknown as Snapshot;
+  let changedSince: boolean;
+  try {
+    changedSince = figures(await getChangeReport(actor, row.settings as ChangeReportQuery)) !== figures(snapshot);
+  } catch {
+    // The scores no longer give a report at all (e.g. fewer than two pairs remain).
+    changedSince = true;
+  }
+  return {
+    ...row,
+    settings: row.settings as ChangeReportQuery,
+    snapshot,
+    createdAt: row.createdAt.getTime(),
+    changedSince,
+  };
 }

@@ -5,6 +5,7 @@
  */
 import { z } from "zod";
 import { SWC_METHODS } from "@/lib/domain";
+import { requiredText } from "./common";
 
 /** The confidence levels a report offers; 90 % is the trade's usual choice for practical decisions. */
 export const REPORT_CONFIDENCES = [0.8, 0.9, 0.95, 0.99] as const;
@@ -53,3 +54,17 @@ export function searchParamsObject(params: URLSearchParams): Record<string, stri
   for (const [key, value] of params) if (!(key in out)) out[key] = value;
   return out;
 }
+
+/** A Change report saved with its interpretation note: the settings to recompute it from, and the note. */
+export const savedReportCreateSchema = z.object({
+  testId: z.number().int().positive(),
+  fromSessionId: z.number().int().positive(),
+  toSessionId: z.number().int().positive(),
+  confidence: z
+    .number()
+    .refine((v) => (REPORT_CONFIDENCES as readonly number[]).includes(v), "Confidence is 0.8, 0.9, 0.95 or 0.99."),
+  swcMethod: z.enum(SWC_METHODS).optional(),
+  swcValue: z.number().finite().min(0).max(1e6).optional(),
+  note: requiredText(5000, "The interpretation note", { multiline: true }),
+});
+export type SavedReportCreateInput = z.infer<typeof savedReportCreateSchema>;

@@ -8,6 +8,8 @@
 import { dirname } from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { getClient } from "@/db/client";
+import { loadActor } from "@/lib/data/actors";
+import { saveReport } from "@/lib/data/reports";
 import { discoverApiRoutes, routeKeys } from "../helpers/api-routes";
 import { setupTestDatabase, userIdOf } from "../helpers/db";
 import { fingerprint, snapshotTo, switchToFreshCopy } from "../helpers/db-state";
@@ -38,6 +40,8 @@ type Target = {
   test: number;
   /** An earlier session of the same squad that measured `test` too (the Change report's pair). */
   preSession: number;
+  /** A saved Change report of the squad. */
+  savedReport: number;
   /** A cell that holds a result (version 1) on `session`'s sheet, and a score for it. */
   cell: { athleteId: number; testId: number; value: number };
   csv: string;
@@ -189,6 +193,26 @@ const MATRIX: Record<string, Entry> = {
       url: `http://test.local/api/reports/change.csv?testId=${club.test}&fromSessionId=${club.preSession}&toSessionId=${club.session}`,
     }),
   },
+  "GET /api/reports/saved": {
+    expect: [401, 200, 200, 200, 200, 403, 403, 200],
+    request: () => ({}),
+  },
+  "POST /api/reports/saved": {
+    expect: [401, 201, 201, 403, 403, 403, 403, 404],
+    request: () => ({
+      body: {
+        testId: club.test,
+        fromSessionId: club.preSession,
+        toSessionId: club.session,
+        confidence: 0.9,
+        note: "Matrix note",
+      },
+    }),
+  },
+  "GET /api/reports/saved/[reportId]": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    request: () => ({ params: { reportId: `${club.savedReport}` } }),
+  },
   "GET /api/auth/[...nextauth]": {
     exempt:
       "next-auth's own endpoints (csrf, providers, session): public by design; sign-in throttling and sign-out have their own tests",
@@ -228,9 +252,21 @@ beforeAll(async () => {
     session: seniorDraft.id,
     preSession: seniorPre.id,
     test: cmj.id,
+    savedReport: 0,
     cell: { athleteId: tessa.id, testId: cmj.id, value: 31.5 },
     csv: `${tessa.externalId},Countermovement jump,1,31.5`,
   };
+  // A saved report of the squad to aim at, written as its sport scientist would.
+  const scientist = await loadActor(await userIdOf("scientist@example.com"));
+  club.savedReport = (
+    await saveReport(scientist!, {
+      testId: club.test,
+      fromSessionId: club.preSession,
+      toSessionId: club.session,
+      confidence: 0.9,
+      note: "Matrix",
+    })
+  ).id;
   const rower = byName(world.athletes, "Wren Abernathy");
   const erg = byName(world.tests, "2000 m ergometer");
   const rowingSquad = byName(world.squads, "Junior Sculling");
@@ -240,6 +276,7 @@ beforeAll(async () => {
     athlete: rower.id,
     session: rowingSession,
     preSession: rowingSession,
+    savedReport: 0,
     test: erg.id,
     cell: { athleteId: rower.id, testId: erg.id, value: 451.2 },
     csv: `${rower.externalId},2000 m ergometer,1,451.2`,

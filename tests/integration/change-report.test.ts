@@ -14,6 +14,8 @@ vi.mock("@/lib/auth/session", () => sessionMock);
 const jStat = (jstatPkg as unknown as { jStat?: typeof jstatPkg }).jStat ?? jstatPkg;
 const route = await import("@/app/api/reports/change/route");
 const csvRoute = await import("@/app/api/reports/change.csv/route");
+const savedRoute = await import("@/app/api/reports/saved/route");
+const savedOneRoute = await import("@/app/api/reports/saved/[reportId]/route");
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
 const ids = {
@@ -238,5 +240,49 @@ describe("GET /api/reports/change", () => {
         .length,
     ).toBeGreaterThan(5);
     await env.db.update(athletes).set({ name: "Maren Oduya" }).where(eq(athletes.id, first.id));
+  });
+
+  it("saves a note with a snapshot that reopens unchanged after a score changes, and says the data changed", async () => {
+    const settings = { testId: ids.cmj, fromSessionId: ids.seniorPre, toSessionId: ids.seniorPost, confidence: 0.9 };
+    await signInAs("coach@example.com");
+    expect(
+      (await call(savedRoute.POST, { method: "POST", body: { ...settings, note: "Coaches read notes." } })).status,
+    ).toBe(403);
+    await signInAs("scientist@example.com");
+    expect((await call(savedRoute.POST, { method: "POST", body: { ...settings, note: "\u200b " } })).status).toBe(422);
+    const saved = await call(savedRoute.POST, {
+      method: "POST",
+      body: { ...settings, note: "Jump height up across the squad; two athletes to watch." },
+    });
+    expect(saved.status).toBe(201);
+    const id = `${saved.json.report.id}`;
+    const first = await call(savedOneRoute.GET, { params: { reportId: id } });
+    expect(first.json.report.changedSince).toBe(false);
+    expect(first.json.report.note).toContain("two athletes to watch");
+    const live = await report(settings);
+    expect(first.json.report.snapshot.squad).toEqual(live.json.squad);
+
+    // A score changes after the report was written.
+    const [row] = await env.db
+      .select({ id: results.id, value: results.value })
+      .from(results)
+      .where(and(eq(results.sessionId, ids.seniorPost), eq(results.testId, ids.cmj)));
+    await env.db
+      .update(results)
+      .set({ value: (row.value ?? 30) + 5 })
+      .where(eq(results.id, row.id));
+    const reopened = await call(savedOneRoute.GET, { params: { reportId: id } });
+    expect(reopened.json.report.changedSince).toBe(true);
+    expect(reopened.json.report.snapshot).toEqual(first.json.report.snapshot);
+    await env.db.update(results).set({ value: row.value }).where(eq(results.id, row.id));
+
+    const list = await call(savedRoute.GET, {
+      url: `http://test.local/api/reports/saved?squadId=${first.json.report.squadId}`,
+    });
+    expect(list.json.reports.map((r: { id: number }) => r.id)).toContain(Number(id));
+    // The Academy coach reaches neither the list nor the report of another squad.
+    await signInAs("coach@example.com");
+    expect((await call(savedOneRoute.GET, { params: { reportId: id } })).status).toBe(404);
+    expect((await call(savedRoute.GET)).json.reports.some((r: { id: number }) => r.id === Number(id))).toBe(false);
   });
 });

@@ -20,7 +20,17 @@ const SEED = 20260917;
 const RANDOM_AS_OWNER = 100;
 const RANDOM_AS_COACH = 30;
 
-type Ids = { senior: number; tessa: number; cmj: number; mean: number; session: number; coach2: number };
+type Ids = {
+  senior: number;
+  tessa: number;
+  cmj: number;
+  mean: number;
+  session: number;
+  coach2: number;
+  /** The Senior Women pre-block and post-block sessions: a pair a Change report can be saved for. */
+  pre: number;
+  post: number;
+};
 type Base = {
   params: (ids: Ids) => Record<string, string>;
   body: (ids: Ids) => Promise<Record<string, unknown>>;
@@ -117,6 +127,16 @@ const BASES: Record<string, Base> = {
       typicalError: 0.01,
       plausibleMin: 0.1,
       plausibleMax: 0.6,
+    }),
+  },
+  "POST /api/reports/saved": {
+    params: () => ({}),
+    body: async (i) => ({
+      testId: i.cmj,
+      fromSessionId: i.pre,
+      toSessionId: i.post,
+      confidence: 0.9,
+      note: "Fuzz note",
     }),
   },
   "POST /api/sessions": {
@@ -223,6 +243,8 @@ beforeAll(async () => {
     mean: created.json.test.id,
     session: session.json.session.id,
     coach2: await userIdOf("coach2@example.com"),
+    pre: await one(`SELECT id FROM testing_sessions WHERE squad_id = ${senior} AND phase = 'pre-block'`),
+    post: await one(`SELECT id FROM testing_sessions WHERE squad_id = ${senior} AND phase = 'post-block'`),
   };
   template = `${dirname(env.url.slice("file:".length))}/fuzz-template.db`;
   await snapshotTo(template);
