@@ -13,11 +13,13 @@ import {
   createSquadRequest,
   createTestRequest,
   deleteTestRequest,
+  saveReportRequest,
   updateAthleteRequest,
   updateSessionRequest,
   updateSquadRequest,
   updateTestRequest,
 } from "@/lib/client/writes";
+import type { SavedReportCreateInput } from "@/lib/validation/reports";
 import type {
   AthleteUpdateInput,
   SquadAthleteAddInput,
@@ -71,3 +73,6 @@ export const useUpdateSession = () =>
     ({ sessionId, input }: { sessionId: number; input: SessionUpdateInput }) => updateSessionRequest(sessionId, input),
     SESSION_FAMILIES,
   );
+
+export const useSaveReport = () =>
+  useWrite((input: SavedReportCreateInput) => saveReportRequest(input), [queryKeys.reports]);

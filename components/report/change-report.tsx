@@ -7,12 +7,13 @@ import { changeReportSearch, reportQueries } from "@/lib/client/queries";
 import { formatDate } from "@/lib/labels";
 import type { ChangeReportQuery } from "@/lib/validation/reports";
 import { AthleteChanges } from "./athlete-changes";
+import { Interpretation } from "./interpretation";
 import { AthleteCharts } from "./report-charts";
 import { ReportSettings } from "./report-settings";
 import { SquadPanel } from "./squad-panel";
 
 /** The Change report: did the squad improve, and which athletes changed beyond the test's noise? */
-export function ChangeReport({ initial }: { initial: ChangeReportQuery }) {
+export function ChangeReport({ initial, canWriteNote }: { initial: ChangeReportQuery; canWriteNote: boolean }) {
   const [query, setQuery] = useState(initial);
   const report = useQuery({ ...reportQueries.change(query), placeholderData: keepPreviousData });
 
@@ -69,6 +70,7 @@ export function ChangeReport({ initial }: { initial: ChangeReportQuery }) {
             <AthleteCharts report={data} />
           </div>
           <AthleteChanges report={data} />
+          <Interpretation query={query} squadId={data.sessions.from.squadId} canWrite={canWriteNote} />
         </>
       )}
       <p className="text-xs text-ink-soft">

@@ -9,7 +9,7 @@ import { queryOptions } from "@tanstack/react-query";
 import type { listAthleteResults } from "@/lib/data/athlete-results";
 import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
 import type { listSessionAudit } from "@/lib/data/audit";
-import type { getChangeReport } from "@/lib/data/reports";
+import type { getChangeReport, getSavedReport, listSavedReports } from "@/lib/data/reports";
 import type { getSessionSheet, listSessions } from "@/lib/data/sessions";
 import type { getSquad, listCoaches, listSquads } from "@/lib/data/squads";
 import type { listTests } from "@/lib/data/tests";
@@ -132,6 +132,20 @@ export function changeReportSearch(q: Omit<ChangeReportQuery, "swcValue"> & { sw
 }
 
 export const reportQueries = {
+  saved: (squadId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.reports, "saved", { squadId }] as const,
+      queryFn: () =>
+        fetchJson<{ reports: Loaded<typeof listSavedReports> }>(`/api/reports/saved?squadId=${squadId}`).then(
+          (r) => r.reports,
+        ),
+    }),
+  savedOne: (reportId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.reports, "saved", reportId] as const,
+      queryFn: () =>
+        fetchJson<{ report: Loaded<typeof getSavedReport> }>(`/api/reports/saved/${reportId}`).then((r) => r.report),
+    }),
   change: (q: ChangeReportQuery) =>
     queryOptions({
       // Keyed by the URL's query, so a shared link and the screen's own reads meet in one entry.
@@ -150,3 +164,4 @@ export type SheetTest = SheetData["tests"][number];
 export type ResultRow = SheetData["results"][number];
 export type AuditEvent = Loaded<typeof listSessionAudit>[number];
 export type ChangeReportData = Loaded<typeof getChangeReport>;
+export type SavedReportItem = Loaded<typeof listSavedReports>[number];

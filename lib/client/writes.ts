@@ -4,11 +4,13 @@
  * Components run these through React Query mutations (`hooks/use-writes.ts`), never bare.
  */
 import type { addAthleteToSquad, updateAthlete } from "@/lib/data/athletes";
+import type { saveReport } from "@/lib/data/reports";
 import type { writeResults } from "@/lib/data/results";
 import type { createSession, updateSession } from "@/lib/data/sessions";
 import type { createSquad, updateSquad } from "@/lib/data/squads";
 import type { createTest, deleteOrArchiveTest, updateTest } from "@/lib/data/tests";
 import type { undoLastChange } from "@/lib/data/undo";
+import type { SavedReportCreateInput } from "@/lib/validation/reports";
 import type {
   AthleteUpdateInput,
   SquadAthleteAddInput,
@@ -59,3 +61,6 @@ export const saveResultsRequest = (sessionId: number, results: ResultWriteInput[
 
 export const undoRequest = (sessionId: number) =>
   send<{ undone: Loaded<typeof undoLastChange> }>(`/api/sessions/${sessionId}/undo`, "POST").then((r) => r.undone);
+
+export const saveReportRequest = (input: SavedReportCreateInput) =>
+  send<{ report: Loaded<typeof saveReport> }>("/api/reports/saved", "POST", input).then((r) => r.report);

@@ -40,6 +40,23 @@ describe("Change report", () => {
     expect(rows).toBeGreaterThan(5);
     await screenshot(page, "change-report");
 
+    // Printed: one A4 landscape page, the cautions at its foot.
+    await page.emulateMedia({ media: "print" });
+    await screenshot(page, "change-report-print");
+    const pdf = await page.pdf({ format: "A4", landscape: true, printBackground: true });
+    expect(pdf.toString("latin1").match(/\/Type\s*\/Page[^s]/g)?.length).toBe(1);
+    await page.emulateMedia({ media: "screen" });
+
+    // The scientist's note is saved with the report and reopens with it.
+    await page.getByLabel(/Note for the coaches/).fill("Most of the squad jumped higher; check the two who did not.");
+    await page.getByRole("button", { name: "Save report with note" }).click();
+    await page.getByRole("link", { name: "Open the saved report" }).click();
+    await page.getByText("Most of the squad jumped higher; check the two who did not.").waitFor();
+    await page.getByRole("heading", { name: "Squad result" }).waitFor();
+    await screenshot(page, "saved-report");
+    await page.goBack();
+    await page.getByRole("heading", { name: "Squad result" }).waitFor();
+
     // A sprint: the report says how a faster time reads, and the choice lands in the URL.
     await page.getByLabel("Test", { exact: true }).selectOption({ label: "30 m sprint" });
     await page.getByText("a faster (lower) time shows as a negative change").waitFor();

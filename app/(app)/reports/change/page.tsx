@@ -5,6 +5,7 @@ import { notFound, redirect } from "next/navigation";
 import { ChangeReport } from "@/components/report/change-report";
 import { STAFF } from "@/lib/auth/guard";
 import { pageGuard } from "@/lib/auth/page-guard";
+import { canWriteInterpretation } from "@/lib/auth/permissions";
 import { changeReportSearch, reportQueries, sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
 import { getChangeReport } from "@/lib/data/reports";
 import { listSessions } from "@/lib/data/sessions";
@@ -58,7 +59,7 @@ export default async function ChangeReportPage({ searchParams }: { searchParams:
   }
   return (
     <HydrationBoundary state={dehydrate(client)}>
-      <ChangeReport initial={parsed.data} />
+      <ChangeReport initial={parsed.data} canWriteNote={canWriteInterpretation(actor)} />
     </HydrationBoundary>
   );
 }
