@@ -25,7 +25,7 @@ export function ChangeReport({ initial, canWriteNote }: { initial: ChangeReportQ
 
   const data = report.data;
   return (
-    <section aria-labelledby="report-heading" className="space-y-4 print:space-y-2 print:text-[10px]">
+    <section aria-labelledby="report-heading" className="space-y-4 print:space-y-2 print:[zoom:0.62]">
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
           <h1 id="report-heading" className="text-2xl font-bold print:text-base">

@@ -15,7 +15,7 @@ export function SavedReport({ reportId }: { reportId: number }) {
   const report = saved.snapshot;
   const savedOn = formatDate(new Date(saved.createdAt).toISOString().slice(0, 10));
   return (
-    <section aria-labelledby="saved-heading" className="space-y-4 print:space-y-2 print:text-[10px]">
+    <section aria-labelledby="saved-heading" className="space-y-4 print:space-y-2 print:[zoom:0.62]">
       <Breadcrumbs
         trail={[
           { href: `/reports/change?${changeReportSearch(saved.settings)}`, label: "Change report" },

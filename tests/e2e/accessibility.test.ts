@@ -57,6 +57,7 @@ describe("accessibility and fit of every screen", () => {
       "/sessions",
       `/sessions/${sessions[0].id}`,
       `/sessions/${sessions[0].id}/import`,
+      "/reports/change",
     ];
   });
   afterAll(() => browser?.close());
