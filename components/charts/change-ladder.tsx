@@ -4,7 +4,7 @@ import type { ChartData, ChartOptions } from "chart.js";
 import { Chart } from "react-chartjs-2";
 import type { ChangeReportData } from "@/lib/client/queries";
 import { signed } from "@/lib/words/report";
-import { COLOURS, swcBand, verdictMark } from "./chart-setup";
+import { COLOURS, LYING, swcBand, verdictMark, verdictPoints } from "./chart-setup";
 
 type Props = { report: ChangeReportData };
 
@@ -35,23 +35,16 @@ export default function ChangeLadder({ report }: Props) {
             },
           ]
         : []),
-      {
-        type: "line" as const,
-        label: "Observed change",
-        data: rows.map((a) => a.betterChange),
-        showLine: false,
-        pointStyle: marks.map((m) => m.shape),
-        pointRotation: marks.map((m) => m.rotation),
-        pointRadius: 6,
-        pointBackgroundColor: marks.map((m) => m.colour),
-        pointBorderColor: COLOURS.ink,
-      },
+      verdictPoints(
+        "Observed change",
+        rows.map((a) => a.betterChange),
+        marks,
+        6,
+      ),
     ],
   };
   const options: ChartOptions<"bar" | "line"> = {
-    indexAxis: "y",
-    responsive: true,
-    maintainAspectRatio: false,
+    ...LYING,
     plugins: {
       legend: { display: false },
       tooltip: {

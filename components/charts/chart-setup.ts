@@ -47,12 +47,10 @@ export const COLOURS = {
   grid: "#E7E3DA",
 };
 
+type VerdictMark = { colour: string; shape: "triangle" | "rectRot" | "circle" | "crossRot"; rotation: number };
+
 /** Colour and point shape of a verdict: the shape carries it too, so colour is never alone. */
-export function verdictMark(verdict: Verdict | null): {
-  colour: string;
-  shape: "triangle" | "rectRot" | "circle" | "crossRot";
-  rotation: number;
-} {
+export function verdictMark(verdict: Verdict | null): VerdictMark {
   switch (verdict) {
     case "clear-gain":
     case "gain":
@@ -102,3 +100,21 @@ export function swcBand<T extends ChartType>(swc: number, axis: "x" | "y"): Plug
     },
   };
 }
+
+/** Points only (no line), each shaped and coloured by its verdict mark. */
+export function verdictPoints(label: string, values: number[], marks: VerdictMark[], radius: number) {
+  return {
+    type: "line" as const,
+    label,
+    data: values,
+    showLine: false,
+    pointStyle: marks.map((m) => m.shape),
+    pointRotation: marks.map((m) => m.rotation),
+    pointRadius: radius,
+    pointBackgroundColor: marks.map((m) => m.colour),
+    pointBorderColor: COLOURS.ink,
+  };
+}
+
+/** The interval charts lie on their side: categories down, the change across. */
+export const LYING = { indexAxis: "y" as const, responsive: true, maintainAspectRatio: false };

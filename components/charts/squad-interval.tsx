@@ -4,7 +4,7 @@ import type { ChartData, ChartOptions } from "chart.js";
 import { Chart } from "react-chartjs-2";
 import type { ChangeReportData } from "@/lib/client/queries";
 import { confidenceWords, signed } from "@/lib/words/report";
-import { COLOURS, swcBand, verdictMark } from "./chart-setup";
+import { COLOURS, LYING, swcBand, verdictMark, verdictPoints } from "./chart-setup";
 
 /** Squad interval: the mean change with its t-interval, better to the right, against the SWC band. */
 export default function SquadInterval({ report }: { report: ChangeReportData }) {
@@ -25,23 +25,11 @@ export default function SquadInterval({ report }: { report: ChangeReportData }) 
         borderWidth: 1.5,
         barPercentage: 0.45,
       },
-      {
-        type: "line",
-        label: "Mean change",
-        data: [sign * squad.meanDiff],
-        showLine: false,
-        pointStyle: mark.shape,
-        pointRotation: mark.rotation,
-        pointRadius: 8,
-        pointBackgroundColor: mark.colour,
-        pointBorderColor: COLOURS.ink,
-      },
+      verdictPoints("Mean change", [sign * squad.meanDiff], [mark], 8),
     ],
   };
   const options: ChartOptions<"bar" | "line"> = {
-    indexAxis: "y",
-    responsive: true,
-    maintainAspectRatio: false,
+    ...LYING,
     plugins: {
       legend: { display: false },
       tooltip: {
