@@ -9,6 +9,7 @@
  */
 import { readdirSync } from "node:fs";
 import { join } from "node:path";
+import { mulberry32 } from "../scripts/seeded-random";
 
 export interface BenchResult {
   /** Stable kebab-case id, e.g. "stats-paired-n30-us"; ends with its unit by convention. */
@@ -169,16 +170,7 @@ function median(sorted: number[]): number {
 }
 
 /** Deterministic PRNG (mulberry32) so benchmark inputs are identical run to run. */
-export function seededRandom(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+export const seededRandom = mulberry32;
 
 /** The `*.bench.ts` files in `dir`, sorted, optionally only those whose name contains a filter word. */
 export function discoverBenchFiles(dir: string, filters: readonly string[] = []): string[] {

@@ -4,6 +4,7 @@
  * (CMJ CV about 3 %, short sprints about 1–1.5 %, intermittent run about 5 %, 1RM about 3 %).
  */
 import type { Direction, TrialRule } from "../lib/domain";
+import { mulberry32 } from "./seeded-random";
 
 export const DEMO_PASSWORD = "changewise-demo";
 
@@ -183,14 +184,7 @@ export const OTHER_SQUAD = {
 
 /** Small deterministic generator (mulberry32) so the demo is the same on every machine. */
 export function seededRandom(seed: number) {
-  let a = seed >>> 0;
-  const uniform = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const uniform = mulberry32(seed);
   const normal = () => {
     const u = Math.max(uniform(), 1e-12);
     return Math.sqrt(-2 * Math.log(u)) * Math.cos(2 * Math.PI * uniform());

@@ -4,6 +4,7 @@
  * prototype keys, non-finite and out-of-range numbers, control characters, arrays for objects,
  * empty or invalid JSON, wrong content types. Same seed, same requests, same order.
  */
+import { mulberry32 } from "../../scripts/seeded-random";
 
 /** Text written into the JSON verbatim (e.g. `1e999`, which JSON.stringify cannot produce). */
 export class Raw {
@@ -21,14 +22,7 @@ export type FuzzCase = {
 };
 
 export function seeded(seed: number) {
-  let a = seed >>> 0;
-  const next = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const next = mulberry32(seed);
   const int = (n: number) => Math.floor(next() * n);
   const pick = <T>(list: readonly T[]): T => list[int(list.length)];
   return { next, int, pick };

@@ -4,18 +4,12 @@
  * very wide headers, duplicate headers, NUL bytes. The same seed gives the same files, so a
  * failure can be replayed.
  */
+import { mulberry32 } from "../../scripts/seeded-random";
 export type HostileFile = { kind: string; bytes: Uint8Array };
 
 /** mulberry32: small, fast, good enough to pick shapes. */
 export function seeded(seed: number) {
-  let a = seed >>> 0;
-  const next = () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
+  const next = mulberry32(seed);
   const int = (min: number, max: number) => min + Math.floor(next() * (max - min + 1));
   const pick = <T>(items: readonly T[]) => items[Math.floor(next() * items.length)];
   return { next, int, pick };
