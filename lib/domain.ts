@@ -67,3 +67,6 @@ export const SHEET_AUDIT_ACTIONS = [
   "results.import",
 ] as const satisfies readonly AuditAction[];
 export type SheetAuditAction = (typeof SHEET_AUDIT_ACTIONS)[number];
+
+/** The confidence levels a Change report offers; 90 % is the trade's usual choice for practical decisions. */
+export const REPORT_CONFIDENCES = [0.8, 0.9, 0.95, 0.99] as const;

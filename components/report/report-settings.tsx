@@ -2,10 +2,10 @@
 
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
-import { SWC_METHODS, type SwcMethod } from "@/lib/domain";
+import { REPORT_CONFIDENCES, SWC_METHODS, type SwcMethod } from "@/lib/domain";
 import { formatDate, PHASE_LABELS } from "@/lib/labels";
 import { defaultComparison } from "@/lib/reports/defaults";
-import { type ChangeReportQuery, REPORT_CONFIDENCES } from "@/lib/validation/reports";
+import type { ChangeReportQuery } from "@/lib/validation/reports";
 
 const SWC_CHOICES: Record<SwcMethod, { label: string; defaultValue: number; unitLabel: (unit: string) => string }> = {
   "sd-factor": { label: "Factor × between-athlete SD", defaultValue: 0.2, unitLabel: () => "factor" },

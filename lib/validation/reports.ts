@@ -4,11 +4,8 @@
  * the same report.
  */
 import { z } from "zod";
-import { SWC_METHODS } from "@/lib/domain";
+import { REPORT_CONFIDENCES, SWC_METHODS } from "@/lib/domain";
 import { requiredText } from "./common";
-
-/** The confidence levels a report offers; 90 % is the trade's usual choice for practical decisions. */
-export const REPORT_CONFIDENCES = [0.8, 0.9, 0.95, 0.99] as const;
 
 const queryId = (label: string) =>
   z
