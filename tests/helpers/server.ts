@@ -68,7 +68,15 @@ export function buildIsCurrent(): boolean {
 export type RunningServer = { baseUrl: string; databaseUrl: string; stop: () => Promise<void> };
 
 /** Builds once if the build is missing or older than the code, then starts `next start` on a free port. */
-export async function startProductionServer(): Promise<RunningServer> {
+/**
+ * `databaseUrl` serves an existing database as it is (a benchmark's prepared file); without it
+ * a fresh database is migrated and seeded with the demo club.
+ */
+export async function startProductionServer({
+  databaseUrl: given,
+}: {
+  databaseUrl?: string;
+} = {}): Promise<RunningServer> {
   if (!buildIsCurrent() || process.env.E2E_BUILD === "1") {
     const build = spawnSync("npx", ["next", "build"], {
       stdio: "inherit",
@@ -77,11 +85,13 @@ export async function startProductionServer(): Promise<RunningServer> {
     if (build.status !== 0) throw new Error("next build failed");
   }
   const dir = mkdtempSync(join(tmpdir(), "changewise-e2e-"));
-  const databaseUrl = `file:${join(dir, "e2e.db")}`;
-  await migrateDatabase(databaseUrl);
-  const { client, db } = openDatabase(databaseUrl);
-  await seedDemo(db, { passwordCost: 4 });
-  client.close();
+  const databaseUrl = given ?? `file:${join(dir, "e2e.db")}`;
+  if (!given) {
+    await migrateDatabase(databaseUrl);
+    const { client, db } = openDatabase(databaseUrl);
+    await seedDemo(db, { passwordCost: 4 });
+    client.close();
+  }
 
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
