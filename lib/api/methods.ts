@@ -10,6 +10,7 @@ export const ROUTE_METHODS = {
   athletes: ["GET"],
   "athletes/[athleteId]": ["GET", "PATCH"],
   "athletes/[athleteId]/results": ["GET"],
+  "athletes/[athleteId]/history": ["GET"],
   coaches: ["GET"],
   squads: ["GET", "POST"],
   "squads/[squadId]": ["GET", "PATCH"],

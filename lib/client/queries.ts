@@ -6,6 +6,7 @@
  * invalidates a whole family with one prefix.
  */
 import { queryOptions } from "@tanstack/react-query";
+import type { getAthleteHistory } from "@/lib/data/athlete-history";
 import type { listAthleteResults } from "@/lib/data/athlete-results";
 import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
 import type { listSessionAudit } from "@/lib/data/audit";
@@ -80,6 +81,11 @@ export const athleteQueries = {
         fetchJson<{ results: Loaded<typeof listAthleteResults> }>(`/api/athletes/${athleteId}/results`).then(
           (r) => r.results,
         ),
+    }),
+  history: (athleteId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.athletes, athleteId, "history"] as const,
+      queryFn: () => fetchJson<Loaded<typeof getAthleteHistory>>(`/api/athletes/${athleteId}/history`),
     }),
 };
 
@@ -163,5 +169,6 @@ export type SheetData = Loaded<typeof getSessionSheet>;
 export type SheetTest = SheetData["tests"][number];
 export type ResultRow = SheetData["results"][number];
 export type AuditEvent = Loaded<typeof listSessionAudit>[number];
+export type AthleteHistoryData = Loaded<typeof getAthleteHistory>;
 export type ChangeReportData = Loaded<typeof getChangeReport>;
 export type SavedReportItem = Loaded<typeof listSavedReports>[number];

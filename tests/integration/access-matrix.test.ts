@@ -113,6 +113,11 @@ const MATRIX: Record<string, Entry> = {
     aimed: true,
     request: (t) => ({ params: { athleteId: `${t.athlete}` } }),
   },
+  "GET /api/athletes/[athleteId]/history": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { athleteId: `${t.athlete}` } }),
+  },
   "GET /api/coaches": { expect: [401, 200, 200, 403, 403, 403, 403, 200], request: () => ({}) },
   "GET /api/tests": { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
   "POST /api/tests": {
