@@ -27,6 +27,7 @@ export const ROUTE_METHODS = {
   "reports/change.csv": ["GET"],
   "reports/saved": ["GET", "POST"],
   "reports/saved/[reportId]": ["GET"],
+  "work-to-do": ["GET"],
 } as const satisfies Record<string, readonly string[]>;
 
 const patternOf = (route: string) =>
