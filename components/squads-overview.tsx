@@ -3,6 +3,7 @@
 import { useSuspenseQuery } from "@tanstack/react-query";
 import Link from "next/link";
 import { SquadsStatus } from "@/components/squads/squads-status";
+import { WorkToDoPanel } from "@/components/squads/work-to-do";
 import { type Column, TableCard } from "@/components/table-card";
 import { isCoach } from "@/lib/auth/permissions";
 import { squadQueries } from "@/lib/client/queries";
@@ -20,8 +21,8 @@ export function SquadsOverview({ role }: { role: Role }) {
   const squads = useSuspenseQuery(squadQueries.list());
 
   return (
-    <section aria-labelledby="squads-heading">
-      <div className="mb-4 flex items-baseline justify-between">
+    <section aria-labelledby="squads-heading" className="space-y-4">
+      <div className="flex items-baseline justify-between">
         <h1 id="squads-heading" className="text-2xl font-bold">
           Squads
         </h1>
@@ -30,6 +31,7 @@ export function SquadsOverview({ role }: { role: Role }) {
         </p>
       </div>
       <SquadsStatus query={squads} role={role} />
+      {squads.data.length > 0 && <WorkToDoPanel />}
       {squads.data.length > 0 && (
         <TableCard columns={COLUMNS} headCellClass="px-4 py-2 font-semibold">
           {squads.data.map((squad) => (

@@ -7,6 +7,7 @@ import { isAthlete } from "@/lib/auth/permissions";
 import { athleteQueries, squadQueries } from "@/lib/client/queries";
 import { listAthleteResults } from "@/lib/data/athlete-results";
 import { listSquads } from "@/lib/data/squads";
+import { getWorkToDo } from "@/lib/data/work-to-do";
 import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
 
 export const metadata: Metadata = { title: "Home" };
@@ -24,7 +25,10 @@ export default async function HomePage() {
       </HydrationBoundary>
     );
   }
-  await prefetch(client, squadQueries.list(), () => listSquads(actor));
+  await Promise.all([
+    prefetch(client, squadQueries.list(), () => listSquads(actor)),
+    prefetch(client, squadQueries.workToDo(), () => getWorkToDo(actor)),
+  ]);
   return (
     <HydrationBoundary state={dehydrate(client)}>
       <SquadsOverview role={actor.role} />

@@ -95,7 +95,9 @@ export function AthleteChanges({ report }: { report: ChangeReportData }) {
         {rows.map((a) => (
           <tr key={a.athleteId} className="border-b border-line last:border-0">
             <th scope="row" className="px-3 py-2 print:py-0 text-left font-semibold">
-              {a.name}
+              <Link href={`/athletes/${a.athleteId}`} className="underline-offset-2 hover:underline">
+                {a.name}
+              </Link>
             </th>
             <td className="num px-3 py-2 print:py-0 text-right">{plain(a.pre, test.decimals)}</td>
             <td className="num px-3 py-2 print:py-0 text-right">{plain(a.post, test.decimals)}</td>

@@ -1,5 +1,6 @@
 "use client";
 
+import Link from "next/link";
 import { Fragment } from "react";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
 import type { SheetTest } from "@/lib/client/queries";
@@ -40,7 +41,13 @@ export function SheetRow({
           scope="row"
           className="sticky left-0 z-10 border-b border-line bg-white px-3 py-1 text-left font-semibold group-hover:bg-paper"
         >
-          <span className="block whitespace-nowrap text-sm">{athlete.name}</span>
+          <Link
+            href={`/athletes/${athlete.id}`}
+            className="block whitespace-nowrap text-sm underline-offset-2 hover:underline"
+            title={`Athlete history of ${athlete.name}`}
+          >
+            {athlete.name}
+          </Link>
           {athlete.position && <span className="block text-xs font-normal text-ink-faint">{athlete.position}</span>}
         </th>
         {tests.map((test) => {

@@ -1,5 +1,6 @@
 "use client";
 
+import Link from "next/link";
 import { useMemo, useState } from "react";
 import { type Column, TableCard } from "@/components/table-card";
 import type { RosterAthlete } from "@/lib/client/queries";
@@ -101,7 +102,13 @@ export function AthleteTable({
             className={`border-b border-line last:border-0 ${a.archived ? "bg-paper text-ink-faint" : ""}`}
           >
             <td className="px-3 py-2">
-              <span className="font-semibold">{a.name}</span>
+              <Link
+                href={`/athletes/${a.id}`}
+                className="font-semibold underline-offset-2 hover:underline"
+                title={`Athlete history of ${a.name}`}
+              >
+                {a.name}
+              </Link>
               {a.archived && (
                 <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>
               )}

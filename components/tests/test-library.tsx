@@ -1,11 +1,13 @@
 "use client";
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
+import Link from "next/link";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
 import { type Column, TableCard } from "@/components/table-card";
 import { type TestItem, testQueries } from "@/lib/client/queries";
+import { formatDate, PHASE_LABELS } from "@/lib/labels";
 import { directionWords, rangeWords, swcWords, typicalErrorWords } from "@/lib/words/tests";
 import { TestForm } from "./test-form";
 import { TestRowActions } from "./test-row-actions";
@@ -99,9 +101,24 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
                 <td className="whitespace-nowrap px-3 py-2.5">
                   {test.trialRule === "best" ? "Best" : "Mean"} of <span className="num">{test.trialsPerSession}</span>
                 </td>
-                <td className="whitespace-nowrap px-3 py-2.5">{swcWords(test)}</td>
+                <td className="px-3 py-2.5">
+                  <span className="whitespace-nowrap">{swcWords(test)}</span>
+                  <CurrentSwcWords test={test} />
+                </td>
                 <td className="min-w-40 px-3 py-2.5">
-                  {te ? <span className="num">{te}</span> : <span className="text-ink-faint">Not set</span>}
+                  {te ? (
+                    <span className="num">{te}</span>
+                  ) : (
+                    <>
+                      <span className="text-ink-soft">Not set</span>
+                      <Link
+                        href={`/reports/reliability?testId=${test.id}`}
+                        className="block text-xs font-semibold underline underline-offset-2"
+                      >
+                        Measure it in a Reliability check
+                      </Link>
+                    </>
+                  )}
                   {test.typicalErrorSource && (
                     <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>
                   )}
@@ -136,5 +153,33 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
         )}
       </Dialog>
     </section>
+  );
+}
+
+/** The SWC the method gives today, in the test's unit, and the session it came from. */
+function CurrentSwcWords({ test }: { test: TestItem }) {
+  const current = test.currentSwc;
+  if (!current) return null;
+  if (current.value === null) {
+    const why =
+      test.swcMethod === "cv-factor" && current.from
+        ? "No value yet: the test has no CV%."
+        : "No value yet: no baseline or pre-block session has two scores.";
+    return <div className="max-w-56 text-xs text-ink-soft">{why}</div>;
+  }
+  const value = Number(current.value.toFixed(test.decimals + 2));
+  return (
+    <div className="max-w-56 text-xs text-ink-soft">
+      <span className="num font-semibold text-ink">
+        = {value} {test.unit}
+      </span>
+      {current.from && (
+        <>
+          {" "}
+          from {PHASE_LABELS[current.from.phase].toLowerCase()} {formatDate(current.from.date)},{" "}
+          {current.from.squadName} (<span className="num">{current.from.n}</span> athletes)
+        </>
+      )}
+    </div>
   );
 }

@@ -10,6 +10,7 @@ export const ROUTE_METHODS = {
   athletes: ["GET"],
   "athletes/[athleteId]": ["GET", "PATCH"],
   "athletes/[athleteId]/results": ["GET"],
+  "athletes/[athleteId]/history": ["GET"],
   coaches: ["GET"],
   squads: ["GET", "POST"],
   "squads/[squadId]": ["GET", "PATCH"],
@@ -26,6 +27,7 @@ export const ROUTE_METHODS = {
   "reports/change.csv": ["GET"],
   "reports/saved": ["GET", "POST"],
   "reports/saved/[reportId]": ["GET"],
+  "work-to-do": ["GET"],
 } as const satisfies Record<string, readonly string[]>;
 
 const patternOf = (route: string) =>

@@ -6,6 +6,7 @@
  * invalidates a whole family with one prefix.
  */
 import { queryOptions } from "@tanstack/react-query";
+import type { getAthleteHistory } from "@/lib/data/athlete-history";
 import type { listAthleteResults } from "@/lib/data/athlete-results";
 import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
 import type { listSessionAudit } from "@/lib/data/audit";
@@ -13,6 +14,7 @@ import type { getChangeReport, getSavedReport, listSavedReports } from "@/lib/da
 import type { getSessionSheet, listSessions } from "@/lib/data/sessions";
 import type { getSquad, listCoaches, listSquads } from "@/lib/data/squads";
 import type { listTests } from "@/lib/data/tests";
+import type { getWorkToDo } from "@/lib/data/work-to-do";
 import type { ChangeReportQuery } from "@/lib/validation/reports";
 import { fetchJson } from "./fetch-json";
 
@@ -36,6 +38,13 @@ export const squadQueries = {
       queryKey: [...queryKeys.squads, "list", { archived }] as const,
       queryFn: () =>
         fetchJson<{ squads: Loaded<typeof listSquads> }>(`/api/squads${archivedParam(archived)}`).then((r) => r.squads),
+    }),
+  /** The staff home's "What needs doing" in the caller's squads. */
+  workToDo: () =>
+    queryOptions({
+      // Under sessions: any change to a session or its scores can change what is left to do.
+      queryKey: [...queryKeys.sessions, "work-to-do"] as const,
+      queryFn: () => fetchJson<Loaded<typeof getWorkToDo>>("/api/work-to-do"),
     }),
   detail: (squadId: number) =>
     queryOptions({
@@ -80,6 +89,11 @@ export const athleteQueries = {
         fetchJson<{ results: Loaded<typeof listAthleteResults> }>(`/api/athletes/${athleteId}/results`).then(
           (r) => r.results,
         ),
+    }),
+  history: (athleteId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.athletes, athleteId, "history"] as const,
+      queryFn: () => fetchJson<Loaded<typeof getAthleteHistory>>(`/api/athletes/${athleteId}/history`),
     }),
 };
 
@@ -163,5 +177,7 @@ export type SheetData = Loaded<typeof getSessionSheet>;
 export type SheetTest = SheetData["tests"][number];
 export type ResultRow = SheetData["results"][number];
 export type AuditEvent = Loaded<typeof listSessionAudit>[number];
+export type AthleteHistoryData = Loaded<typeof getAthleteHistory>;
+export type WorkToDo = Loaded<typeof getWorkToDo>;
 export type ChangeReportData = Loaded<typeof getChangeReport>;
 export type SavedReportItem = Loaded<typeof listSavedReports>[number];

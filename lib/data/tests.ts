@@ -8,6 +8,7 @@ import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
 import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
 import { isUniqueViolation } from "./errors";
+import { type CurrentSwc, currentSwcByTest } from "./test-swc";
 
 const testColumns = {
   id: tests.id,
@@ -31,8 +32,11 @@ const testColumns = {
 
 const nameTaken = (name: string) => conflict(`A test called "${name}" already exists in your library.`);
 
-/** A Test library row; `resultCount` (results across the organisation) only for staff. */
-export type TestListItem = Awaited<ReturnType<typeof getTest>> & { resultCount?: number };
+/**
+ * A Test library row; for staff only, `resultCount` (results across the organisation) and
+ * `currentSwc` (the SWC in the test's unit from the latest baseline scores they reach).
+ */
+export type TestListItem = Awaited<ReturnType<typeof getTest>> & { resultCount?: number; currentSwc?: CurrentSwc };
 
 export async function listTests(actor: Actor, { includeArchived = false } = {}): Promise<TestListItem[]> {
   const db = getDb();
@@ -42,13 +46,16 @@ export async function listTests(actor: Actor, { includeArchived = false } = {}):
   const rows = await db.select(testColumns).from(tests).where(where).orderBy(asc(tests.name));
   // The counts are about every athlete's results; an athlete learns nothing of the others.
   if (!canSeeResultCounts(actor)) return rows;
-  const counts = await db
-    .select({ testId: results.testId, n: count() })
-    .from(results)
-    .where(eq(results.organizationId, actor.organizationId))
-    .groupBy(results.testId);
+  const [counts, swcs] = await Promise.all([
+    db
+      .select({ testId: results.testId, n: count() })
+      .from(results)
+      .where(eq(results.organizationId, actor.organizationId))
+      .groupBy(results.testId),
+    currentSwcByTest(actor, rows),
+  ]);
   const byTest = new Map(counts.map((c) => [c.testId, c.n]));
-  return rows.map((r) => ({ ...r, resultCount: byTest.get(r.id) ?? 0 }));
+  return rows.map((r) => ({ ...r, resultCount: byTest.get(r.id) ?? 0, currentSwc: swcs.get(r.id) }));
 }
 
 export async function getTest(actor: Actor, testId: number) {

@@ -49,10 +49,12 @@ describe("accessibility and fit of every screen", () => {
     await http.signIn("scientist@example.com");
     const sessions = (await http.json("/api/sessions")).json.sessions as { id: number }[];
     const squads = (await http.json("/api/squads")).json.squads as { id: number }[];
+    const athletes = (await http.json("/api/athletes")).json.athletes as { id: number }[];
     paths = [
       "/",
       "/squads",
       `/squads/${squads[0].id}`,
+      `/athletes/${athletes[0].id}`,
       "/tests",
       "/sessions",
       `/sessions/${sessions[0].id}`,

@@ -31,6 +31,8 @@ describe("server-prefetched pages", () => {
       ["/tests", ["Countermovement jump", "10 m sprint"]],
       ["/sessions", [busiest.squadName]],
       [`/sessions/${busiest.id}`, [sheet.json.athletes[0].name, sheet.json.athletes.at(-1).name, "Recent changes"]],
+      ["/", ["What needs doing"]],
+      [`/athletes/${sheet.json.athletes[0].id}`, [sheet.json.athletes[0].name, "Athlete history"]],
     ];
     for (const [path, expected] of pages) {
       const body = await html(scientist, path);

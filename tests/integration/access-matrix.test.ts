@@ -113,6 +113,11 @@ const MATRIX: Record<string, Entry> = {
     aimed: true,
     request: (t) => ({ params: { athleteId: `${t.athlete}` } }),
   },
+  "GET /api/athletes/[athleteId]/history": {
+    expect: [401, 200, 200, 200, 404, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { athleteId: `${t.athlete}` } }),
+  },
   "GET /api/coaches": { expect: [401, 200, 200, 403, 403, 403, 403, 200], request: () => ({}) },
   "GET /api/tests": { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
   "POST /api/tests": {
@@ -213,6 +218,7 @@ const MATRIX: Record<string, Entry> = {
     expect: [401, 200, 200, 200, 404, 403, 403, 404],
     request: () => ({ params: { reportId: `${club.savedReport}` } }),
   },
+  "GET /api/work-to-do": { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
   "GET /api/auth/[...nextauth]": {
     exempt:
       "next-auth's own endpoints (csrf, providers, session): public by design; sign-in throttling and sign-out have their own tests",

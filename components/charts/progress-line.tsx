@@ -1,0 +1,94 @@
+"use client";
+
+import type { ChartData, ChartOptions } from "chart.js";
+import { Chart } from "react-chartjs-2";
+import type { AthleteHistoryData } from "@/lib/client/queries";
+import { formatDate, PHASE_LABELS } from "@/lib/labels";
+import { COLOURS, verdictMark, verdictPoints } from "./chart-setup";
+
+type Test = AthleteHistoryData["tests"][number];
+
+/**
+ * Progress line: one athlete's scores in one test over time. When the test's typical error is
+ * known, each score carries its noise band (score ± TE), so a step that stays inside the bands
+ * reads as noise at a glance. Points are shaped by the verdict of the change that led to them.
+ */
+export default function ProgressLine({ test }: { test: Test }) {
+  const points = test.scores.filter((s) => s.value !== null && s.flag === null);
+  const te = test.typicalError;
+  const labels = points.map((s) => formatDate(s.date));
+  const marks = points.map((s) => verdictMark(s.verdict));
+  const data: ChartData<"bar" | "line", (number | [number, number] | null)[], string> = {
+    labels,
+    datasets: [
+      ...(te !== null
+        ? [
+            {
+              type: "bar" as const,
+              label: "Noise band (± typical error)",
+              data: points.map((s): [number, number] => [s.value! - te, s.value! + te]),
+              backgroundColor: COLOURS.band,
+              borderColor: "#C9B48F",
+              borderWidth: 1,
+              barPercentage: 0.35,
+            },
+          ]
+        : []),
+      {
+        ...verdictPoints(
+          "Score",
+          points.map((s) => s.value!),
+          marks,
+          5,
+        ),
+        showLine: true,
+        borderColor: COLOURS.ink,
+        borderWidth: 2,
+      },
+    ],
+  };
+  const options: ChartOptions<"bar" | "line"> = {
+    responsive: true,
+    maintainAspectRatio: false,
+    plugins: {
+      legend: { display: false },
+      tooltip: {
+        callbacks: {
+          title: (items) => {
+            const s = points[items[0]?.dataIndex ?? 0];
+            return s ? `${formatDate(s.date)} · ${PHASE_LABELS[s.phase]}` : "";
+          },
+          label: (item) => {
+            const s = points[item.dataIndex];
+            if (item.dataset.label === "Score") return `Score ${s.value!.toFixed(test.decimals)} ${test.unit}`;
+            return `Noise band ${(s.value! - te!).toFixed(test.decimals)} to ${(s.value! + te!).toFixed(test.decimals)} ${test.unit}`;
+          },
+        },
+      },
+    },
+    scales: {
+      y: {
+        title: { display: true, text: `${test.unit} — ${test.direction === "higher" ? "higher" : "lower"} is better` },
+        grid: { color: COLOURS.grid },
+      },
+      x: { grid: { display: false } },
+    },
+  };
+  const first = points[0];
+  const last = points[points.length - 1];
+  return (
+    <div style={{ height: 240 }}>
+      <Chart
+        type="bar"
+        data={data as ChartData<"bar", (number | [number, number] | null)[], string>}
+        options={options as ChartOptions<"bar">}
+        role="img"
+        aria-label={
+          first && last
+            ? `Progress line of ${test.name}: ${points.length} scores from ${first.value!.toFixed(test.decimals)} ${test.unit} on ${formatDate(first.date)} to ${last.value!.toFixed(test.decimals)} ${test.unit} on ${formatDate(last.date)}${te !== null ? `, each with a noise band of ± ${te} ${test.unit}` : ""}.`
+            : `Progress line of ${test.name}: no usable scores.`
+        }
+      />
+    </div>
+  );
+}
