@@ -16,6 +16,7 @@ export const ROUTE_METHODS = {
   "squads/[squadId]/athletes": ["GET", "POST"],
   tests: ["GET", "POST"],
   "tests/[testId]": ["GET", "PATCH", "DELETE"],
+  "tests/[testId]/typical-error": ["POST"],
   sessions: ["GET", "POST"],
   "sessions/[sessionId]": ["GET", "PATCH"],
   "sessions/[sessionId]/results": ["PUT"],
@@ -24,6 +25,7 @@ export const ROUTE_METHODS = {
   "sessions/[sessionId]/import": ["POST"],
   "reports/change": ["GET"],
   "reports/change.csv": ["GET"],
+  "reports/reliability": ["GET"],
   "reports/saved": ["GET", "POST"],
   "reports/saved/[reportId]": ["GET"],
 } as const satisfies Record<string, readonly string[]>;

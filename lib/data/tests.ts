@@ -9,7 +9,7 @@ import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
 import { isUniqueViolation } from "./errors";
 
-const testColumns = {
+export const testColumns = {
   id: tests.id,
   name: tests.name,
   unit: tests.unit,
