@@ -2,7 +2,7 @@
  * Words for the Reliability check's codes: the Koo & Li (2016) reading of an ICC. Kept apart
  * from the numbers so the wording can change without touching a checked value.
  */
-import type { KooLiBand } from "@/lib/reports/reliability-report";
+import type { KooLiBand } from "@/lib/reports/reliability-bands";
 
 /** Koo & Li (2016, J Chiropr Med 15:155–163) reliability bands. */
 export const KOO_LI_LABELS: Record<KooLiBand, string> = {
