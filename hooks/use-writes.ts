@@ -9,6 +9,7 @@ import { type QueryKey, useMutation, useQueryClient } from "@tanstack/react-quer
 import { queryKeys } from "@/lib/client/queries";
 import {
   addAthleteRequest,
+  adoptTypicalErrorRequest,
   createSessionRequest,
   createSquadRequest,
   createTestRequest,
@@ -19,7 +20,7 @@ import {
   updateSquadRequest,
   updateTestRequest,
 } from "@/lib/client/writes";
-import type { SavedReportCreateInput } from "@/lib/validation/reports";
+import type { SavedReportCreateInput, TypicalErrorAdoptInput } from "@/lib/validation/reports";
 import type {
   AthleteUpdateInput,
   SquadAthleteAddInput,
@@ -76,3 +77,10 @@ export const useUpdateSession = () =>
 
 export const useSaveReport = () =>
   useWrite((input: SavedReportCreateInput) => saveReportRequest(input), [queryKeys.reports]);
+
+/** A new typical error changes the Test library and every report's individual intervals. */
+export const useAdoptTypicalError = () =>
+  useWrite(
+    ({ testId, input }: { testId: number; input: TypicalErrorAdoptInput }) => adoptTypicalErrorRequest(testId, input),
+    [queryKeys.tests, queryKeys.reports],
+  );

@@ -1,4 +1,4 @@
-import { STAFF } from "@/lib/auth/permissions";
+import { RELIABILITY_ROLES, STAFF } from "@/lib/auth/permissions";
 import type { Role } from "@/lib/domain";
 
 export type NavItem = { href: string; label: string; roles: readonly Role[] };
@@ -10,6 +10,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/tests", label: "Test library", roles: STAFF },
   { href: "/sessions", label: "Sessions", roles: STAFF },
   { href: "/reports/change", label: "Change report", roles: STAFF },
+  { href: "/reports/reliability", label: "Reliability check", roles: RELIABILITY_ROLES },
   { href: "/", label: "My progress", roles: ["athlete"] },
 ];
 

@@ -40,9 +40,13 @@ export const canWriteInterpretation = isManager;
 /** Every member reads the Test library; only these change it. */
 export const canEditTestLibrary = isManager;
 
+/** The Reliability check measures a test's noise and may change the Test library's typical error. */
+export const canRunReliability = isManager;
+
 const rolesWhere = (rule: (who: RoleHolder) => boolean): readonly Role[] => ROLES.filter((role) => rule({ role }));
 
 // The role lists `guard({ roles })` takes, derived from the rules above so the two cannot drift.
 export const STAFF = rolesWhere(isStaff);
 export const MANAGERS = rolesWhere(isManager);
 export const OWNERS = rolesWhere(isOwner);
+export const RELIABILITY_ROLES = rolesWhere(canRunReliability);

@@ -10,12 +10,13 @@ import type { getAthleteHistory } from "@/lib/data/athlete-history";
 import type { listAthleteResults } from "@/lib/data/athlete-results";
 import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
 import type { listSessionAudit } from "@/lib/data/audit";
+import type { getReliabilityReport } from "@/lib/data/reliability";
 import type { getChangeReport, getSavedReport, listSavedReports } from "@/lib/data/reports";
 import type { getSessionSheet, listSessions } from "@/lib/data/sessions";
 import type { getSquad, listCoaches, listSquads } from "@/lib/data/squads";
 import type { listTests } from "@/lib/data/tests";
 import type { getWorkToDo } from "@/lib/data/work-to-do";
-import type { ChangeReportQuery } from "@/lib/validation/reports";
+import type { ChangeReportQuery, ReliabilityQuery } from "@/lib/validation/reports";
 import { fetchJson } from "./fetch-json";
 
 /** What a lib/data function resolves to: the payload of the query that reads it. */
@@ -168,6 +169,25 @@ export const reportQueries = {
     }),
 };
 
+/** The Reliability check's settings as URL search params (its page link and its API query). */
+export function reliabilitySearch(q: ReliabilityQuery): string {
+  return new URLSearchParams({
+    testId: String(q.testId),
+    firstSessionId: String(q.firstSessionId),
+    secondSessionId: String(q.secondSessionId),
+    confidence: String(q.confidence),
+  }).toString();
+}
+
+export const reliabilityQueries = {
+  report: (q: ReliabilityQuery) =>
+    queryOptions({
+      // Under "reports", so adopting a typical error refreshes it with the Change report.
+      queryKey: [...queryKeys.reports, "reliability", reliabilitySearch(q)] as const,
+      queryFn: () => fetchJson<Loaded<typeof getReliabilityReport>>(`/api/reports/reliability?${reliabilitySearch(q)}`),
+    }),
+};
+
 export type SquadSummary = Loaded<typeof listSquads>[number];
 export type SquadDetail = Loaded<typeof getSquad>;
 export type RosterAthlete = Loaded<typeof listSquadAthletes>[number];
@@ -180,4 +200,5 @@ export type AuditEvent = Loaded<typeof listSessionAudit>[number];
 export type AthleteHistoryData = Loaded<typeof getAthleteHistory>;
 export type WorkToDo = Loaded<typeof getWorkToDo>;
 export type ChangeReportData = Loaded<typeof getChangeReport>;
+export type ReliabilityData = Loaded<typeof getReliabilityReport>;
 export type SavedReportItem = Loaded<typeof listSavedReports>[number];

@@ -20,7 +20,7 @@ import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
 import { findSessionInScope, squadScope } from "./scope";
 
-const sessionFields = {
+export const sessionFields = {
   id: testingSessions.id,
   squadId: testingSessions.squadId,
   squadName: squads.name,
@@ -29,7 +29,7 @@ const sessionFields = {
   status: testingSessions.status,
 };
 
-async function loadTest(actor: Actor, testId: number) {
+export async function loadTest(actor: Actor, testId: number) {
   const [test] = await getDb()
     .select({
       id: tests.id,
@@ -52,7 +52,7 @@ async function loadTest(actor: Actor, testId: number) {
 }
 
 /** Both sessions must measure the test; the report compares like with like. */
-async function assertInBattery(sessionIds: number[], testId: number) {
+export async function assertInBattery(sessionIds: number[], testId: number) {
   const rows = await getDb()
     .select({ sessionId: sessionTests.sessionId })
     .from(sessionTests)
@@ -65,7 +65,7 @@ async function assertInBattery(sessionIds: number[], testId: number) {
  * Scores of the test in both sessions, for the squad's current athletes and anyone who has a
  * score in either session (history stays with the session it was recorded in).
  */
-async function loadRows(
+export async function loadRows(
   actor: Actor,
   squadId: number,
   fromId: number,

@@ -10,7 +10,7 @@ import { recordAudit } from "./audit";
 import { isUniqueViolation } from "./errors";
 import { type CurrentSwc, currentSwcByTest } from "./test-swc";
 
-const testColumns = {
+export const testColumns = {
   id: tests.id,
   name: tests.name,
   unit: tests.unit,

@@ -65,7 +65,7 @@ export function reportSwc(setting: SwcSetting, pre: number[], cvPercent: number 
 }
 
 /** Why a row cannot pair, or null when it can: a missing score, or a flagged one (absent, injured, invalid). */
-function exclusionOf(row: ReportRow): ExclusionReason | null {
+export function exclusionOf(row: ReportRow): ExclusionReason | null {
   if (row.pre?.flag) return "flagged-pre";
   if (row.post?.flag) return "flagged-post";
   if (row.pre?.value == null) return "no-pre";

@@ -7,7 +7,8 @@ import { z } from "zod";
 import { REPORT_CONFIDENCES, SWC_METHODS } from "@/lib/domain";
 import { requiredText } from "./common";
 
-const queryId = (label: string) =>
+/** A record id as it travels in a query string: a canonical positive integer. */
+export const queryId = (label: string) =>
   z
     .string({ message: `${label} is required.` })
     .regex(/^[1-9][0-9]{0,15}$/, `${label} must be a record id.`)
@@ -65,3 +66,36 @@ export const savedReportCreateSchema = z.object({
   note: requiredText(5000, "The interpretation note", { multiline: true }),
 });
 export type SavedReportCreateInput = z.infer<typeof savedReportCreateSchema>;
+
+/** Confidence levels the Reliability check offers; 95 % is the usual choice for reading an ICC (Koo & Li 2016). */
+export const RELIABILITY_CONFIDENCES = [0.9, 0.95] as const;
+
+/** The Reliability check's settings as they travel in its URL and in `GET /api/reports/reliability`. */
+export const reliabilityQuerySchema = z
+  .object({
+    testId: queryId("The test"),
+    firstSessionId: queryId("The first session"),
+    secondSessionId: queryId("The second session"),
+    confidence: z
+      .string()
+      .optional()
+      .transform((v) => (v === undefined || v === "" ? 0.95 : Number(v)))
+      .refine((v) => (RELIABILITY_CONFIDENCES as readonly number[]).includes(v), "Confidence is 0.9 or 0.95."),
+  })
+  .refine((q) => q.firstSessionId !== q.secondSessionId, {
+    message: "Choose two different sessions.",
+    path: ["secondSessionId"],
+  });
+export type ReliabilityQuery = z.infer<typeof reliabilityQuerySchema>;
+
+/** Adopting a measured typical error: the two sessions of the study; the server recomputes it. */
+export const typicalErrorAdoptSchema = z
+  .object({
+    firstSessionId: z.number().int().positive().max(Number.MAX_SAFE_INTEGER),
+    secondSessionId: z.number().int().positive().max(Number.MAX_SAFE_INTEGER),
+  })
+  .refine((q) => q.firstSessionId !== q.secondSessionId, {
+    message: "Choose two different sessions.",
+    path: ["secondSessionId"],
+  });
+export type TypicalErrorAdoptInput = z.infer<typeof typicalErrorAdoptSchema>;

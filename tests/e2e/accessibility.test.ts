@@ -60,6 +60,7 @@ describe("accessibility and fit of every screen", () => {
       `/sessions/${sessions[0].id}`,
       `/sessions/${sessions[0].id}/import`,
       "/reports/change",
+      "/reports/reliability",
     ];
   });
   afterAll(() => browser?.close());

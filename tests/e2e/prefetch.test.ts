@@ -23,6 +23,15 @@ describe("server-prefetched pages", () => {
     );
     const sheet = await scientist.json(`/api/sessions/${busiest.id}`);
     const squads = await scientist.json("/api/squads");
+    // The demo's test–retest pair: Senior Women baseline and retest, on the CMJ.
+    type Listed = { id: number; squadName: string; phase: string };
+    const day = (phase: string) =>
+      json.sessions.find((s: Listed) => s.squadName === "Senior Women" && s.phase === phase).id;
+    const cmj = (await scientist.json("/api/tests")).json.tests.find(
+      (t: { name: string }) => t.name === "Countermovement jump",
+    );
+    const reliability = `testId=${cmj.id}&firstSessionId=${day("baseline")}&secondSessionId=${day("retest")}&confidence=0.95`;
+    const study = await scientist.json(`/api/reports/reliability?${reliability}`);
 
     const pages: [string, string[]][] = [
       ["/", squads.json.squads.map((s: { name: string }) => s.name)],
@@ -33,6 +42,7 @@ describe("server-prefetched pages", () => {
       [`/sessions/${busiest.id}`, [sheet.json.athletes[0].name, sheet.json.athletes.at(-1).name, "Recent changes"]],
       ["/", ["What needs doing"]],
       [`/athletes/${sheet.json.athletes[0].id}`, [sheet.json.athletes[0].name, "Athlete history"]],
+      [`/reports/reliability?${reliability}`, ["Test–retest result", study.json.pairs[0].name, "Planner"]],
     ];
     for (const [path, expected] of pages) {
       const body = await html(scientist, path);

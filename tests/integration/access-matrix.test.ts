@@ -40,6 +40,9 @@ type Target = {
   test: number;
   /** An earlier session of the same squad that measured `test` too (the Change report's pair). */
   preSession: number;
+  /** The squad's test–retest pair (baseline and retest sessions), both measuring `test`. */
+  baseline: number;
+  retest: number;
   /** A saved Change report of the squad. */
   savedReport: number;
   /** A cell that holds a result (version 1) on `session`'s sheet, and a score for it. */
@@ -198,6 +201,20 @@ const MATRIX: Record<string, Entry> = {
       url: `http://test.local/api/reports/change.csv?testId=${club.test}&fromSessionId=${club.preSession}&toSessionId=${club.session}`,
     }),
   },
+  "GET /api/reports/reliability": {
+    expect: [401, 200, 200, 403, 403, 403, 403, 404],
+    request: () => ({
+      url: `http://test.local/api/reports/reliability?testId=${club.test}&firstSessionId=${club.baseline}&secondSessionId=${club.retest}`,
+    }),
+  },
+  "POST /api/tests/[testId]/typical-error": {
+    // Not aimed: the other organisation has no test–retest pair to study.
+    expect: [401, 200, 200, 403, 403, 403, 403, 404],
+    request: (t) => ({
+      params: { testId: `${t.test}` },
+      body: { firstSessionId: t.baseline, secondSessionId: t.retest },
+    }),
+  },
   "GET /api/reports/saved": {
     expect: [401, 200, 200, 200, 200, 403, 403, 200],
     request: () => ({}),
@@ -252,8 +269,19 @@ beforeAll(async () => {
   // The Senior Women post-block session: a draft, so its coach may write to it.
   const seniorDraft = world.sessions.filter((s) => s.squadId === senior.id && s.status === "draft").at(-1)!;
   const seniorPre = world.sessions.find((s) => s.squadId === senior.id && s.status === "published")!;
+  const seniorPhase = async (phase: string) =>
+    Number(
+      (
+        await getClient().execute({
+          sql: "SELECT id FROM testing_sessions WHERE squad_id = ? AND phase = ?",
+          args: [senior.id, phase],
+        })
+      ).rows[0][0],
+    );
   club = {
     squad: senior.id,
+    baseline: await seniorPhase("baseline"),
+    retest: await seniorPhase("retest"),
     athlete: tessa.id,
     session: seniorDraft.id,
     preSession: seniorPre.id,
@@ -282,6 +310,8 @@ beforeAll(async () => {
     athlete: rower.id,
     session: rowingSession,
     preSession: rowingSession,
+    baseline: rowingSession,
+    retest: rowingSession,
     savedReport: 0,
     test: erg.id,
     cell: { athleteId: rower.id, testId: erg.id, value: 451.2 },

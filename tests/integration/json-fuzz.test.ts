@@ -30,6 +30,9 @@ type Ids = {
   /** The Senior Women pre-block and post-block sessions: a pair a Change report can be saved for. */
   pre: number;
   post: number;
+  /** The Senior Women test–retest pair (baseline and retest): a reliability study of the CMJ. */
+  baseline: number;
+  retest: number;
 };
 type Base = {
   params: (ids: Ids) => Record<string, string>;
@@ -139,6 +142,10 @@ const BASES: Record<string, Base> = {
       note: "Fuzz note",
     }),
   },
+  "POST /api/tests/[testId]/typical-error": {
+    params: (i) => ({ testId: `${i.cmj}` }),
+    body: async (i) => ({ firstSessionId: i.baseline, secondSessionId: i.retest }),
+  },
   "POST /api/sessions": {
     params: () => ({}),
     body: async (i) => ({
@@ -245,6 +252,10 @@ beforeAll(async () => {
     coach2: await userIdOf("coach2@example.com"),
     pre: await one(`SELECT id FROM testing_sessions WHERE squad_id = ${senior} AND phase = 'pre-block'`),
     post: await one(`SELECT id FROM testing_sessions WHERE squad_id = ${senior} AND phase = 'post-block'`),
+    baseline: await one(`SELECT id FROM testing_sessions WHERE squad_id = ${senior} AND phase = 'baseline'`),
+    retest: await one(
+      `SELECT id FROM testing_sessions WHERE squad_id = ${senior} AND phase = 'retest' ORDER BY id LIMIT 1`,
+    ),
   };
   template = `${dirname(env.url.slice("file:".length))}/fuzz-template.db`;
   await snapshotTo(template);

@@ -9,6 +9,7 @@ import {
   canEditTestLibrary,
   canManageSquad,
   canPublish,
+  canRunReliability,
   isAthlete,
   isCoach,
   isManager,
@@ -35,6 +36,7 @@ const TABLE: [string, Rule, [boolean, boolean, boolean, boolean]][] = [
   ["canManageSquad", canManageSquad, [true, false, false, false]],
   ["canEditRoster", canEditRoster, [true, true, true, false]],
   ["canEditTestLibrary", canEditTestLibrary, [true, true, false, false]],
+  ["canRunReliability", canRunReliability, [true, true, false, false]],
 ];
 
 describe("permissions", () => {

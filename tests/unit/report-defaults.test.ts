@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { defaultComparison } from "@/lib/reports/defaults";
+import type { Phase } from "@/lib/domain";
+import { defaultComparison, defaultReliabilityPair } from "@/lib/reports/defaults";
 
 const s = (
   id: number,
@@ -47,6 +48,38 @@ describe("defaultComparison", () => {
     ).toBeNull();
     expect(
       defaultComparison([s(1, "2026-01-01", "pre-block"), s(2, "2026-02-01", "post-block", [1], 2)], 1),
+    ).toBeNull();
+  });
+});
+
+describe("defaultReliabilityPair", () => {
+  const session = (id: number, squadId: number, date: string, phase: Phase, testIds: number[]) => ({
+    id,
+    squadId,
+    date,
+    phase,
+    testIds,
+  });
+
+  it("opens on the latest retest and the baseline before it that shares a test", () => {
+    const sessions = [
+      session(1, 1, "2026-08-24", "baseline", [10, 11]),
+      session(2, 1, "2026-08-27", "retest", [11, 12]),
+      session(3, 1, "2026-09-07", "pre-block", [10, 11]),
+      session(4, 2, "2026-01-05", "baseline", [10]),
+      session(5, 2, "2026-01-08", "retest", [10]),
+    ];
+    expect(defaultReliabilityPair(sessions)).toEqual({ firstSessionId: 1, secondSessionId: 2, testId: 11 });
+  });
+
+  it("falls back to the latest two sessions of one squad that share a test, else null", () => {
+    const sessions = [session(1, 1, "2026-08-24", "pre-block", [10]), session(2, 1, "2026-10-01", "post-block", [10])];
+    expect(defaultReliabilityPair(sessions)).toEqual({ firstSessionId: 1, secondSessionId: 2, testId: 10 });
+    expect(
+      defaultReliabilityPair([
+        session(1, 1, "2026-08-24", "baseline", [10]),
+        session(2, 2, "2026-08-27", "retest", [10]),
+      ]),
     ).toBeNull();
   });
 });
