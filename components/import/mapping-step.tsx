@@ -129,7 +129,7 @@ export function MappingStep({
               onChange={(v) => onChange(withAthleteColumn(draft, preview.headers, v))}
             />
           </div>
-          <div className="overflow-x-auto">
+          <div className="relative overflow-x-auto">
             <table className="w-full text-left text-sm">
               <caption className="sr-only">What each column of the file holds</caption>
               <thead className="border-b border-line text-xs uppercase tracking-wide text-ink-faint">

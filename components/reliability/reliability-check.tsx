@@ -165,7 +165,7 @@ function Pairs({ report }: { report: ReliabilityData }) {
   const { test, pairs, excluded } = report;
   const d = test.decimals;
   return (
-    <section aria-labelledby="pairs-heading" className="card overflow-x-auto p-4">
+    <section aria-labelledby="pairs-heading" className="card relative overflow-x-auto p-4">
       <h2 id="pairs-heading" className="text-lg font-bold">
         Athletes
       </h2>

@@ -4,7 +4,7 @@ import { VERDICT_LABELS } from "@/lib/words/stats";
 // A word always, and an arrow for the direction: the colour is never the only carrier.
 const LOOK: Record<Verdict, { className: string; mark: string }> = {
   "clear-gain": { className: "bg-gain text-white", mark: "▲▲" },
-  gain: { className: "bg-gain-soft text-gain border border-gain", mark: "▲" },
+  gain: { className: "bg-gain-soft text-ink border border-gain", mark: "▲" },
   steady: { className: "bg-steady-soft text-ink border border-steady", mark: "◆" },
   decline: { className: "bg-decline-soft text-ink border border-decline", mark: "▼" },
   "clear-decline": { className: "bg-decline text-white", mark: "▼▼" },

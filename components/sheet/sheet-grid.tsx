@@ -109,7 +109,7 @@ export function SheetGrid({
   }
 
   return (
-    <div className="card w-fit max-w-full max-h-[calc(100vh-7rem)] overflow-auto">
+    <div className="card relative w-fit max-w-full max-h-[calc(100vh-7rem)] overflow-auto">
       <table
         ref={tableRef}
         className="w-max border-separate border-spacing-0 text-sm"
