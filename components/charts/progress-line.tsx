@@ -68,6 +68,9 @@ export default function ProgressLine({ test }: { test: Test }) {
     },
     scales: {
       y: {
+        // A bar chart starts its axis at zero; scores do not, and a change would flatten out.
+        beginAtZero: false,
+        grace: "10%",
         title: { display: true, text: `${test.unit} — ${test.direction === "higher" ? "higher" : "lower"} is better` },
         grid: { color: COLOURS.grid },
       },
