@@ -83,7 +83,11 @@ export function AthleteChanges({ report }: { report: ChangeReportData }) {
         {test.typicalError === null && (
           <p className="mt-2 rounded-md border border-line bg-band px-3 py-2 print:py-0 text-sm">
             {test.name} has no typical error yet, so no athlete gets an interval or a verdict: a change alone cannot be
-            told from test noise. Measure it on a test–retest pair, or enter a published value, in the{" "}
+            told from test noise. Measure it on a test–retest pair in the{" "}
+            <Link href={`/reports/reliability?testId=${test.id}`} className="font-semibold underline">
+              Reliability check
+            </Link>
+            , or enter a published value in the{" "}
             <Link href="/tests" className="font-semibold underline">
               Test library
             </Link>

@@ -27,8 +27,8 @@ export const ROUTE_METHODS = {
   "reports/change": ["GET"],
   "reports/change.csv": ["GET"],
   "reports/reliability": ["GET"],
-  "reports/saved": ["GET", "POST"],
-  "reports/saved/[reportId]": ["GET"],
+  "reports/notes": ["GET", "POST"],
+  "reports/notes/[reportId]": ["GET"],
   "work-to-do": ["GET"],
 } as const satisfies Record<string, readonly string[]>;
 

@@ -151,7 +151,7 @@ export const reportQueries = {
     queryOptions({
       queryKey: [...queryKeys.reports, "saved", { squadId }] as const,
       queryFn: () =>
-        fetchJson<{ reports: Loaded<typeof listSavedReports> }>(`/api/reports/saved?squadId=${squadId}`).then(
+        fetchJson<{ reports: Loaded<typeof listSavedReports> }>(`/api/reports/notes?squadId=${squadId}`).then(
           (r) => r.reports,
         ),
     }),
@@ -159,7 +159,7 @@ export const reportQueries = {
     queryOptions({
       queryKey: [...queryKeys.reports, "saved", reportId] as const,
       queryFn: () =>
-        fetchJson<{ report: Loaded<typeof getSavedReport> }>(`/api/reports/saved/${reportId}`).then((r) => r.report),
+        fetchJson<{ report: Loaded<typeof getSavedReport> }>(`/api/reports/notes/${reportId}`).then((r) => r.report),
     }),
   change: (q: ChangeReportQuery) =>
     queryOptions({

@@ -64,7 +64,7 @@ export const undoRequest = (sessionId: number) =>
   send<{ undone: Loaded<typeof undoLastChange> }>(`/api/sessions/${sessionId}/undo`, "POST").then((r) => r.undone);
 
 export const saveReportRequest = (input: SavedReportCreateInput) =>
-  send<{ report: Loaded<typeof saveReport> }>("/api/reports/saved", "POST", input).then((r) => r.report);
+  send<{ report: Loaded<typeof saveReport> }>("/api/reports/notes", "POST", input).then((r) => r.report);
 
 export const adoptTypicalErrorRequest = (testId: number, input: TypicalErrorAdoptInput) =>
   send<{ test: Loaded<typeof adoptTypicalError> }>(`/api/tests/${testId}/typical-error`, "POST", input).then(

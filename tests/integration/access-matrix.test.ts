@@ -215,11 +215,11 @@ const MATRIX: Record<string, Entry> = {
       body: { firstSessionId: t.baseline, secondSessionId: t.retest },
     }),
   },
-  "GET /api/reports/saved": {
+  "GET /api/reports/notes": {
     expect: [401, 200, 200, 200, 200, 403, 403, 200],
     request: () => ({}),
   },
-  "POST /api/reports/saved": {
+  "POST /api/reports/notes": {
     expect: [401, 201, 201, 403, 403, 403, 403, 404],
     request: () => ({
       body: {
@@ -231,7 +231,7 @@ const MATRIX: Record<string, Entry> = {
       },
     }),
   },
-  "GET /api/reports/saved/[reportId]": {
+  "GET /api/reports/notes/[reportId]": {
     expect: [401, 200, 200, 200, 404, 403, 403, 404],
     request: () => ({ params: { reportId: `${club.savedReport}` } }),
   },

@@ -14,8 +14,8 @@ vi.mock("@/lib/auth/session", () => sessionMock);
 const jStat = (jstatPkg as unknown as { jStat?: typeof jstatPkg }).jStat ?? jstatPkg;
 const route = await import("@/app/api/reports/change/route");
 const csvRoute = await import("@/app/api/reports/change.csv/route");
-const savedRoute = await import("@/app/api/reports/saved/route");
-const savedOneRoute = await import("@/app/api/reports/saved/[reportId]/route");
+const savedRoute = await import("@/app/api/reports/notes/route");
+const savedOneRoute = await import("@/app/api/reports/notes/[reportId]/route");
 
 let env: Awaited<ReturnType<typeof setupTestDatabase>>;
 const ids = {
@@ -277,7 +277,7 @@ describe("GET /api/reports/change", () => {
     await env.db.update(results).set({ value: row.value }).where(eq(results.id, row.id));
 
     const list = await call(savedRoute.GET, {
-      url: `http://test.local/api/reports/saved?squadId=${first.json.report.squadId}`,
+      url: `http://test.local/api/reports/notes?squadId=${first.json.report.squadId}`,
     });
     expect(list.json.reports.map((r: { id: number }) => r.id)).toContain(Number(id));
     // The Academy coach reaches neither the list nor the report of another squad.

@@ -132,7 +132,7 @@ const BASES: Record<string, Base> = {
       plausibleMax: 0.6,
     }),
   },
-  "POST /api/reports/saved": {
+  "POST /api/reports/notes": {
     params: () => ({}),
     body: async (i) => ({
       testId: i.cmj,
