@@ -19,9 +19,21 @@ describe("Reliability check", () => {
     const page = await browser.context.newPage();
     await page.setViewportSize({ width: 1280, height: 900 });
     await signInThroughForm(page, baseUrl, "scientist@example.com");
-    await page.getByRole("link", { name: "Reliability check" }).click();
+    // The demo's own test–retest pair (the earliest baseline and retest of Senior Women): other
+    // browser tests add later sessions, so "the latest pair" may not be it by the time this runs.
+    type Listed = { id: number; squadName: string; phase: string };
+    const { sessions } = (await (await page.request.get(`${baseUrl}/api/sessions`)).json()) as { sessions: Listed[] };
+    const day = (phase: string) =>
+      sessions.filter((x) => x.squadName === "Senior Women" && x.phase === phase).at(-1)!.id;
+    const { tests } = (await (await page.request.get(`${baseUrl}/api/tests`)).json()) as {
+      tests: { id: number; name: string }[];
+    };
+    const cmj = tests.find((t) => t.name === "Countermovement jump")!.id;
+    await page.getByRole("link", { name: "Reliability check" }).waitFor();
+    await page.goto(
+      `${baseUrl}/reports/reliability?testId=${cmj}&firstSessionId=${day("baseline")}&secondSessionId=${day("retest")}&confidence=0.95`,
+    );
     await page.getByRole("heading", { name: "Test–retest result" }).waitFor();
-    await page.getByLabel("Test", { exact: true }).selectOption({ label: "Countermovement jump" });
     await page.getByText("Typical error", { exact: true }).first().waitFor();
     await expect.poll(() => page.locator("canvas").count()).toBeGreaterThan(0);
     await screenshot(page, "reliability-check");
