@@ -14,13 +14,14 @@ import {
   createSquadRequest,
   createTestRequest,
   deleteTestRequest,
+  reliabilityFromFileRequest,
   saveReportRequest,
   updateAthleteRequest,
   updateSessionRequest,
   updateSquadRequest,
   updateTestRequest,
 } from "@/lib/client/writes";
-import type { SavedReportCreateInput, TypicalErrorAdoptInput } from "@/lib/validation/reports";
+import type { ReliabilityFileInput, SavedReportCreateInput, TypicalErrorAdoptInput } from "@/lib/validation/reports";
 import type {
   AthleteUpdateInput,
   SquadAthleteAddInput,
@@ -84,3 +85,7 @@ export const useAdoptTypicalError = () =>
     ({ testId, input }: { testId: number; input: TypicalErrorAdoptInput }) => adoptTypicalErrorRequest(testId, input),
     [queryKeys.tests, queryKeys.reports],
   );
+
+/** A Reliability check of a two-trial file: a POST that stores nothing, so it refreshes nothing. */
+export const useReliabilityFromFile = () =>
+  useWrite((input: ReliabilityFileInput) => reliabilityFromFileRequest(input), []);

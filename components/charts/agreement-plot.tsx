@@ -2,7 +2,7 @@
 
 import type { ChartData, ChartOptions } from "chart.js";
 import { Scatter } from "react-chartjs-2";
-import type { ReliabilityData } from "@/lib/client/queries";
+import type { ReliabilityStudy } from "@/lib/client/queries";
 import { plain, signed } from "@/lib/words/report";
 import { COLOURS } from "./chart-setup";
 
@@ -12,7 +12,7 @@ type Point = { x: number; y: number };
  * Differences against means (Bland & Altman 1986): each athlete's second minus first score
  * against the mean of the two, with the change in mean and the 95 % limits of agreement.
  */
-export default function AgreementPlot({ report }: { report: ReliabilityData }) {
+export default function AgreementPlot({ report }: { report: ReliabilityStudy }) {
   const { test, pairs, changeInMean, limitsOfAgreement } = report;
   const d = test.decimals + 1;
   const points = pairs.map((p) => ({ x: (p.first + p.second) / 2, y: p.second - p.first }));

@@ -1,13 +1,14 @@
 "use client";
 
 import { useAdoptTypicalError } from "@/hooks/use-writes";
-import type { ReliabilityData } from "@/lib/client/queries";
+import type { ReliabilityStudy } from "@/lib/client/queries";
+import type { TypicalErrorAdoptInput } from "@/lib/validation/reports";
 import { plain } from "@/lib/words/report";
 
 /** Makes the measured typical error the test's own (the server recomputes the study first). */
-export function AdoptTypicalError({ report }: { report: ReliabilityData }) {
+export function AdoptTypicalError({ report, source }: { report: ReliabilityStudy; source: TypicalErrorAdoptInput }) {
   const adopt = useAdoptTypicalError();
-  const { test, sessions } = report;
+  const { test } = report;
   const d = test.decimals + 1;
   const adopted = adopt.data;
   return (
@@ -37,7 +38,7 @@ export function AdoptTypicalError({ report }: { report: ReliabilityData }) {
         onClick={() =>
           adopt.mutate({
             testId: test.id,
-            input: { firstSessionId: sessions.first.id, secondSessionId: sessions.second.id },
+            input: source,
           })
         }
       >

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import type { ReliabilityData } from "@/lib/client/queries";
+import type { ReliabilityStudy } from "@/lib/client/queries";
 import { PLANNER_POWERS } from "@/lib/reports/reliability-bands";
 import { plain } from "@/lib/words/report";
 
@@ -11,7 +11,7 @@ const percent = (p: number) => `${Math.round(p * 100)} %`;
  * The Planner: how many athletes a paired pre/post study needs to detect the SWC with this
  * test's noise, and how many trials per athlete bring the noise under the SWC.
  */
-export function Planner({ report }: { report: ReliabilityData }) {
+export function Planner({ report }: { report: ReliabilityStudy }) {
   const [power, setPower] = useState<number>(0.9);
   const { test, swc, athletesNeeded, trialsNeeded, planner } = report;
   const d = test.decimals + 1;

@@ -27,6 +27,7 @@ export const ROUTE_METHODS = {
   "reports/change": ["GET"],
   "reports/change.csv": ["GET"],
   "reports/reliability": ["GET"],
+  "reports/reliability/file": ["POST"],
   "reports/notes": ["GET", "POST"],
   "reports/notes/[reportId]": ["GET"],
   "work-to-do": ["GET"],

@@ -10,7 +10,7 @@ import type { getAthleteHistory } from "@/lib/data/athlete-history";
 import type { listAthleteResults } from "@/lib/data/athlete-results";
 import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
 import type { listSessionAudit } from "@/lib/data/audit";
-import type { getReliabilityReport } from "@/lib/data/reliability";
+import type { getReliabilityFromFile, getReliabilityReport } from "@/lib/data/reliability";
 import type { getChangeReport, getSavedReport, listSavedReports } from "@/lib/data/reports";
 import type { getSessionSheet, listSessions } from "@/lib/data/sessions";
 import type { getSquad, listCoaches, listSquads } from "@/lib/data/squads";
@@ -201,4 +201,7 @@ export type AthleteHistoryData = Loaded<typeof getAthleteHistory>;
 export type WorkToDo = Loaded<typeof getWorkToDo>;
 export type ChangeReportData = Loaded<typeof getChangeReport>;
 export type ReliabilityData = Loaded<typeof getReliabilityReport>;
+export type ReliabilityFileData = Loaded<typeof getReliabilityFromFile>;
+/** A test–retest study as the screens show it, from two sessions or from a two-trial file. */
+export type ReliabilityStudy = ReliabilityData | ReliabilityFileData;
 export type SavedReportItem = Loaded<typeof listSavedReports>[number];

@@ -4,14 +4,14 @@
  * Components run these through React Query mutations (`hooks/use-writes.ts`), never bare.
  */
 import type { addAthleteToSquad, updateAthlete } from "@/lib/data/athletes";
-import type { adoptTypicalError } from "@/lib/data/reliability";
+import type { adoptTypicalError, getReliabilityFromFile } from "@/lib/data/reliability";
 import type { saveReport } from "@/lib/data/reports";
 import type { writeResults } from "@/lib/data/results";
 import type { createSession, updateSession } from "@/lib/data/sessions";
 import type { createSquad, updateSquad } from "@/lib/data/squads";
 import type { createTest, deleteOrArchiveTest, updateTest } from "@/lib/data/tests";
 import type { undoLastChange } from "@/lib/data/undo";
-import type { SavedReportCreateInput, TypicalErrorAdoptInput } from "@/lib/validation/reports";
+import type { ReliabilityFileInput, SavedReportCreateInput, TypicalErrorAdoptInput } from "@/lib/validation/reports";
 import type {
   AthleteUpdateInput,
   SquadAthleteAddInput,
@@ -65,6 +65,10 @@ export const undoRequest = (sessionId: number) =>
 
 export const saveReportRequest = (input: SavedReportCreateInput) =>
   send<{ report: Loaded<typeof saveReport> }>("/api/reports/notes", "POST", input).then((r) => r.report);
+
+/** Not a write: the file's scores travel in a POST body because they are too long for a URL, and are not stored. */
+export const reliabilityFromFileRequest = (input: ReliabilityFileInput) =>
+  send<Loaded<typeof getReliabilityFromFile>>("/api/reports/reliability/file", "POST", input);
 
 export const adoptTypicalErrorRequest = (testId: number, input: TypicalErrorAdoptInput) =>
   send<{ test: Loaded<typeof adoptTypicalError> }>(`/api/tests/${testId}/typical-error`, "POST", input).then(

@@ -88,14 +88,44 @@ export const reliabilityQuerySchema = z
   });
 export type ReliabilityQuery = z.infer<typeof reliabilityQuerySchema>;
 
-/** Adopting a measured typical error: the two sessions of the study; the server recomputes it. */
-export const typicalErrorAdoptSchema = z
-  .object({
-    firstSessionId: z.number().int().positive().max(Number.MAX_SAFE_INTEGER),
-    secondSessionId: z.number().int().positive().max(Number.MAX_SAFE_INTEGER),
-  })
-  .refine((q) => q.firstSessionId !== q.secondSessionId, {
-    message: "Choose two different sessions.",
-    path: ["secondSessionId"],
-  });
+const recordId = z.number().int().positive().max(Number.MAX_SAFE_INTEGER);
+
+/** Characters a two-trial file may hold: far more than 2 000 rows of scores need. */
+export const MAX_TWO_TRIAL_CHARS = 200_000;
+
+/** A two-trial file as the Reliability check sends it: the text, and the name it had on disk. */
+const twoTrialFile = {
+  fileName: requiredText(200, "The file name"),
+  csv: z
+    .string({ message: "The file's text is required." })
+    .min(1, "The file is empty.")
+    .max(MAX_TWO_TRIAL_CHARS, `A two-trial file is limited to ${MAX_TWO_TRIAL_CHARS.toLocaleString("en")} characters.`),
+};
+
+/** `POST /api/reports/reliability/file`: a Reliability check of a two-trial file, scored in a test's unit. */
+export const reliabilityFileSchema = z.object({
+  testId: recordId,
+  confidence: z
+    .number()
+    .refine((v) => (RELIABILITY_CONFIDENCES as readonly number[]).includes(v), "Confidence is 0.9 or 0.95."),
+  ...twoTrialFile,
+});
+export type ReliabilityFileInput = z.infer<typeof reliabilityFileSchema>;
+
+/**
+ * Adopting a measured typical error: the two sessions of the study, or the two-trial file it was
+ * measured in. Either way the server recomputes it; no figure is taken from the client.
+ */
+export const typicalErrorAdoptSchema = z.union(
+  [
+    z
+      .object({ firstSessionId: recordId, secondSessionId: recordId })
+      .refine((q) => q.firstSessionId !== q.secondSessionId, {
+        message: "Choose two different sessions.",
+        path: ["secondSessionId"],
+      }),
+    z.object(twoTrialFile),
+  ],
+  { message: "Send the two sessions of the study (firstSessionId, secondSessionId) or its file (fileName, csv)." },
+);
 export type TypicalErrorAdoptInput = z.infer<typeof typicalErrorAdoptSchema>;

@@ -42,6 +42,14 @@ export const EXCLUSION_WORDS: Record<ExclusionReason, string> = {
   "flagged-post": "Flagged in the second session",
 };
 
+/** The same reasons for a row of a two-trial file. */
+export const FILE_EXCLUSION_WORDS: Record<ExclusionReason, string> = {
+  "no-pre": "No first trial",
+  "no-post": "No second trial",
+  "flagged-pre": "First trial flagged",
+  "flagged-post": "Second trial flagged",
+};
+
 /** What the squad verdict says, in a sentence a coach can pass on (PRODUCT.md §5). */
 export const SQUAD_VERDICT_SENTENCES: Record<Verdict, string> = {
   "clear-gain": "The squad improved by more than the smallest worthwhile change: the whole interval lies above it.",

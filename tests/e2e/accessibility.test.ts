@@ -61,6 +61,7 @@ describe("accessibility and fit of every screen", () => {
       `/sessions/${sessions[0].id}/import`,
       "/reports/change",
       "/reports/reliability",
+      "/reports/reliability/file",
     ];
   });
   afterAll(() => browser?.close());

@@ -207,6 +207,18 @@ const MATRIX: Record<string, Entry> = {
       url: `http://test.local/api/reports/reliability?testId=${club.test}&firstSessionId=${club.baseline}&secondSessionId=${club.retest}`,
     }),
   },
+  "POST /api/reports/reliability/file": {
+    // The other organisation cannot score a file in this club's test.
+    expect: [401, 200, 200, 403, 403, 403, 403, 404],
+    request: () => ({
+      body: {
+        testId: club.test,
+        confidence: 0.95,
+        fileName: "pilot.csv",
+        csv: "athlete,day 1,day 2\nA,1.90,1.92\nB,1.85,1.83\nC,2.01,2.04",
+      },
+    }),
+  },
   "POST /api/tests/[testId]/typical-error": {
     // Not aimed: the other organisation has no test–retest pair to study.
     expect: [401, 200, 200, 403, 403, 403, 403, 404],

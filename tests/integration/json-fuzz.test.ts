@@ -142,6 +142,15 @@ const BASES: Record<string, Base> = {
       note: "Fuzz note",
     }),
   },
+  "POST /api/reports/reliability/file": {
+    params: () => ({}),
+    body: async (i) => ({
+      testId: i.cmj,
+      confidence: 0.95,
+      fileName: "pilot.csv",
+      csv: "athlete;day 1;day 2\nA;31,2;30,8\nB;28,4;29,0\nC;35,1;34,6",
+    }),
+  },
   "POST /api/tests/[testId]/typical-error": {
     params: (i) => ({ testId: `${i.cmj}` }),
     body: async (i) => ({ firstSessionId: i.baseline, secondSessionId: i.retest }),

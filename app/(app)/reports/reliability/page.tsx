@@ -64,9 +64,12 @@ function Empty({ message }: { message: string }) {
     <div className="card mx-auto max-w-xl p-6">
       <h1 className="text-xl font-bold">Reliability check</h1>
       <p className="mt-2 text-ink-soft">{message}</p>
-      <div className="mt-4 flex gap-2">
+      <div className="mt-4 flex flex-wrap gap-2">
         <Link href="/reports/reliability" className="btn-quiet">
           Open the latest test–retest pair
+        </Link>
+        <Link href="/reports/reliability/file" className="btn-quiet">
+          Check a two-trial file
         </Link>
         <Link href="/sessions" className="btn-quiet">
           Sessions
