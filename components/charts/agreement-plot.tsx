@@ -4,7 +4,7 @@ import type { ChartData, ChartOptions } from "chart.js";
 import { Scatter } from "react-chartjs-2";
 import type { ReliabilityStudy } from "@/lib/client/queries";
 import { plain, signed } from "@/lib/words/report";
-import { COLOURS } from "./chart-setup";
+import { COLOURS, ROUND_END_TICKS } from "./chart-setup";
 
 type Point = { x: number; y: number };
 
@@ -67,7 +67,8 @@ export default function AgreementPlot({ report }: { report: ReliabilityStudy }) 
         type: "linear",
         min: from,
         max: to,
-        title: { display: true, text: `Mean of the two sessions (${test.unit})` },
+        ticks: ROUND_END_TICKS,
+        title: { display: true, text: `Mean of the two ${report.file ? "trials" : "sessions"} (${test.unit})` },
         grid: { color: COLOURS.grid },
       },
       y: {

@@ -14,7 +14,9 @@ import {
   LineElement,
   type Plugin,
   PointElement,
+  type Scale,
   ScatterController,
+  type Tick,
   Tooltip,
 } from "chart.js";
 import type { Verdict } from "@/lib/stats";
@@ -117,4 +119,17 @@ export function verdictPoints(label: string, values: number[], marks: VerdictMar
 }
 
 /** The interval charts lie on their side: categories down, the change across. */
+/**
+ * Ticks for an axis whose ends are set by the data (`min`/`max`): the end ticks are labelled only
+ * when they fall on the axis's step, so it never reads "−239.1 … −150 … 238.05".
+ */
+export const ROUND_END_TICKS = {
+  callback(this: Scale, value: number | string, index: number, ticks: Tick[]) {
+    const edge = index === 0 || index === ticks.length - 1;
+    const step = ticks.length > 2 ? ticks[2].value - ticks[1].value : 0;
+    const ratio = step > 0 ? Number(value) / step : 0;
+    return edge && Math.abs(ratio - Math.round(ratio)) > 1e-6 ? null : this.getLabelForValue(Number(value));
+  },
+};
+
 export const LYING = { indexAxis: "y" as const, responsive: true, maintainAspectRatio: false };

@@ -4,7 +4,7 @@ import type { ChartData, ChartOptions } from "chart.js";
 import { Chart } from "react-chartjs-2";
 import type { ChangeReportData } from "@/lib/client/queries";
 import { confidenceWords, signed } from "@/lib/words/report";
-import { COLOURS, LYING, swcBand, verdictMark, verdictPoints } from "./chart-setup";
+import { COLOURS, LYING, ROUND_END_TICKS, swcBand, verdictMark, verdictPoints } from "./chart-setup";
 
 /** Squad interval: the mean change with its t-interval, better to the right, against the SWC band. */
 export default function SquadInterval({ report }: { report: ChangeReportData }) {
@@ -45,6 +45,7 @@ export default function SquadInterval({ report }: { report: ChangeReportData }) 
       x: {
         min: -reach,
         max: reach,
+        ticks: ROUND_END_TICKS,
         title: { display: true, text: `Change in ${test.unit}, better to the right` },
         grid: { color: COLOURS.grid },
       },

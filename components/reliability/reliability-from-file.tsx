@@ -150,7 +150,7 @@ export function ReliabilityFromFile({ canAdopt }: { canAdopt: boolean }) {
             </label>
             <textarea
               id={ids.text}
-              className="field num mt-1 h-48 font-mono text-sm"
+              className="field num mt-1 h-48 font-mono text-sm placeholder:text-ink-faint"
               value={text}
               placeholder={EXAMPLE}
               spellCheck={false}

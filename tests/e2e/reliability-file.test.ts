@@ -42,7 +42,7 @@ describe("Reliability check of a two-trial file", () => {
     const typo = PILOT.map((r) => [...r]);
     typo[3][2] = "72.5kg";
     await page.getByLabel("Open a CSV file").setInputFiles(file(typo));
-    await expect.poll(() => page.getByLabel("Scores").inputValue()).toContain("72.5kg");
+    await expect.poll(() => page.getByLabel("Scores", { exact: true }).inputValue()).toContain("72.5kg");
     await page.getByRole("button", { name: "Check these scores" }).click();
     await page.getByRole("heading", { name: "These scores cannot be checked" }).waitFor();
     await page.getByText(/Row 5, second: .*72\.5kg/).waitFor();
@@ -60,7 +60,10 @@ describe("Reliability check of a two-trial file", () => {
 
     await page.getByRole("button", { name: "Adopt this typical error" }).click();
     await page.getByText(/Adopted: Back squat 1RM now has a typical error of 1\.57 kg on 7 df/).waitFor();
-    await page.getByText(/Measured: file “squat-pilot\.csv”/).first().waitFor();
+    await page
+      .getByText(/Measured: file “squat-pilot\.csv”/)
+      .first()
+      .waitFor();
     await page.close();
   });
 });
