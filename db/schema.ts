@@ -9,6 +9,7 @@ import {
   AUDIT_ACTIONS,
   AUDIT_ENTITY_TYPES,
   DIRECTIONS,
+  MAIL_KINDS,
   PHASES,
   RESULT_FLAGS,
   ROLES,
@@ -103,6 +104,10 @@ export const athletes = sqliteTable(
     position: text("position"),
     externalId: text("external_id"),
     notes: text("notes"),
+    /** Day the athlete's consent to have results processed and shown to them was recorded (YYYY-MM-DD). */
+    consentRecordedOn: text("consent_recorded_on"),
+    /** For a minor: day a parent's or guardian's consent was recorded (YYYY-MM-DD). */
+    guardianConsentOn: text("guardian_consent_on"),
     archived: integer("archived", { mode: "boolean" }).notNull().default(false),
     createdAt: createdAt(),
   },
@@ -383,4 +388,45 @@ export const signInAttempts = sqliteTable(
     index("sign_in_attempts_email_idx").on(t.email, t.attemptedAt),
     index("sign_in_attempts_address_idx").on(t.address, t.attemptedAt),
   ],
+);
+
+/**
+ * Mail waiting to go, written in the same transaction as the change that causes it and sent after
+ * the commit, with retries: a mail server that is down delays mail but never loses it, and never
+ * fails the request. Once sent, the body is cleared (it may hold a one-time link).
+ */
+export const mailOutbox = sqliteTable(
+  "mail_outbox",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id").references(() => organizations.id, { onDelete: "cascade" }),
+    kind: text("kind", { enum: MAIL_KINDS }).notNull(),
+    to: text("to_address").notNull(),
+    subject: text("subject").notNull(),
+    text: text("body_text"),
+    html: text("body_html"),
+    attempts: integer("attempts").notNull().default(0),
+    nextAttemptAt: integer("next_attempt_at", { mode: "timestamp_ms" }).notNull(),
+    sentAt: integer("sent_at", { mode: "timestamp_ms" }),
+    lastError: text("last_error"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("mail_outbox_due_idx").on(t.sentAt, t.nextAttemptAt)],
+);
+
+/** An athlete's request that the club delete them and their results; the owner acts on it. */
+export const deletionRequests = sqliteTable(
+  "deletion_requests",
+  {
+    id: integer("id").primaryKey({ autoIncrement: true }),
+    organizationId: integer("organization_id")
+      .notNull()
+      .references(() => organizations.id, { onDelete: "cascade" }),
+    athleteId: integer("athlete_id")
+      .notNull()
+      .references(() => athletes.id, { onDelete: "cascade" }),
+    message: text("message"),
+    requestedAt: integer("requested_at", { mode: "timestamp_ms" }).notNull(),
+  },
+  (t) => [uniqueIndex("deletion_requests_athlete_unique").on(t.athleteId)],
 );

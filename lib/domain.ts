@@ -53,10 +53,33 @@ export const AUDIT_ACTIONS = [
   "test.archive",
   "test.delete",
   "report.save",
+  "member.invite",
+  "member.update",
+  "member.remove",
+  "invitation.revoke",
+  "invitation.accept",
+  "password.reset",
+  "athlete.deletion-request",
+  "athlete.delete",
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 
-export const AUDIT_ENTITY_TYPES = ["session", "result", "upload", "squad", "athlete", "test", "report"] as const;
+export const AUDIT_ENTITY_TYPES = [
+  "session",
+  "result",
+  "upload",
+  "squad",
+  "athlete",
+  "test",
+  "report",
+  "member",
+  "invitation",
+  "user",
+] as const;
+
+/** What the outbox sends; each kind has its own wording in lib/mail/templates. */
+export const MAIL_KINDS = ["invitation", "password-reset", "results-published", "deletion-request"] as const;
+export type MailKind = (typeof MAIL_KINDS)[number];
 export type AuditEntityType = (typeof AUDIT_ENTITY_TYPES)[number];
 
 /** The changes a Session sheet lists under Recent changes: its scores, typed or imported. */

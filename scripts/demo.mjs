@@ -3,6 +3,7 @@
 import { spawn, spawnSync } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import { existsSync, readFileSync, writeFileSync } from "node:fs";
+import { startMailFake } from "./mail-fake.mjs";
 
 const port = process.env.PORT || "3000";
 const hostname = process.env.HOSTNAME && process.env.HOSTNAME !== "0.0.0.0" ? process.env.HOSTNAME : "localhost";
@@ -36,6 +37,17 @@ function run(label, command, args) {
 
 run("Preparing the database (migrate, seed the demo club if empty)", "npx", ["tsx", "scripts/seed.ts"]);
 if (process.env.SKIP_BUILD !== "1") run("Building Changewise", "npx", ["next", "build"]);
+
+// Without a mail server of your own (SMTP_HOST), mail goes to the local fake and lands as .eml
+// files in MAIL_OUTBOX_DIR, readable on the Outbox page.
+if (!process.env.SMTP_HOST) {
+  env.MAIL_OUTBOX_DIR = process.env.MAIL_OUTBOX_DIR || "data/outbox";
+  const fake = await startMailFake({ port: Number(process.env.MAIL_FAKE_PORT) || 0, dir: env.MAIL_OUTBOX_DIR });
+  env.SMTP_HOST = "127.0.0.1";
+  env.SMTP_PORT = String(fake.port);
+  env.SMTP_SECURE = "false";
+  console.log(`\n▸ Local mail fake on 127.0.0.1:${fake.port}, writing to ${env.MAIL_OUTBOX_DIR}/`);
+}
 
 console.log(`\n▸ Starting Changewise on ${env.NEXTAUTH_URL}`);
 const server = spawn("npx", ["next", "start", "-p", port, "-H", bindHost], {

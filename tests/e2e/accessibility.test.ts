@@ -67,22 +67,26 @@ describe("accessibility and fit of every screen", () => {
   afterAll(() => browser?.close());
 
   // One test per width: axe on a dozen screens takes most of a minute on two cores.
-  it.each([1280, 820])("staff screens at %i px", async (width) => {
-    const page = await browser.context.newPage();
-    await signInThroughForm(page, baseUrl, "scientist@example.com");
-    const problems: string[] = [];
-    await page.setViewportSize({ width, height: 900 });
-    for (const path of paths) {
-      await page.goto(`${baseUrl}${path}`);
-      await page.waitForSelector("h1");
-      const name = `a11y-${width}-${path.replaceAll("/", "_") || "home"}`;
-      const { violations, sideways } = await audit(page, name);
-      problems.push(...violations.map((v) => `${width}px ${path}: ${v}`));
-      if (sideways > 0) problems.push(`${width}px ${path}: scrolls sideways by ${sideways}px`);
-    }
-    await page.close();
-    expect(problems).toEqual([]);
-  }, 120_000);
+  it.each([1280, 820])(
+    "staff screens at %i px",
+    async (width) => {
+      const page = await browser.context.newPage();
+      await signInThroughForm(page, baseUrl, "scientist@example.com");
+      const problems: string[] = [];
+      await page.setViewportSize({ width, height: 900 });
+      for (const path of paths) {
+        await page.goto(`${baseUrl}${path}`);
+        await page.waitForSelector("h1");
+        const name = `a11y-${width}-${path.replaceAll("/", "_") || "home"}`;
+        const { violations, sideways } = await audit(page, name);
+        problems.push(...violations.map((v) => `${width}px ${path}: ${v}`));
+        if (sideways > 0) problems.push(`${width}px ${path}: scrolls sideways by ${sideways}px`);
+      }
+      await page.close();
+      expect(problems).toEqual([]);
+    },
+    120_000,
+  );
 
   it("sign-in and the athlete's home on a 390 px phone", async () => {
     const page = await browser.context.newPage();

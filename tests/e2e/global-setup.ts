@@ -5,6 +5,7 @@ declare module "vitest" {
   export interface ProvidedContext {
     baseUrl: string;
     databaseUrl: string;
+    outboxDir: string;
   }
 }
 
@@ -13,5 +14,6 @@ export default async function setup(project: TestProject) {
   const server = await startProductionServer();
   project.provide("baseUrl", server.baseUrl);
   project.provide("databaseUrl", server.databaseUrl);
+  project.provide("outboxDir", server.outboxDir);
   return server.stop;
 }

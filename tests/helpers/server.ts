@@ -9,6 +9,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { openDatabase } from "../../db/connection";
 import { migrateDatabase } from "../../db/migrate";
+import { startMailFake } from "../../scripts/mail-fake.mjs";
 import { seedDemo } from "../../scripts/seed";
 
 function freePort(): Promise<number> {
@@ -65,7 +66,13 @@ export function buildIsCurrent(): boolean {
   return existsSync(".next/BUILD_ID") && statSync(".next/BUILD_ID").mtimeMs >= newestSourceChange();
 }
 
-export type RunningServer = { baseUrl: string; databaseUrl: string; stop: () => Promise<void> };
+export type RunningServer = {
+  baseUrl: string;
+  databaseUrl: string;
+  /** Where the local mail fake writes every message the server sends, as .eml files. */
+  outboxDir: string;
+  stop: () => Promise<void>;
+};
 
 /** Builds once if the build is missing or older than the code, then starts `next start` on a free port. */
 /**
@@ -93,6 +100,8 @@ export async function startProductionServer({
     client.close();
   }
 
+  const outboxDir = join(dir, "outbox");
+  const mail = await startMailFake({ dir: outboxDir });
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
   const child = spawn("node_modules/.bin/next", ["start", "-p", String(port), "-H", "127.0.0.1"], {
@@ -103,6 +112,11 @@ export async function startProductionServer({
       NEXTAUTH_URL: baseUrl,
       NEXT_TELEMETRY_DISABLED: "1",
       NODE_ENV: "production",
+      SMTP_HOST: "127.0.0.1",
+      SMTP_PORT: String(mail.port),
+      SMTP_SECURE: "false",
+      MAIL_FROM: "Changewise <no-reply@changewise.invalid>",
+      MAIL_OUTBOX_DIR: outboxDir,
     },
     stdio: ["ignore", "ignore", "inherit"],
   });
@@ -110,7 +124,9 @@ export async function startProductionServer({
   return {
     baseUrl,
     databaseUrl,
+    outboxDir,
     async stop() {
+      await mail.close();
       child.kill("SIGTERM");
       await new Promise((r) => setTimeout(r, 300));
       if (child.exitCode === null) child.kill("SIGKILL");
