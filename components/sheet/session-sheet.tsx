@@ -11,6 +11,7 @@ import { formatDate, PHASE_LABELS, STATUS_LABELS } from "@/lib/labels";
 import { RecentChanges } from "./recent-changes";
 import { SheetGrid } from "./sheet-grid";
 import { UndoButton } from "./undo-button";
+import { useSuspects } from "./use-suspects";
 
 /** The Session sheet: fast, keyboard-first score entry for one testing session. */
 export function SessionSheet({ sessionId }: { sessionId: number }) {
@@ -29,6 +30,7 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
   const expected = data.athletes.length * data.tests.length;
   const refused = Object.keys(sheet.invalid).length;
   const unsaved = Object.values(sheet.cells).filter((c) => c.status === "failed" || c.status === "conflict").length;
+  const { suspects, count: suspectCount, news } = useSuspects(data, sheet.shownFor);
 
   return (
     <section aria-labelledby="sheet-heading" className="space-y-3">
@@ -52,6 +54,15 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
               {STATUS_LABELS[session.status]}
             </span>{" "}
             · <span className="num">{filled}</span> of <span className="num">{expected}</span> results
+            {suspectCount > 0 && (
+              <>
+                {" "}
+                ·{" "}
+                <span className="rounded border border-dashed border-decline px-1.5 py-0.5 text-sm font-semibold">
+                  {suspectCount} {suspectCount === 1 ? "score" : "scores"} to check
+                </span>
+              </>
+            )}
           </p>
           {session.notes && <p className="mt-1 text-sm text-ink-soft">{session.notes}</p>}
         </div>
@@ -125,9 +136,17 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
         {refused > 0 &&
           ` ${refused} cell${refused === 1 ? " holds" : "s hold"} text that is not a number and ${refused === 1 ? "was" : "were"} not saved.`}
         {unsaved > 0 && ` ${unsaved} result${unsaved === 1 ? " needs" : "s need"} your attention below.`}
+        {news && ` ${news}`}
       </p>
 
-      <SheetGrid data={data} tests={tests} sheet={sheet} canEdit={data.canEdit} onAnnounce={setAnnouncement} />
+      <SheetGrid
+        data={data}
+        tests={tests}
+        sheet={sheet}
+        canEdit={data.canEdit}
+        onAnnounce={setAnnouncement}
+        suspects={suspects}
+      />
 
       <RecentChanges sessionId={session.id} />
 

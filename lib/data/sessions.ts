@@ -9,6 +9,7 @@ import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
 import { listResultRows } from "./results";
 import { findSessionInScope, onSessionSheet, sessionScope, squadScope } from "./scope";
+import { loadTypoGuard } from "./suspects";
 
 const sessionColumns = {
   id: testingSessions.id,
@@ -136,11 +137,19 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
       )
       .orderBy(asc(athletes.name)),
   ]);
+  const typoGuard = await loadTypoGuard(
+    db,
+    actor.organizationId,
+    session,
+    battery.map((t) => t.id),
+    athleteList.map((a) => a.id),
+  );
   return {
     session,
     tests: battery,
     athletes: athleteList,
     results: resultRows,
+    typoGuard,
     canEdit: canEditSession(actor, session.status),
     canPublish: canPublish(actor),
   };

@@ -35,14 +35,6 @@ export function withRow(data: SheetData, athleteId: number, testId: number, row:
   return { ...data, results: row ? [...rest, row] : rest };
 }
 
-export function outsidePlausible(test: SheetTest, value: number | null): boolean {
-  if (value === null) return false;
-  return (
-    (test.plausibleMin !== null && value < test.plausibleMin) ||
-    (test.plausibleMax !== null && value > test.plausibleMax)
-  );
-}
-
 export function plausibleWords(test: SheetTest): string {
   const { plausibleMin: min, plausibleMax: max, unit } = test;
   if (min !== null && max !== null) return `${min}–${max} ${unit}`;
