@@ -392,6 +392,7 @@ describe("authorisation matrix", () => {
     expect(Object.keys(MATRIX).filter((key) => !onDisk.includes(key))).toEqual([]);
   });
 
+  // Each of the next three sends hundreds of requests: more than the default 20 s on a busy two-core machine.
   it("every caller × every route, aimed at the demo club's Senior Women records", async () => {
     for (const [key, entry] of Object.entries(MATRIX)) {
       if ("exempt" in entry) continue;
@@ -409,7 +410,7 @@ describe("authorisation matrix", () => {
       }
     }
     expectClean();
-  });
+  }, 90_000);
 
   it("every caller × every route with an id, aimed at the other organisation's records", async () => {
     for (const [key, entry] of Object.entries(MATRIX)) {
@@ -432,7 +433,7 @@ describe("authorisation matrix", () => {
       }
     }
     expectClean();
-  });
+  }, 90_000);
 
   it("ids of other organisations and other squads sent in bodies and queries are refused", async () => {
     const academy = byName(world.squads, "Academy U18");
@@ -621,7 +622,7 @@ describe("authorisation matrix", () => {
       });
     }
     expectClean();
-  });
+  }, 90_000);
 
   it("the leak finder has teeth: the Senior Women roster, as the Academy coach would see it, is all leaks", async () => {
     await signInAs("owner@example.com");
