@@ -1,4 +1,4 @@
-import type { Phase, ResultFlag, SessionStatus } from "@/lib/domain";
+import type { Phase, ResultFlag, SessionStatus, TrialRule } from "@/lib/domain";
 
 export const PHASE_LABELS: Record<Phase, string> = {
   baseline: "Baseline",
@@ -26,4 +26,10 @@ export function formatDate(isoDate: string): string {
 
 export function formatValue(value: number | null | undefined, decimals: number): string {
   return value === null || value === undefined || !Number.isFinite(value) ? "–" : value.toFixed(decimals);
+}
+
+/** How a test turns its trials into the session's score: "Best of 3", "Mean of 2", or "One trial". */
+export function trialRuleWords(rule: TrialRule, trials: number): string {
+  if (trials === 1) return "One trial";
+  return `${rule === "best" ? "Best" : "Mean"} of ${trials}`;
 }

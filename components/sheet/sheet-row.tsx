@@ -62,7 +62,7 @@ export function SheetRow({
           const shown = sheet.shownFor(athlete.id, test.id);
           const state = sheet.cells[key];
           if (state && (state.status === "failed" || state.status === "conflict"))
-            issues.push({ testId: test.id, testName: test.name, state });
+            issues.push({ testId: test.id, testName: test.name, decimals: test.decimals, state });
           const trials = padTrials(shown.trials, test.trialsPerSession);
           const value = reduceTrials(trials, test.trialRule, test.direction);
           const spread = trialSpread(trials);

@@ -63,6 +63,12 @@ export const TrialInput = memo(function TrialInput({
           setDraft(stored);
           e.currentTarget.select();
         }}
+        // A click (on this cell or on one that already has focus) selects the score, as Tab and
+        // the arrows do; otherwise the caret lands inside it and new digits merge ("11.767.60").
+        onMouseUp={(e) => {
+          e.preventDefault();
+          e.currentTarget.select();
+        }}
         onChange={(e) => setDraft(e.target.value)}
         onBlur={() => {
           const text = draft;

@@ -7,7 +7,7 @@ import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
 import { type Column, TableCard } from "@/components/table-card";
 import { type TestItem, testQueries } from "@/lib/client/queries";
-import { formatDate, PHASE_LABELS } from "@/lib/labels";
+import { formatDate, PHASE_LABELS, trialRuleWords } from "@/lib/labels";
 import { directionWords, rangeWords, swcWords, typicalErrorWords } from "@/lib/words/tests";
 import { TestForm } from "./test-form";
 import { TestRowActions } from "./test-row-actions";
@@ -99,7 +99,7 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
                   {dir.words}
                 </td>
                 <td className="whitespace-nowrap px-3 py-2.5">
-                  {test.trialRule === "best" ? "Best" : "Mean"} of <span className="num">{test.trialsPerSession}</span>
+                  {trialRuleWords(test.trialRule, test.trialsPerSession)}
                 </td>
                 <td className="px-3 py-2.5">
                   <span className="whitespace-nowrap">{swcWords(test)}</span>

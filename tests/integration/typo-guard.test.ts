@@ -32,11 +32,7 @@ beforeAll(async () => {
     .from(results)
     .innerJoin(testingSessions, eq(testingSessions.id, results.sessionId))
     .where(
-      and(
-        eq(results.athleteId, ids.maren),
-        eq(results.testId, ids.sprint10),
-        eq(testingSessions.status, "published"),
-      ),
+      and(eq(results.athleteId, ids.maren), eq(results.testId, ids.sprint10), eq(testingSessions.status, "published")),
     )
     .orderBy(desc(testingSessions.date));
   lastPublished = row.value!;
@@ -49,7 +45,13 @@ beforeAll(async () => {
 });
 afterAll(() => env.cleanup());
 
-const put = (athleteId: number, testId: number, trials: (number | null)[], flag: string | null = null, version: number | null = null) =>
+const put = (
+  athleteId: number,
+  testId: number,
+  trials: (number | null)[],
+  flag: string | null = null,
+  version: number | null = null,
+) =>
   call(resultsRoute.PUT, {
     method: "PUT",
     params: { sessionId: String(ids.session) },
@@ -94,9 +96,11 @@ describe("PUT /api/sessions/[id]/results", () => {
 describe("import", () => {
   it("lists suspect scores in the preview and again after the commit, and stores them", async () => {
     await signInAs("scientist@example.com");
-    const csv = ["athlete,test,trial,value", "Maren Oduya,Countermovement jump,1,3.85", "Maren Oduya,Countermovement jump,2,38.5"].join(
-      "\n",
-    );
+    const csv = [
+      "athlete,test,trial,value",
+      "Maren Oduya,Countermovement jump,1,3.85",
+      "Maren Oduya,Countermovement jump,2,38.5",
+    ].join("\n");
     const preview = await uploadTo(importRoute.POST, ids.session, csv, { mode: "preview" });
     expect(preview.status).toBe(200);
     expect(preview.json.suspects).toHaveLength(1);
