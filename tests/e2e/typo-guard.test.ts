@@ -37,7 +37,9 @@ describe("typo guard on the Session sheet", () => {
     await signInThroughForm(page, baseUrl, "coach2@example.com");
     await page.goto(`${baseUrl}/sessions/${sessionId}`);
     const cell = page.getByLabel("Maren Oduya, 10 m sprint, trial 1", { exact: true });
-    await cell.fill("17.60");
+    await cell.click();
+    await page.keyboard.type("17.60");
+    await expect.poll(() => cell.inputValue()).toBe("17.60");
     await cell.press("Tab");
     await page.getByText("1 score to check").waitFor();
     const note = page.locator("li", { hasText: /Check 10 m sprint, trial 1: 17\.60 s/ });
