@@ -13,6 +13,7 @@ import {
   createSessionRequest,
   createSquadRequest,
   createTestRequest,
+  deleteSessionRequest,
   deleteTestRequest,
   reliabilityFromFileRequest,
   saveReportRequest,
@@ -73,6 +74,14 @@ export const useCreateSession = () =>
 export const useUpdateSession = () =>
   useWrite(
     ({ sessionId, input }: { sessionId: number; input: SessionUpdateInput }) => updateSessionRequest(sessionId, input),
+    SESSION_FAMILIES,
+  );
+
+/** A deleted draft leaves the Sessions list, the squads' latest sessions and What needs doing. */
+export const useDeleteSession = () =>
+  useWrite(
+    ({ sessionId, confirmedResults }: { sessionId: number; confirmedResults: number }) =>
+      deleteSessionRequest(sessionId, confirmedResults),
     SESSION_FAMILIES,
   );
 

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useMemo, useState } from "react";
 import { Breadcrumbs } from "@/components/breadcrumbs";
 import { Dialog } from "@/components/dialog";
+import { DeleteSession } from "@/components/sessions/delete-session";
 import { PublishControl } from "@/components/sessions/publish-control";
 import { SessionEditForm } from "@/components/sessions/session-edit-form";
 import { useSessionSheet } from "@/hooks/use-session-sheet";
@@ -77,6 +78,14 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
                 Import CSV
               </Link>
             </>
+          )}
+          {data.canDelete && (
+            <DeleteSession
+              sessionId={session.id}
+              date={session.date}
+              squadName={session.squadName}
+              results={data.results.length}
+            />
           )}
           {data.canPublish && (
             <PublishControl

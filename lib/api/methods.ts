@@ -19,7 +19,7 @@ export const ROUTE_METHODS = {
   "tests/[testId]": ["GET", "PATCH", "DELETE"],
   "tests/[testId]/typical-error": ["POST"],
   sessions: ["GET", "POST"],
-  "sessions/[sessionId]": ["GET", "PATCH"],
+  "sessions/[sessionId]": ["GET", "PATCH", "DELETE"],
   "sessions/[sessionId]/results": ["PUT"],
   "sessions/[sessionId]/undo": ["POST"],
   "sessions/[sessionId]/audit": ["GET"],

@@ -22,6 +22,15 @@ export const isStaff = (who: RoleHolder) => !isAthlete(who);
 export const canEditSession = (who: RoleHolder, status: SessionStatus) =>
   isManager(who) || (isCoach(who) && status === "draft");
 
+/**
+ * Deleting a session made by mistake: drafts only (a published session goes back to draft
+ * first). Owner and scientist any draft; a coach the drafts they created.
+ */
+export const canDeleteSession = (
+  who: RoleHolder & { readonly userId: number },
+  session: { status: SessionStatus; createdBy: number | null },
+) => session.status === "draft" && (isManager(who) || (isCoach(who) && session.createdBy === who.userId));
+
 /** Publishing (or withdrawing) a session's results to its athletes. */
 export const canPublish = isManager;
 

@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, count, desc, eq, inArray, notInArray } from "drizzle-orm";
 import { getDb, type Reader, writeTransaction } from "@/db/client";
 import { athletes, results, sessionTests, squads, testingSessions, tests } from "@/db/schema";
-import { canEditSession, canPublish } from "@/lib/auth/permissions";
+import { canDeleteSession, canEditSession, canPublish } from "@/lib/auth/permissions";
 import { conflict, forbidden, invalidInput, notFound } from "@/lib/errors";
 import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
@@ -121,7 +121,10 @@ export async function sessionBattery(sessionId: number, reader: Reader = getDb()
 export async function getSessionSheet(actor: Actor, sessionId: number) {
   const db = getDb();
   // The header comes first: it is the scope check for everything read after it.
-  const session = await findSessionInScope(db, actor, sessionId, sessionColumns);
+  const session = await findSessionInScope(db, actor, sessionId, {
+    ...sessionColumns,
+    createdBy: testingSessions.createdBy,
+  });
   const [battery, resultRows, athleteList] = await Promise.all([
     sessionBattery(sessionId),
     listResultRows(db, actor, sessionId),
@@ -152,6 +155,7 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
     typoGuard,
     canEdit: canEditSession(actor, session.status),
     canPublish: canPublish(actor),
+    canDelete: canDeleteSession(actor, session),
   };
 }
 

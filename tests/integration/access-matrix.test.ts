@@ -45,6 +45,8 @@ type Target = {
   retest: number;
   /** A saved Change report of the squad. */
   savedReport: number;
+  /** How many results `session` holds (what a deletion's confirm step saw). */
+  sessionResults: number;
   /** A cell that holds a result (version 1) on `session`'s sheet, and a score for it. */
   cell: { athleteId: number; testId: number; value: number };
   csv: string;
@@ -157,6 +159,15 @@ const MATRIX: Record<string, Entry> = {
     expect: [401, 200, 200, 200, 404, 403, 403, 404],
     aimed: true,
     request: (t) => ({ params: { sessionId: `${t.session}` }, body: { version: 1, notes: "Matrix" } }),
+  },
+  "DELETE /api/sessions/[sessionId]": {
+    // The coach did not create the demo's drafts: only their own drafts are theirs to delete. Not
+    // aimed: the other organisation's only session is published, so nobody may delete it there.
+    expect: [401, 200, 200, 403, 404, 403, 403, 404],
+    request: (t) => ({
+      params: { sessionId: `${t.session}` },
+      url: `http://test.local/api/sessions/${t.session}?results=${t.sessionResults}`,
+    }),
   },
   "PUT /api/sessions/[sessionId]/results": {
     expect: [401, 200, 200, 200, 404, 403, 403, 404],
@@ -290,7 +301,13 @@ beforeAll(async () => {
         })
       ).rows[0][0],
     );
+  const resultsOf = async (sessionId: number) =>
+    Number(
+      (await getClient().execute({ sql: "SELECT count(*) FROM results WHERE session_id = ?", args: [sessionId] }))
+        .rows[0][0],
+    );
   club = {
+    sessionResults: await resultsOf(seniorDraft.id),
     squad: senior.id,
     baseline: await seniorPhase("baseline"),
     retest: await seniorPhase("retest"),
@@ -318,6 +335,7 @@ beforeAll(async () => {
   const rowingSquad = byName(world.squads, "Junior Sculling");
   const rowingSession = world.sessions.find((s) => s.squadId === rowingSquad.id)!.id;
   rowing = {
+    sessionResults: await resultsOf(rowingSession),
     squad: rowingSquad.id,
     athlete: rower.id,
     session: rowingSession,
