@@ -64,6 +64,9 @@ export default function ProgressLine({ test, swcBand }: { test: Test; swcBand?: 
               borderColor: "#C9B48F",
               borderWidth: 1,
               barPercentage: 0.35,
+              maxBarThickness: 28,
+              // Behind the scores: a higher order is drawn first.
+              order: 2,
             },
           ]
         : []),
@@ -77,6 +80,7 @@ export default function ProgressLine({ test, swcBand }: { test: Test; swcBand?: 
         showLine: true,
         borderColor: COLOURS.ink,
         borderWidth: 2,
+        order: 1,
       },
     ],
   };
@@ -106,6 +110,8 @@ export default function ProgressLine({ test, swcBand }: { test: Test; swcBand?: 
         // A bar chart starts its axis at zero; scores do not, and a change would flatten out.
         beginAtZero: false,
         grace: "10%",
+        // No tick finer than the test records its scores in.
+        ticks: { precision: test.decimals },
         title: { display: true, text: `${test.unit} — ${test.direction === "higher" ? "higher" : "lower"} is better` },
         grid: { color: COLOURS.grid },
       },

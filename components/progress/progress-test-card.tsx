@@ -48,7 +48,7 @@ export function ProgressTestCard({ test, confidence, minSquad }: { test: Test; c
         <div className="space-y-1">
           <div className="flex flex-wrap items-center gap-2">
             <span className="text-sm font-semibold">Latest change</span>
-            <VerdictBadge verdict={latest.verdict} />
+            {latest.verdict && <VerdictBadge verdict={latest.verdict} />}
           </div>
           <p>
             {changeSentence({
@@ -63,7 +63,8 @@ export function ProgressTestCard({ test, confidence, minSquad }: { test: Test; c
           </p>
           {latest.ciLower !== null && latest.ciUpper !== null && latest.swc !== null && (
             <p className="text-sm text-ink-soft">
-              {Math.round(confidence * 100)} % interval of your true change:{" "}
+              {Math.round(confidence * 100)} % interval of your true change
+              {test.direction === "lower" ? " (a minus is an improvement here)" : ""}:{" "}
               <span className="num whitespace-nowrap">
                 {intervalWords(latest.ciLower, latest.ciUpper, test.decimals, test.unit)}
               </span>
@@ -89,7 +90,7 @@ export function ProgressTestCard({ test, confidence, minSquad }: { test: Test; c
             <span className="font-bold">Progress line</span>
             <span className="text-ink-soft">
               {test.typicalError !== null
-                ? ` — your scores, each with its noise band (± typical error, ${plain(test.typicalError, test.decimals)} ${test.unit}, sand bars)`
+                ? ` — your scores, each with its noise band (± typical error, ${test.typicalError} ${test.unit}, sand bars)`
                 : " — your scores over time; no noise band until the test has a typical error"}
               {latest?.swc != null
                 ? "; the dashed box is the smallest change that matters around your previous score: a latest score outside it moved by more than that."
