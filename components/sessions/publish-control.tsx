@@ -1,10 +1,13 @@
 "use client";
 
+import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { FormAlert } from "@/components/form-bits";
 import { useUpdateSession } from "@/hooks/use-writes";
+import { sessionQueries } from "@/lib/client/queries";
 import type { SessionStatus } from "@/lib/domain";
+import { CONSENT_MISSING_WORDS } from "@/lib/words/progress";
 
 /**
  * Owner and scientist: publish a session to its athletes, or take it back to draft.
@@ -62,6 +65,7 @@ export function PublishControl({
                 progress. Each athlete sees only their own scores.
               </p>
               <p>Check the Session sheet first: flagged and out-of-range scores will be visible to them as they are.</p>
+              {open && <Audience sessionId={sessionId} />}
             </>
           ) : (
             <p>
@@ -81,5 +85,52 @@ export function PublishControl({
         </div>
       </Dialog>
     </>
+  );
+}
+
+/** Who will see their results and get mail, and who will not and why: read when the dialog opens. */
+function Audience({ sessionId }: { sessionId: number }) {
+  const { data, isPending, isError } = useQuery(sessionQueries.publishCheck(sessionId));
+  if (isPending) return <p className="text-ink-soft">Checking consent and accounts…</p>;
+  if (isError || !data) return <p className="text-ink-soft">Could not check consent and accounts just now.</p>;
+  const { athletes } = data;
+  const withheld = athletes.filter((a) => !a.consent.ok);
+  const shown = athletes.length - withheld.length;
+  const mailed = athletes.filter((a) => a.mail).length;
+  const noAccount = athletes.filter((a) => a.consent.ok && !a.hasAccount).length;
+  return (
+    <div className="space-y-2 rounded-md border border-line p-3">
+      <p>
+        <span className="num font-semibold">{shown}</span> of <span className="num">{athletes.length}</span> athletes
+        with results will see them; <span className="num font-semibold">{mailed}</span>{" "}
+        {mailed === 1 ? "gets an e-mail" : "get an e-mail"} with their own numbers only
+        {noAccount > 0 && (
+          <>
+            {" "}
+            (<span className="num">{noAccount}</span> {noAccount === 1 ? "has" : "have"} no account yet, so no mail)
+          </>
+        )}
+        .
+      </p>
+      {data.republishing && (
+        <p className="text-ink-soft">
+          Published before: only athletes whose results changed since then get a mail, saying their results were
+          updated.
+        </p>
+      )}
+      {withheld.length > 0 && (
+        <div>
+          <p className="font-semibold">Not shown to them and not mailed — consent missing:</p>
+          <ul className="list-disc pl-5">
+            {withheld.map((a) => (
+              <li key={a.id}>
+                {a.name}: {a.consent.missing.map((m) => CONSENT_MISSING_WORDS[m]).join("; ")}
+              </li>
+            ))}
+          </ul>
+          <p className="text-ink-soft">Record consent on the Roster; they will see their results once it is there.</p>
+        </div>
+      )}
+    </div>
   );
 }

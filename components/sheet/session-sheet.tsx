@@ -105,6 +105,13 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
         support training decisions; they are not a medical or return-to-play judgement.
       </p>
 
+      {data.canEdit && session.status === "published" && (
+        <p role="note" className="rounded-md border border-ink bg-band px-3 py-2 text-sm">
+          <strong>Published:</strong> athletes see every change you save here on My progress at once. No new mail goes
+          out; take the session back to draft and publish again to mail those whose results changed.
+        </p>
+      )}
+
       {!data.canEdit && (
         <p className="rounded-md border border-line bg-band px-3 py-2 text-sm">
           Read only: your account cannot change the scores of this session

@@ -7,6 +7,8 @@
 export const ROUTE_METHODS = {
   "auth/[...nextauth]": ["GET", "POST"],
   me: ["GET"],
+  "me/progress": ["GET"],
+  "me/export": ["GET"],
   athletes: ["GET"],
   "athletes/[athleteId]": ["GET", "PATCH"],
   "athletes/[athleteId]/results": ["GET"],
@@ -24,6 +26,7 @@ export const ROUTE_METHODS = {
   "sessions/[sessionId]/undo": ["POST"],
   "sessions/[sessionId]/audit": ["GET"],
   "sessions/[sessionId]/import": ["POST"],
+  "sessions/[sessionId]/publish-check": ["GET"],
   "reports/change": ["GET"],
   "reports/change.csv": ["GET"],
   "reports/reliability": ["GET"],

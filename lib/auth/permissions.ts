@@ -52,6 +52,12 @@ export const canEditTestLibrary = isManager;
 /** The Reliability check measures a test's noise and may change the Test library's typical error. */
 export const canRunReliability = isManager;
 
+/** My progress and the data-rights export: an athlete's own results, read by the athlete alone. */
+export const hasOwnProgress = isAthlete;
+
+/** Who is told, before publishing, which athletes will see their results and who will get mail. */
+export const canSeePublishAudience = canPublish;
+
 const rolesWhere = (rule: (who: RoleHolder) => boolean): readonly Role[] => ROLES.filter((role) => rule({ role }));
 
 // The role lists `guard({ roles })` takes, derived from the rules above so the two cannot drift.
@@ -59,3 +65,5 @@ export const STAFF = rolesWhere(isStaff);
 export const MANAGERS = rolesWhere(isManager);
 export const OWNERS = rolesWhere(isOwner);
 export const RELIABILITY_ROLES = rolesWhere(canRunReliability);
+export const ATHLETES = rolesWhere(hasOwnProgress);
+export const PUBLISHERS = rolesWhere(canSeePublishAudience);

@@ -10,6 +10,8 @@ import type { getAthleteHistory } from "@/lib/data/athlete-history";
 import type { listAthleteResults } from "@/lib/data/athlete-results";
 import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
 import type { listSessionAudit } from "@/lib/data/audit";
+import type { getMyProgress } from "@/lib/data/my-progress";
+import type { getPublishCheck } from "@/lib/data/publish-mail";
 import type { getReliabilityFromFile, getReliabilityReport } from "@/lib/data/reliability";
 import type { getChangeReport, getSavedReport, listSavedReports } from "@/lib/data/reports";
 import type { getSessionSheet, listSessions } from "@/lib/data/sessions";
@@ -96,6 +98,12 @@ export const athleteQueries = {
       queryKey: [...queryKeys.athletes, athleteId, "history"] as const,
       queryFn: () => fetchJson<Loaded<typeof getAthleteHistory>>(`/api/athletes/${athleteId}/history`),
     }),
+  /** My progress: the signed-in athlete's own tests over their published sessions. */
+  myProgress: () =>
+    queryOptions({
+      queryKey: [...queryKeys.athletes, "me", "progress"] as const,
+      queryFn: () => fetchJson<Loaded<typeof getMyProgress>>("/api/me/progress"),
+    }),
 };
 
 export const testQueries = {
@@ -120,6 +128,12 @@ export const sessionQueries = {
     queryOptions({
       queryKey: [...queryKeys.sessions, sessionId] as const,
       queryFn: () => fetchJson<Loaded<typeof getSessionSheet>>(`/api/sessions/${sessionId}`),
+    }),
+  /** Read by the publish dialog when it opens: who will see the results and get mail, and why not. */
+  publishCheck: (sessionId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.sessions, sessionId, "publish-check"] as const,
+      queryFn: () => fetchJson<Loaded<typeof getPublishCheck>>(`/api/sessions/${sessionId}/publish-check`),
     }),
   audit: (sessionId: number) =>
     queryOptions({
@@ -198,6 +212,8 @@ export type SheetTest = SheetData["tests"][number];
 export type ResultRow = SheetData["results"][number];
 export type AuditEvent = Loaded<typeof listSessionAudit>[number];
 export type AthleteHistoryData = Loaded<typeof getAthleteHistory>;
+export type MyProgressData = Loaded<typeof getMyProgress>;
+export type PublishCheckData = Loaded<typeof getPublishCheck>;
 export type WorkToDo = Loaded<typeof getWorkToDo>;
 export type ChangeReportData = Loaded<typeof getChangeReport>;
 export type ReliabilityData = Loaded<typeof getReliabilityReport>;

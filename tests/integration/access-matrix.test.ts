@@ -77,6 +77,12 @@ const route = (path: string) => import(/* @vite-ignore */ `@/app/api${path}/rout
 //                                                anon owner sci coach coach2 self other otherOrg
 const MATRIX: Record<string, Entry> = {
   "GET /api/me": { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
+  // Athletes only, each about themself: no id to aim with, so nobody can ask about another.
+  "GET /api/me/progress": { expect: [401, 403, 403, 403, 403, 200, 200, 403], request: () => ({}) },
+  "GET /api/me/export": {
+    expect: [401, 403, 403, 403, 403, 200, 200, 403],
+    request: () => ({ url: "http://test.local/api/me/export?format=json" }),
+  },
   "GET /api/squads": { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
   "POST /api/squads": {
     expect: [401, 201, 403, 403, 403, 403, 403, 201],
@@ -184,6 +190,11 @@ const MATRIX: Record<string, Entry> = {
         params: { sessionId: `${t.session}` },
         body: sheetWrite(t),
       }),
+    request: (t) => ({ params: { sessionId: `${t.session}` } }),
+  },
+  "GET /api/sessions/[sessionId]/publish-check": {
+    expect: [401, 200, 200, 403, 403, 403, 403, 404],
+    aimed: true,
     request: (t) => ({ params: { sessionId: `${t.session}` } }),
   },
   "GET /api/sessions/[sessionId]/audit": {
