@@ -7,7 +7,9 @@ import { FormAlert } from "@/components/form-bits";
 import { useUpdateSession } from "@/hooks/use-writes";
 import { sessionQueries } from "@/lib/client/queries";
 import type { SessionStatus } from "@/lib/domain";
+import { formatValue } from "@/lib/labels";
 import { CONSENT_MISSING_WORDS } from "@/lib/words/progress";
+import { suspectSentence } from "@/lib/words/suspect";
 
 /**
  * Owner and scientist: publish a session to its athletes, or take it back to draft.
@@ -117,6 +119,38 @@ function Audience({ sessionId }: { sessionId: number }) {
           Published before: only athletes whose results changed since then get a mail, saying their results were
           updated.
         </p>
+      )}
+      {data.suspects.length > 0 && (
+        <div>
+          <p className="font-semibold">
+            <span className="num">{data.suspects.length}</span>{" "}
+            {data.suspects.length === 1 ? "score looks mistyped" : "scores look mistyped"} — check before publishing:
+          </p>
+          <ul className="list-disc pl-5">
+            {data.suspects.map((s) => (
+              <li key={`${s.athleteId}-${s.testId}-${s.trial}`}>
+                {s.athleteName}, {s.test.name}
+                {s.test.trialsPerSession > 1 ? ` trial ${s.trial}` : ""}:{" "}
+                <span className="num">
+                  {formatValue(s.value, s.test.decimals)} {s.test.unit}
+                </span>{" "}
+                — {suspectSentence(s.reasons, s.test)}
+              </li>
+            ))}
+          </ul>
+        </div>
+      )}
+      {data.missing.length > 0 && (
+        <div>
+          <p className="font-semibold">Missing scores (no score and no flag):</p>
+          <ul className="list-disc pl-5">
+            {data.missing.map((a) => (
+              <li key={a.athleteId}>
+                {a.name}: {a.tests.join(", ")}
+              </li>
+            ))}
+          </ul>
+        </div>
       )}
       {withheld.length > 0 && (
         <div>

@@ -14,6 +14,7 @@ import { changeNote, scoreWords } from "@/lib/words/progress";
 import type { Actor } from "./actors";
 import { queueMail } from "./mail";
 import { findSessionInScope } from "./scope";
+import { scoreCheck } from "./score-check";
 
 export type PublishSession = { id: number; date: string; phase: Phase; publishedAt: Date | null };
 
@@ -60,14 +61,19 @@ export async function getPublishCheck(actor: Actor, sessionId: number) {
   const db = getDb();
   const session = await findSessionInScope(db, actor, sessionId, {
     id: testingSessions.id,
+    squadId: testingSessions.squadId,
     date: testingSessions.date,
     phase: testingSessions.phase,
     status: testingSessions.status,
     publishedAt: testingSessions.publishedAt,
   });
   const onDate = todayIso();
-  const audience = await publishAudience(db, actor, session, onDate);
+  const [audience, scores] = await Promise.all([
+    publishAudience(db, actor, session, onDate),
+    scoreCheck(db, actor, session),
+  ]);
   return {
+    ...scores,
     status: session.status,
     republishing: session.publishedAt !== null,
     onDate,

@@ -111,3 +111,26 @@ describe("import", () => {
     expect(committed.json.suspects).toEqual(preview.json.suspects);
   });
 });
+
+describe("GET /api/sessions/[id]/publish-check", () => {
+  it("lists the suspect scores and the missing cells by athlete, with names", async () => {
+    await signInAs("scientist@example.com");
+    const check = await import("@/app/api/sessions/[sessionId]/publish-check/route");
+    const { status, json } = await call(check.GET, { params: { sessionId: String(ids.session) } });
+    expect(status).toBe(200);
+    expect(json.suspects).toEqual([
+      expect.objectContaining({
+        athleteName: "Maren Oduya",
+        trial: 1,
+        value: 3.85,
+        test: expect.objectContaining({ name: "Countermovement jump", unit: "cm" }),
+      }),
+    ]);
+    const squadSize = (await env.db.select({ id: athletes.id }).from(athletes)).length;
+    expect(json.missing.length).toBeGreaterThan(10);
+    expect(json.missing.length).toBeLessThan(squadSize);
+    // Maren has a CMJ; her sprint is flagged "injured" — a flag is an answer, so nothing of hers is missing.
+    expect(json.missing.find((a: { name: string }) => a.name === "Maren Oduya")).toBeUndefined();
+    expect(json.missing[0].tests).toEqual(["10 m sprint", "Countermovement jump"]);
+  });
+});
