@@ -55,6 +55,15 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
               {STATUS_LABELS[session.status]}
             </span>{" "}
             · <span className="num">{filled}</span> of <span className="num">{expected}</span> results
+            {sheet.waiting > 0 && (
+              <>
+                {" "}
+                ·{" "}
+                <span className="rounded border border-dashed border-ink-soft px-1.5 py-0.5 text-sm font-semibold">
+                  {sheet.waiting} waiting to send
+                </span>
+              </>
+            )}
             {suspectCount > 0 && (
               <>
                 {" "}
@@ -153,6 +162,8 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
           ` ${refused} cell${refused === 1 ? " holds" : "s hold"} text that is not a number and ${refused === 1 ? "was" : "were"} not saved.`}
         {unsaved > 0 && ` ${unsaved} result${unsaved === 1 ? " needs" : "s need"} your attention below.`}
         {news && ` ${news}`}
+        {sheet.waiting > 0 &&
+          ` No connection: ${sheet.waiting} ${sheet.waiting === 1 ? "result is" : "results are"} kept in this browser and will be sent when the network is back.`}
       </p>
 
       <SheetGrid
