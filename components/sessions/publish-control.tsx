@@ -124,7 +124,7 @@ function Audience({ sessionId }: { sessionId: number }) {
         <div>
           <p className="font-semibold">
             <span className="num">{data.suspects.length}</span>{" "}
-            {data.suspects.length === 1 ? "score looks mistyped" : "scores look mistyped"} — check before publishing:
+            {data.suspects.length === 1 ? "score to double-check" : "scores to double-check"} before publishing:
           </p>
           <ul className="list-disc pl-5">
             {data.suspects.map((s) => (

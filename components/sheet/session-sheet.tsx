@@ -69,7 +69,7 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
                 {" "}
                 ·{" "}
                 <span className="rounded border border-dashed border-decline px-1.5 py-0.5 text-sm font-semibold">
-                  {suspectCount} {suspectCount === 1 ? "score" : "scores"} to check
+                  {suspectCount} {suspectCount === 1 ? "score" : "scores"} to double-check
                 </span>
               </>
             )}
@@ -107,12 +107,18 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
         </div>
       </div>
 
-      <p className="text-xs text-ink-faint">
-        <span aria-hidden>⚠︎ </span>
-        Maximal tests (sprints, jumps, 1RM, intermittent runs) carry injury risk: screen athletes, warm up, and test
-        under qualified supervision, following your organisation&apos;s and governing body&apos;s protocols. Scores
-        support training decisions; they are not a medical or return-to-play judgement.
-      </p>
+      {/* Once per sheet, folded: the whole caution is one click away, not a paragraph above every sheet. */}
+      <details className="text-xs text-ink-soft">
+        <summary className="w-fit cursor-pointer font-semibold">
+          <span aria-hidden>⚠︎ </span>Maximal tests carry injury risk — read before testing
+        </summary>
+        <p className="mt-1 max-w-3xl">
+          Sprints, jumps, 1RM lifts and intermittent runs are maximal efforts: screen athletes, warm up, and test under
+          qualified supervision, following your organisation&apos;s and governing body&apos;s protocols. Scores support
+          training decisions; they are not a medical or return-to-play judgement — defer to your medical staff and
+          licensed practitioners.
+        </p>
+      </details>
 
       {data.canEdit && session.status === "published" && (
         <p role="note" className="rounded-md border border-ink bg-band px-3 py-2 text-sm">

@@ -26,7 +26,7 @@ export function SuspectNotes({ suspects, tests }: { suspects: Suspect[]; tests: 
               ?
             </span>
             <strong>
-              Check {test.name}
+              Double-check {test.name}
               {test.trialsPerSession > 1 ? `, trial ${s.trial}` : ""}: {formatValue(s.value, test.decimals)} {test.unit}
             </strong>{" "}
             — {suspectSentence(s.reasons, test)}. Saved; correct it if it is a typo.

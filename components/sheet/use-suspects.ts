@@ -43,7 +43,7 @@ export function useSuspects(data: SheetData, shownFor: (athleteId: number, testI
       fresh
         .map((s) => {
           const test = data.tests.find((t) => t.id === s.testId)!;
-          return `Check ${name(s.athleteId)}, ${test.name} trial ${s.trial}: ${formatValue(s.value, test.decimals)} ${test.unit} is ${suspectSentence(s.reasons, test)}.`;
+          return `Double-check ${name(s.athleteId)}, ${test.name} trial ${s.trial}: ${formatValue(s.value, test.decimals)} ${test.unit} is ${suspectSentence(s.reasons, test)}.`;
         })
         .join(" "),
     );

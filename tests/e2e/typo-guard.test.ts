@@ -41,12 +41,14 @@ describe("typo guard on the Session sheet", () => {
     await page.keyboard.type("17.60");
     await expect.poll(() => cell.inputValue()).toBe("17.60");
     await cell.press("Tab");
-    await page.getByText("1 score to check").waitFor();
-    const note = page.locator("li", { hasText: /Check 10 m sprint, trial 1: 17\.60 s/ });
+    await page.getByText("1 score to double-check").waitFor();
+    const note = page.locator("li", { hasText: /Double-check 10 m sprint, trial 1: 17\.60 s/ });
     await note.waitFor();
     expect(await note.textContent()).toMatch(/outside the plausible range 1\.5–2\.6 s/);
     // The live region says it too, and the cell points at the note for screen readers.
-    await expect.poll(() => page.locator("[aria-live=polite]").first().textContent()).toMatch(/Check Maren Oduya/);
+    await expect
+      .poll(() => page.locator("[aria-live=polite]").first().textContent())
+      .toMatch(/Double-check Maren Oduya/);
     const describedBy = await cell.getAttribute("aria-describedby");
     expect(await page.locator(`#${describedBy}`).textContent()).toMatch(/outside the plausible range/);
     await screenshot(page, "typo-guard-tablet");
@@ -58,7 +60,7 @@ describe("typo guard on the Session sheet", () => {
     await page.keyboard.type("1.76");
     expect(await cell.inputValue()).toBe("1.76");
     await cell.press("Tab");
-    await expect.poll(() => page.getByText("1 score to check").count()).toBe(0);
+    await expect.poll(() => page.getByText("1 score to double-check").count()).toBe(0);
     await page.close();
   });
 });
