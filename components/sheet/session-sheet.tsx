@@ -9,6 +9,7 @@ import { PublishControl } from "@/components/sessions/publish-control";
 import { SessionEditForm } from "@/components/sessions/session-edit-form";
 import { useSessionSheet } from "@/hooks/use-session-sheet";
 import { formatDate, PHASE_LABELS, STATUS_LABELS } from "@/lib/labels";
+import { MissingScores } from "./missing-scores";
 import { RecentChanges } from "./recent-changes";
 import { SheetGrid } from "./sheet-grid";
 import { UndoButton } from "./undo-button";
@@ -171,6 +172,8 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
         {sheet.waiting > 0 &&
           ` No connection: ${sheet.waiting} ${sheet.waiting === 1 ? "result is" : "results are"} kept in this browser and will be sent when the network is back.`}
       </p>
+
+      <MissingScores data={data} shownFor={sheet.shownFor} />
 
       <SheetGrid
         data={data}

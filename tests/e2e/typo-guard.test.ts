@@ -37,11 +37,18 @@ describe("typo guard on the Session sheet", () => {
     await signInThroughForm(page, baseUrl, "coach2@example.com");
     await page.goto(`${baseUrl}/sessions/${sessionId}`);
     const cell = page.getByLabel("Maren Oduya, 10 m sprint, trial 1", { exact: true });
+    // Every athlete's sprint is missing, and the sheet says so by name.
+    const missing = page.locator("summary", { hasText: /scores? missing/ });
+    const before = Number((await missing.textContent())?.match(/^(\d+)/)?.[1]);
+    expect(before).toBeGreaterThan(10);
+    await missing.click();
+    await page.getByText("Maren Oduya", { exact: true }).first().waitFor();
     await cell.click();
     await page.keyboard.type("17.60");
     await expect.poll(() => cell.inputValue()).toBe("17.60");
     await cell.press("Tab");
     await page.getByText("1 score to double-check").waitFor();
+    await expect.poll(async () => Number((await missing.textContent())?.match(/^(\d+)/)?.[1])).toBe(before - 1);
     const note = page.locator("li", { hasText: /Double-check 10 m sprint, trial 1: 17\.60 s/ });
     await note.waitFor();
     expect(await note.textContent()).toMatch(/outside the plausible range 1\.5–2\.6 s/);
