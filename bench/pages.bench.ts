@@ -61,7 +61,7 @@ const median = (values: number[]) => {
 
 export default async function pages(): Promise<BenchResult[]> {
   // Before the build, so a machine without a browser learns it at once.
-  const executablePath = ensureChromium();
+  const executablePath = ensureChromium("npm run bench");
   const server = await startProductionServer();
   const browser = await chromium.launch({
     executablePath,

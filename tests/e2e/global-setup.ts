@@ -16,7 +16,7 @@ declare module "vitest" {
  */
 export default async function setup(project: TestProject) {
   try {
-    ensureChromium();
+    ensureChromium("npm test");
   } catch (error) {
     if (!(error instanceof ChromiumUnavailable)) throw error;
     // A thrown error here reaches the reader wrapped in vitest's "no test files found" and its

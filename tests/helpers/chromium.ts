@@ -14,6 +14,8 @@ export const DEBIAN_CHROMIUM = "/usr/bin/chromium";
 export const chromiumPath = (env: NodeJS.ProcessEnv = process.env) => env.CHROMIUM_PATH || DEBIAN_CHROMIUM;
 
 export type ChromiumProbe = {
+  /** The command that needs the browser, named in what a person reads: "npm test". */
+  command: string;
   chosen: string | undefined;
   /** The binary is there and `--version` answers. */
   starts: (path: string) => boolean;
@@ -25,7 +27,7 @@ export type ChromiumProbe = {
 export type ChromiumPlan = { use: string } | { install: string } | { stop: string };
 
 /** What to do about the browser, decided from what the machine has. Pure, so each case is tested. */
-export function planChromium({ chosen, starts, exists, isRoot, hasAptGet }: ChromiumProbe): ChromiumPlan {
+export function planChromium({ command, chosen, starts, exists, isRoot, hasAptGet }: ChromiumProbe): ChromiumPlan {
   if (chosen) {
     if (starts(chosen)) return { use: chosen };
     // An explicit choice that does not work is a mistake to report, not one to paper over with another browser.
@@ -43,8 +45,10 @@ export function planChromium({ chosen, starts, exists, isRoot, hasAptGet }: Chro
   const how = hasAptGet
     ? "install Debian's chromium package (`sudo apt-get install chromium`)"
     : "install Chromium with your system's package manager and set CHROMIUM_PATH to its binary";
+  const without =
+    command === "npm test" ? " (`npm test -- --project unit` runs the other tests without a browser)" : "";
   return {
-    stop: `The browser tests need Chromium, which is not at ${DEBIAN_CHROMIUM}: ${how}, then run npm test again (\`npm test -- --project unit\` runs the other tests without a browser).`,
+    stop: `${command} needs Chromium, which is not at ${DEBIAN_CHROMIUM}: ${how}, then run ${command} again${without}.`,
   };
 }
 
@@ -69,9 +73,9 @@ function aptGet(args: string[]) {
 }
 
 /** Installs Debian's chromium package, saying so and letting apt-get show its progress. */
-function installChromium(log: (line: string) => void) {
+function installChromium(command: string, log: (line: string) => void) {
   log(
-    "\n▸ Chromium is not installed, and the browser tests need it: installing Debian's chromium package with apt-get (once; about 100 MB to download).\n",
+    `\n▸ Chromium is not installed, and ${command} needs it: installing Debian's chromium package with apt-get (once; about 100 MB to download).\n`,
   );
   const started = Date.now();
   // Wait a little for another apt run (an unattended upgrade) instead of failing on its lock.
@@ -82,15 +86,16 @@ function installChromium(log: (line: string) => void) {
   const install = update === 0 ? aptGet([...lock, "install", "-y", "--no-install-recommends", "chromium"]) : update;
   if (install !== 0 || !starts(DEBIAN_CHROMIUM)) {
     throw new ChromiumUnavailable(
-      `Installing Debian's chromium package failed (apt-get exited with ${install}, see above): install it by hand with \`apt-get install chromium\`, or set CHROMIUM_PATH to a Chromium binary, then run npm test again.`,
+      `Installing Debian's chromium package failed (apt-get exited with ${install}, see above): install it by hand with \`apt-get install chromium\`, or set CHROMIUM_PATH to a Chromium binary, then run ${command} again.`,
     );
   }
   log(`\n▸ Chromium installed in ${Math.round((Date.now() - started) / 1000)} s.\n`);
 }
 
 /** The path of a Chromium that starts, installing Debian's package first when that is allowed. */
-export function ensureChromium(log: (line: string) => void = console.log): string {
+export function ensureChromium(command: string, log: (line: string) => void = console.log): string {
   const plan = planChromium({
+    command,
     chosen: process.env.CHROMIUM_PATH,
     starts,
     exists: existsSync,
@@ -98,6 +103,6 @@ export function ensureChromium(log: (line: string) => void = console.log): strin
     hasAptGet: hasAptGet(),
   });
   if ("stop" in plan) throw new ChromiumUnavailable(plan.stop);
-  if ("install" in plan) installChromium(log);
+  if ("install" in plan) installChromium(command, log);
   return "use" in plan ? plan.use : plan.install;
 }

@@ -6,6 +6,7 @@ const machine = (over: Partial<ChromiumProbe> & { working?: string[]; present?: 
   const working = over.working ?? [];
   const present = [...working, ...(over.present ?? [])];
   return {
+    command: "npm test",
     chosen: undefined,
     starts: (path) => working.includes(path),
     exists: (path) => present.includes(path),
@@ -45,9 +46,10 @@ describe("finding Chromium for the browser tests", () => {
   });
 
   it("otherwise stops with one sentence that says what to install", () => {
-    expect(expectOneSentence(planChromium(machine({ isRoot: false, hasAptGet: true })))).toContain(
-      "sudo apt-get install chromium",
-    );
+    const tests = expectOneSentence(planChromium(machine({ isRoot: false, hasAptGet: true })));
+    expect(tests).toMatch(/^npm test needs Chromium, .*sudo apt-get install chromium.*npm test -- --project unit/);
+    const shots = expectOneSentence(planChromium(machine({ command: "npm run screenshots" })));
+    expect(shots).toMatch(/^npm run screenshots needs Chromium, .*then run npm run screenshots again\.$/);
     expect(expectOneSentence(planChromium(machine({ isRoot: true, hasAptGet: false })))).toContain("set CHROMIUM_PATH");
   });
 
