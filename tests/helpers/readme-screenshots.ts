@@ -73,19 +73,36 @@ export async function takeReadmeScreenshots(baseUrl: string, dir = README_SCREEN
     await staff.locator("table tbody tr").first().waitFor();
     await snap(staff, "session-sheet");
 
-    // A preview only: the picture shows the check, and the demo keeps its two gaps for a reader to fill.
-    await staff.goto(`${baseUrl}/sessions/${seniorPost}/import`);
-    await staff.getByRole("heading", { name: "Import", exact: true }).waitFor();
-    await staff.locator('input[type="file"]').setInputFiles("examples/senior-post-block-catch-up.csv");
-    await staff.getByRole("button", { name: /^Import \d+ results?$/ }).waitFor();
-    await snap(staff, "import");
-
-    // A test with a typical error, so every athlete has an interval and a verdict; the picture ends
-    // where the table of athletes begins, with the squad result and both charts in it.
+    // The README's timing-gate example, previewed in the new session the README has the reader create.
     const tests = (await (await staff.request.get(`${baseUrl}/api/tests`)).json()) as {
       tests: { id: number; name: string }[];
     };
     const testOf = (name: string) => tests.tests.find((t) => t.name === name)!.id;
+    const squads = (await (await staff.request.get(`${baseUrl}/api/squads`)).json()) as {
+      squads: { id: number; name: string }[];
+    };
+    const created = await staff.request.post(`${baseUrl}/api/sessions`, {
+      data: {
+        squadId: squads.squads.find((s) => s.name === "Academy U18")!.id,
+        date: "2026-11-30",
+        phase: "in-season",
+        testIds: [testOf("10 m sprint"), testOf("30 m sprint")],
+      },
+    });
+    if (created.status() !== 201) throw new Error(`Creating the in-season session answered ${created.status()}`);
+    const speed = ((await created.json()) as { session: { id: number } }).session.id;
+    await staff.goto(`${baseUrl}/sessions/${speed}/import`);
+    await staff.locator('input[type="file"]').setInputFiles("examples/academy-speed-gates.csv");
+    await staff.getByRole("button", { name: "Import 24 results" }).waitFor();
+    await snap(staff, "import");
+
+    await staff.goto(`${baseUrl}/sessions/${sessionOf(sessions, "Academy U18", "post-block")}/import`);
+    await staff.locator('input[type="file"]').setInputFiles("examples/academy-post-block-catch-up-misspelt.csv");
+    await staff.getByRole("heading", { name: /problems to fix before importing/ }).waitFor();
+    await snap(staff, "import-problems", { above: staff.getByText(/^The first \d+ of \d+ rows as written/) });
+
+    // A test with a typical error, so every athlete has an interval and a verdict; the picture ends
+    // where the table of athletes begins, with the squad result and both charts in it.
     const seniorPre = sessionOf(sessions, "Senior Women", "pre-block");
     await staff.goto(
       `${baseUrl}/reports/change?testId=${testOf("30 m sprint")}&fromSessionId=${seniorPre}&toSessionId=${seniorPost}&confidence=0.9`,
