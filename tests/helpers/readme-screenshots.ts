@@ -69,9 +69,12 @@ export async function takeReadmeScreenshots(baseUrl: string, dir = README_SCREEN
     await snap(staff, "test-library");
 
     const seniorPost = sessionOf(sessions, "Senior Women", "post-block");
+    // Tall enough to show Femi Castellane's empty row, which examples/senior-post-block-catch-up.csv fills.
+    await staff.setViewportSize({ width: DESK.width, height: 900 });
     await staff.goto(`${baseUrl}/sessions/${seniorPost}`);
     await staff.locator("table tbody tr").first().waitFor();
     await snap(staff, "session-sheet");
+    await staff.setViewportSize(DESK);
 
     // The README's timing-gate example, previewed in the new session the README has the reader create.
     const tests = (await (await staff.request.get(`${baseUrl}/api/tests`)).json()) as {
