@@ -8,6 +8,7 @@
  *   what must arrive before it is usable (its charts load lazily after; the total is in the detail).
  */
 import { chromium, type Page } from "playwright-core";
+import { ensureChromium } from "../tests/helpers/chromium";
 import { startProductionServer } from "../tests/helpers/server";
 import type { BenchResult } from "./harness";
 
@@ -59,9 +60,11 @@ const median = (values: number[]) => {
 };
 
 export default async function pages(): Promise<BenchResult[]> {
+  // Before the build, so a machine without a browser learns it at once.
+  const executablePath = ensureChromium("npm run bench");
   const server = await startProductionServer();
   const browser = await chromium.launch({
-    executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
+    executablePath,
     args: [
       "--no-sandbox",
       "--disable-gpu",

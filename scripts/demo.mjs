@@ -64,8 +64,12 @@ server.stdout.on("data", (chunk) => {
     owner@example.com         owner, Northfield Harriers & Rovers Performance Unit
     scientist@example.com     sport scientist
     coach@example.com         coach of the Academy U18 squad only
+    coach2@example.com        coach of the Senior Women squad only
     athlete@example.com       athlete (Tessa Lindqvist, Senior Women)
+    athlete2@example.com      athlete (Priya Damaschke, Senior Women)
     owner@other.example.com   owner of a separate organisation (Kestrel Bay Rowing Academy)
+
+  What to try with each, and which file in examples/ to import: README.md, "Try it".
 `);
   }
 });

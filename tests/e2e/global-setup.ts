@@ -1,4 +1,5 @@
 import type { TestProject } from "vitest/node";
+import { ChromiumUnavailable, ensureChromium } from "../helpers/chromium";
 import { startProductionServer } from "../helpers/server";
 
 declare module "vitest" {
@@ -9,8 +10,20 @@ declare module "vitest" {
   }
 }
 
-/** Serves the production build (rebuilt when older than the code) on a fresh seeded database. */
+/**
+ * Finds (or installs) Chromium, then serves the production build (rebuilt when older than the
+ * code) on a fresh seeded database.
+ */
 export default async function setup(project: TestProject) {
+  try {
+    ensureChromium("npm test");
+  } catch (error) {
+    if (!(error instanceof ChromiumUnavailable)) throw error;
+    // A thrown error here reaches the reader wrapped in vitest's "no test files found" and its
+    // include lists; one sentence and a failed exit, before any test has started, says it plainly.
+    console.error(`\n${error.message}\n`);
+    process.exit(1);
+  }
   const server = await startProductionServer();
   project.provide("baseUrl", server.baseUrl);
   project.provide("databaseUrl", server.databaseUrl);

@@ -2,14 +2,18 @@ import { mkdirSync, mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { type BrowserContext, chromium, type Page } from "playwright-core";
+import { chromiumPath } from "./chromium";
 
 export const ARTIFACTS = "tests/.artifacts";
 
-/** Debian's Chromium, headless, with a fresh profile and no background traffic. */
+/**
+ * Debian's Chromium (or `CHROMIUM_PATH`), headless, with a fresh profile and no background
+ * traffic. The e2e global setup has made sure it is there (tests/helpers/chromium.ts).
+ */
 export async function openBrowser(): Promise<{ context: BrowserContext; close: () => Promise<void> }> {
   const profile = mkdtempSync(join(tmpdir(), "changewise-chromium-"));
   const context = await chromium.launchPersistentContext(profile, {
-    executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium",
+    executablePath: chromiumPath(),
     headless: true,
     viewport: { width: 1180, height: 820 },
     args: [
