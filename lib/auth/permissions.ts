@@ -43,6 +43,15 @@ export const canEditTestLibrary = isManager;
 /** The Reliability check measures a test's noise and may change the Test library's typical error. */
 export const canRunReliability = isManager;
 
+/** Members, roles, invitations and the mail outbox: the organisation's owner (PRODUCT.md §2). */
+export const canManagePeople = isOwner;
+
+/** Deleting an athlete and every trace of them, e.g. on their request: the owner. */
+export const canDeleteAthlete = isOwner;
+
+/** Asking the organisation to delete one's own record: athletes, about themselves. */
+export const canRequestDeletion = isAthlete;
+
 const rolesWhere = (rule: (who: RoleHolder) => boolean): readonly Role[] => ROLES.filter((role) => rule({ role }));
 
 // The role lists `guard({ roles })` takes, derived from the rules above so the two cannot drift.
@@ -50,3 +59,6 @@ export const STAFF = rolesWhere(isStaff);
 export const MANAGERS = rolesWhere(isManager);
 export const OWNERS = rolesWhere(isOwner);
 export const RELIABILITY_ROLES = rolesWhere(canRunReliability);
+export const PEOPLE_ROLES = rolesWhere(canManagePeople);
+export const DELETION_ROLES = rolesWhere(canDeleteAthlete);
+export const DELETION_REQUEST_ROLES = rolesWhere(canRequestDeletion);
