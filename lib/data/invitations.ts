@@ -5,7 +5,7 @@
  */
 import "server-only";
 import { and, asc, desc, eq, gt, isNull, lte, notInArray, sql } from "drizzle-orm";
-import { getDb, type Transaction, writeTransaction } from "@/db/client";
+import { getDb, type Reader, type Transaction, writeTransaction } from "@/db/client";
 import { athletes, invitations, memberships, organizations, users } from "@/db/schema";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
 import { hashToken, newToken } from "@/lib/auth/tokens";
@@ -304,31 +304,39 @@ export async function previewInvitation(token: string, now = Date.now()) {
 
 export type InvitationPreview = Awaited<ReturnType<typeof previewInvitation>>;
 
+/** The invitation a token opens, if it still works; otherwise the reason it does not. */
+async function openInvitation(reader: Reader, token: string, now: Date) {
+  const [invitation] = await reader
+    .select({
+      id: invitations.id,
+      organizationId: invitations.organizationId,
+      organizationName: organizations.name,
+      email: invitations.email,
+      role: invitations.role,
+      athleteId: invitations.athleteId,
+      expiresAt: invitations.expiresAt,
+      acceptedAt: invitations.acceptedAt,
+    })
+    .from(invitations)
+    .innerJoin(organizations, eq(organizations.id, invitations.organizationId))
+    .where(eq(invitations.tokenHash, hashToken(token)));
+  if (!invitation || invitation.acceptedAt) throw SPENT();
+  if (invitation.expiresAt.getTime() <= now.getTime()) throw EXPIRED();
+  return invitation;
+}
+
 /**
  * Accepts an invitation: creates the account (or, for an address that already signs in elsewhere,
  * checks its password), the membership, and for an athlete the link to their record; the token is
  * spent in the same transaction. Returns the address to sign in with.
  */
 export async function acceptInvitation(input: InvitationAcceptInput, now = new Date()) {
+  // Checked before the (deliberately slow) hashing, so a dead link costs the server nothing.
+  await openInvitation(getDb(), input.token, now);
   const passwordHash = await hashPassword(input.password);
   try {
     return await writeTransaction(async (tx) => {
-      const [invitation] = await tx
-        .select({
-          id: invitations.id,
-          organizationId: invitations.organizationId,
-          organizationName: organizations.name,
-          email: invitations.email,
-          role: invitations.role,
-          athleteId: invitations.athleteId,
-          expiresAt: invitations.expiresAt,
-          acceptedAt: invitations.acceptedAt,
-        })
-        .from(invitations)
-        .innerJoin(organizations, eq(organizations.id, invitations.organizationId))
-        .where(eq(invitations.tokenHash, hashToken(input.token)));
-      if (!invitation || invitation.acceptedAt) throw SPENT();
-      if (invitation.expiresAt.getTime() <= now.getTime()) throw EXPIRED();
+      const invitation = await openInvitation(tx, input.token, now);
 
       const [existing] = await tx
         .select({ id: users.id, name: users.name, passwordHash: users.passwordHash })

@@ -80,6 +80,10 @@ export async function resetLinkState(token: string, now = new Date()): Promise<"
  * intruder may hold included). Returns the address to sign in with.
  */
 export async function confirmPasswordReset(input: PasswordResetConfirmInput, now = new Date()) {
+  // Checked before the (deliberately slow) hashing, so a dead link costs the server nothing.
+  const state = await resetLinkState(input.token, now);
+  if (state === "spent") throw LINK_SPENT();
+  if (state === "expired") throw LINK_EXPIRED();
   const passwordHash = await hashPassword(input.password);
   return writeTransaction(async (tx) => {
     const [row] = await tx

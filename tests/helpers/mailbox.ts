@@ -23,7 +23,10 @@ export async function openMailbox() {
     dir,
     /** Every message delivered so far, oldest first (after sending whatever is queued). */
     async messages() {
+      // A run already under way (started by a route) may have picked its batch before the
+      // latest mail was queued: wait for it, then run until nothing is left.
       await sendQueuedMail();
+      while ((await sendQueuedMail()) > 0);
       return read();
     },
     /** The newest message to this address. */
