@@ -27,3 +27,8 @@ export function formatDate(isoDate: string): string {
 export function formatValue(value: number | null | undefined, decimals: number): string {
   return value === null || value === undefined || !Number.isFinite(value) ? "–" : value.toFixed(decimals);
 }
+
+/** A moment (ms since 1970) as "2026-09-14 18:05 UTC": the same on the server and in any browser. */
+export function formatMoment(ms: number): string {
+  return `${new Date(ms).toISOString().slice(0, 16).replace("T", " ")} UTC`;
+}

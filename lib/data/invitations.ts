@@ -343,7 +343,8 @@ export async function acceptInvitation(input: InvitationAcceptInput, now = new D
         .from(users)
         .where(eq(users.email, invitation.email));
       let userId: number;
-      let name = input.name;
+      let name = input.name ?? "";
+      const nameNeeded = () => invalidInput("Enter your name.", { name: "Enter your name." });
       if (existing) {
         const orgs = await tx
           .select({ organizationId: memberships.organizationId })
@@ -360,6 +361,7 @@ export async function acceptInvitation(input: InvitationAcceptInput, now = new D
             });
           name = existing.name;
         } else {
+          if (!name) throw nameNeeded();
           // An account left over from an earlier membership: the invitee starts it afresh.
           await tx
             .update(users)
@@ -368,6 +370,7 @@ export async function acceptInvitation(input: InvitationAcceptInput, now = new D
         }
         userId = existing.id;
       } else {
+        if (!name) throw nameNeeded();
         const [created] = await tx
           .insert(users)
           .values({ email: invitation.email, name, passwordHash })

@@ -35,8 +35,14 @@ export const tokenSchema = z
   .string("The link is incomplete.")
   .regex(/^[A-Za-z0-9_-]{43}$/, "This link is not complete. Open it again from the mail.");
 
-/** What the invitee types on the accept page. */
-export const invitationAcceptFields = z.object({ name: requiredText(120, "Your name"), password: newPassword });
+/**
+ * What the invitee types on the accept page. The name is asked only of someone new to Changewise;
+ * a person who already signs in elsewhere keeps their name and confirms with their password.
+ */
+export const invitationAcceptFields = z.object({
+  name: requiredText(120, "Your name").optional(),
+  password: newPassword,
+});
 export const invitationAcceptSchema = invitationAcceptFields.extend({ token: tokenSchema });
 export type InvitationAcceptInput = z.infer<typeof invitationAcceptSchema>;
 
