@@ -61,9 +61,9 @@ function Captured({ messages, onRead }: { messages: OutboxData["messages"]; onRe
         <TableCard columns={columns}>
           {messages.map((m) => (
             <tr key={m.id} className="border-b border-line last:border-0 align-top">
-              <td className="px-3 py-2 break-all">{m.to}</td>
+              <td className="px-3 py-2 [overflow-wrap:anywhere]">{m.to}</td>
               <td className="px-3 py-2 font-semibold">{m.subject}</td>
-              <td className="px-3 py-2 num">{m.date ? formatMoment(Date.parse(m.date)) : "—"}</td>
+              <td className="px-3 py-2 num whitespace-nowrap">{m.date ? formatMoment(Date.parse(m.date)) : "—"}</td>
               <td className="px-3 py-2 text-right">
                 <button
                   type="button"
@@ -101,7 +101,7 @@ function Queue({ queue }: { queue: OutboxData["queue"] }) {
         <TableCard columns={columns}>
           {queue.map((m) => (
             <tr key={m.id} className="border-b border-line last:border-0 align-top">
-              <td className="px-3 py-2 break-all">{m.to}</td>
+              <td className="px-3 py-2 [overflow-wrap:anywhere]">{m.to}</td>
               <td className="px-3 py-2">{KIND_LABELS[m.kind]}</td>
               <td className="px-3 py-2">
                 <span className="font-semibold">{STATE_LABELS[m.state]}</span>
@@ -110,7 +110,7 @@ function Queue({ queue }: { queue: OutboxData["queue"] }) {
                 {m.lastError && <span className="block text-decline">Last error: {m.lastError}</span>}
               </td>
               <td className="px-3 py-2 text-right num">{m.attempts}</td>
-              <td className="px-3 py-2 num">{formatMoment(m.createdAt)}</td>
+              <td className="px-3 py-2 num whitespace-nowrap">{formatMoment(m.createdAt)}</td>
             </tr>
           ))}
         </TableCard>

@@ -48,7 +48,7 @@ function InvitationRow({ invitation, onNotice }: { invitation: InvitationItem; o
   const failed = (error: Error) => onNotice(`${invitation.email}: ${error.message}`);
   return (
     <tr className="border-b border-line last:border-0 align-top">
-      <td className="px-3 py-2 break-all font-semibold">{invitation.email}</td>
+      <td className="px-3 py-2 font-semibold [overflow-wrap:anywhere]">{invitation.email}</td>
       <td className="px-3 py-2">
         {ROLE_LABELS[invitation.role]}
         {invitation.athleteName && <span className="block text-ink-soft">for {invitation.athleteName}</span>}
@@ -91,7 +91,7 @@ function InvitationRow({ invitation, onNotice }: { invitation: InvitationItem; o
               type="button"
               className="btn-quiet px-2 py-1 text-xs"
               disabled={busy}
-              aria-label={`Send the invitation to ${invitation.email} again`}
+              aria-label={`Send again to ${invitation.email}`}
               onClick={() =>
                 resend.mutate(invitation.id, {
                   onSuccess: () =>

@@ -12,8 +12,7 @@ import { formatMoment } from "@/lib/labels";
 import { ROLE_LABELS } from "@/lib/nav";
 
 const COLUMNS: Column[] = [
-  { label: "Name" },
-  { label: "E-mail" },
+  { label: "Name and e-mail" },
   { label: "Role" },
   { label: "Squads or record" },
   { label: "Member since" },
@@ -35,8 +34,8 @@ export function MemberList({ members, onNotice }: { members: MemberItem[]; onNot
             <td className="px-3 py-2 font-semibold">
               {member.name}
               {member.isYou && <span className="font-normal text-ink-soft"> (you)</span>}
+              <span className="block font-normal text-ink-soft [overflow-wrap:anywhere]">{member.email}</span>
             </td>
-            <td className="px-3 py-2 break-all">{member.email}</td>
             <td className="px-3 py-2">
               <RoleControl member={member} onNotice={onNotice} />
             </td>
@@ -107,6 +106,7 @@ function RoleControl({ member, onNotice }: { member: MemberItem; onNotice: (mess
           </option>
         ))}
       </select>
+      {member.lastOwner && <span className="w-full text-xs text-ink-soft">The only owner keeps this role.</span>}
       {role !== member.role && (
         <button
           type="button"

@@ -8,6 +8,7 @@
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { openBrowser, screenshot, signInThroughForm } from "../helpers/browser";
+import { HttpSession } from "../helpers/http";
 import { linkIn, waitForMail } from "../helpers/outbox-files";
 
 const baseUrl = inject("baseUrl");
@@ -47,7 +48,7 @@ describe("people through the mail", () => {
     await dialog.getByRole("radio", { name: /^Coach/ }).check();
     await dialog.getByRole("button", { name: "Send the invitation" }).click();
     await page.getByText(`An invitation is on its way to ${NEWCOMER}`).waitFor();
-    await page.getByRole("cell", { name: NEWCOMER }).waitFor();
+    await page.getByRole("cell", { name: NEWCOMER, exact: true }).waitFor();
     await screenshot(page, "people-invited-1280");
 
     const mail = await waitForMail(outboxDir, NEWCOMER, /^Join .+ on Changewise$/);
@@ -78,13 +79,47 @@ describe("people through the mail", () => {
 
     // The owner sees the new member, and reads the mail on the Outbox page.
     await page.reload();
-    await page.getByRole("cell", { name: "Nadia Ferreira" }).waitFor();
+    await page.getByRole("cell", { name: "Nadia Ferreira", exact: true }).waitFor();
     await page.getByRole("link", { name: "Outbox" }).click();
     await page.getByRole("heading", { name: "Outbox", level: 1 }).waitFor();
     await page.getByRole("button", { name: new RegExp(`^Read “Join .+” to ${NEWCOMER}`) }).click();
     const message = page.getByRole("dialog", { name: "Message" });
     await message.getByText("as a coach", { exact: false }).waitFor();
     await screenshot(page, "outbox-message-1280");
+    await page.close();
+  });
+
+  it("an athlete's deletion request reaches the owner, whose confirmation counts what would go", async () => {
+    const athlete = new HttpSession(baseUrl);
+    await athlete.signIn("athlete2@example.com");
+    const asked = await athlete.json("/api/me/deletion-request", {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ message: "I am moving abroad; please remove my results." }),
+    });
+    expect(asked.status).toBe(201);
+    const mail = await waitForMail(outboxDir, "owner@example.com", /^Deletion request from Priya Damaschke$/);
+    expect(mail.text).toContain("I am moving abroad");
+
+    const page = await owner.context.newPage();
+    await page.setViewportSize({ width: 820, height: 1000 });
+    await page.goto(`${baseUrl}/people`);
+    await page.getByRole("heading", { name: /^Deletion requests/ }).waitFor();
+    await page.getByRole("button", { name: "Review and delete…" }).click();
+    const dialog = page.getByRole("dialog", { name: "Delete Priya Damaschke?" });
+    await dialog
+      .getByText(/result/)
+      .first()
+      .waitFor();
+    await expect.poll(() => dialog.getByText("This cannot be undone.").count()).toBe(1);
+    await screenshot(page, "people-deletion-dialog-820");
+    // Kept here: other browser tests sign in as this athlete.
+    await dialog.getByRole("button", { name: "Keep" }).click();
+    await page.getByRole("button", { name: "Invite someone" }).click();
+    const invite = page.getByRole("dialog", { name: "Invite someone" });
+    await invite.getByRole("radio", { name: /^Athlete/ }).check();
+    await invite.getByLabel("Athlete record").waitFor();
+    await screenshot(page, "people-invite-athlete-820");
     await page.close();
   });
 
