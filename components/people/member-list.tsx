@@ -12,7 +12,8 @@ import { formatMoment } from "@/lib/labels";
 import { ROLE_LABELS } from "@/lib/nav";
 
 const COLUMNS: Column[] = [
-  { label: "Name and e-mail" },
+  // Wide enough that an address breaks only when it must, on a tablet too.
+  { label: "Name and e-mail", className: "min-w-[13rem]" },
   { label: "Role" },
   { label: "Squads or record" },
   { label: "Member since" },

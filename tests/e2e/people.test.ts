@@ -79,7 +79,7 @@ describe("people through the mail", () => {
 
     // The owner sees the new member, and reads the mail on the Outbox page.
     await page.reload();
-    await page.getByRole("cell", { name: "Nadia Ferreira", exact: true }).waitFor();
+    await page.getByRole("button", { name: "Remove Nadia Ferreira" }).waitFor();
     await page.getByRole("link", { name: "Outbox" }).click();
     await page.getByRole("heading", { name: "Outbox", level: 1 }).waitFor();
     await page.getByRole("button", { name: new RegExp(`^Read “Join .+” to ${NEWCOMER}`) }).click();
@@ -118,7 +118,7 @@ describe("people through the mail", () => {
     await page.getByRole("button", { name: "Invite someone" }).click();
     const invite = page.getByRole("dialog", { name: "Invite someone" });
     await invite.getByRole("radio", { name: /^Athlete/ }).check();
-    await invite.getByLabel("Athlete record").waitFor();
+    await invite.getByLabel("Athlete record", { exact: true }).waitFor();
     await screenshot(page, "people-invite-athlete-820");
     await page.close();
   });
