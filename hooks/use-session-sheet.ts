@@ -102,6 +102,8 @@ export function useSessionSheet(sessionId: number) {
       entries.clear([trialKey(athleteId, testId, index)]),
     undo,
     busy: Object.values(cells).some((c) => c.status === "saving"),
+    /** Results typed while offline, kept in this browser until they can be sent. */
+    waiting: saver.waiting,
   };
 }
 

@@ -15,6 +15,7 @@ import {
   createSquadRequest,
   createTestRequest,
   deleteAthleteRequest,
+  deleteSessionRequest,
   deleteTestRequest,
   reliabilityFromFileRequest,
   removeMemberRequest,
@@ -81,6 +82,14 @@ export const useCreateSession = () =>
 export const useUpdateSession = () =>
   useWrite(
     ({ sessionId, input }: { sessionId: number; input: SessionUpdateInput }) => updateSessionRequest(sessionId, input),
+    SESSION_FAMILIES,
+  );
+
+/** A deleted draft leaves the Sessions list, the squads' latest sessions and What needs doing. */
+export const useDeleteSession = () =>
+  useWrite(
+    ({ sessionId, confirmedResults }: { sessionId: number; confirmedResults: number }) =>
+      deleteSessionRequest(sessionId, confirmedResults),
     SESSION_FAMILIES,
   );
 

@@ -40,6 +40,7 @@ export const AUDIT_ACTIONS = [
   "session.create",
   "session.update",
   "session.publish",
+  "session.delete",
   "result.create",
   "result.update",
   "result.undo",

@@ -25,6 +25,19 @@ const ATHLETE_ACCOUNTS: Record<string, string> = {
   "Priya Damaschke": "athlete2@example.com",
 };
 
+/** The day the club recorded consents (invented). */
+const CONSENT_DAY = "2026-08-20";
+
+/**
+ * Consent exceptions, so the publish dialog shows both cases in Senior Women: an adult whose
+ * consent is not recorded, and a 17-year-old (born 2009, in the senior squad) whose guardian's
+ * consent is not recorded. Everyone else has consent; minors have their guardian's as well.
+ */
+const CONSENT_GAPS: Record<string, { dateOfBirth?: string; consent: boolean; guardian: boolean }> = {
+  "Noor Balfour": { consent: false, guardian: false },
+  "Clío Nakashima": { dateOfBirth: "2009-05-12", consent: true, guardian: false },
+};
+
 type SessionPlan = {
   squad: "senior" | "academy";
   date: string;
@@ -155,8 +168,13 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
           sex,
           position: positions[i] ?? null,
           externalId: `${prefix}${String(i + 1).padStart(3, "0")}`,
-          dateOfBirth: `${birthYear + (i % 4)}-${String((i % 12) + 1).padStart(2, "0")}-${String(((i * 7) % 27) + 1).padStart(2, "0")}`,
+          dateOfBirth:
+            CONSENT_GAPS[name]?.dateOfBirth ??
+            `${birthYear + (i % 4)}-${String((i % 12) + 1).padStart(2, "0")}-${String(((i * 7) % 27) + 1).padStart(2, "0")}`,
           userId: ATHLETE_ACCOUNTS[name] ? userId(ATHLETE_ACCOUNTS[name]) : null,
+          consentRecordedOn: (CONSENT_GAPS[name]?.consent ?? true) ? CONSENT_DAY : null,
+          // Recorded for every athlete born 2008 or later, the ones under 18 at some point of the season.
+          guardianConsentOn: birthYear >= 2008 && (CONSENT_GAPS[name]?.guardian ?? true) ? CONSENT_DAY : null,
         })),
       )
       .returning({ id: s.athletes.id });

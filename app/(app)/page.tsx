@@ -5,7 +5,7 @@ import { SquadsOverview } from "@/components/squads-overview";
 import { pageGuard } from "@/lib/auth/page-guard";
 import { isAthlete } from "@/lib/auth/permissions";
 import { athleteQueries, squadQueries } from "@/lib/client/queries";
-import { listAthleteResults } from "@/lib/data/athlete-results";
+import { getMyProgress } from "@/lib/data/my-progress";
 import { listSquads } from "@/lib/data/squads";
 import { getWorkToDo } from "@/lib/data/work-to-do";
 import { prefetch, serverQueryClient } from "@/lib/query/prefetch";
@@ -17,11 +17,10 @@ export default async function HomePage() {
   const client = serverQueryClient();
   if (isAthlete(actor)) {
     const { athleteId } = actor;
-    if (athleteId)
-      await prefetch(client, athleteQueries.results(athleteId), () => listAthleteResults(actor, athleteId));
+    if (athleteId) await prefetch(client, athleteQueries.myProgress(), () => getMyProgress(actor));
     return (
       <HydrationBoundary state={dehydrate(client)}>
-        <AthleteHome athleteId={athleteId} name={actor.name} />
+        <AthleteHome linked={athleteId !== null} name={actor.name} />
       </HydrationBoundary>
     );
   }

@@ -22,6 +22,8 @@ type Test = AthleteHistoryData["tests"][number];
 const BASIS_WORDS: Record<SwcBasis, string> = {
   fixed: "Verdicts read each change against the test's fixed smallest worthwhile change.",
   cv: "Verdicts read each change against a smallest worthwhile change from the test's CV% and the athlete's previous score.",
+  squad:
+    "Verdicts read each change against the smallest worthwhile change from the squad's spread in the session it starts from.",
   "needs-squad":
     "No verdicts here: this test's smallest worthwhile change is a share of a squad's between-athlete SD, which one athlete's scores cannot give. The Change report reads it against the squad.",
   "no-cv": "No verdicts here: this test's smallest worthwhile change needs a CV%, and the Test library has none yet.",

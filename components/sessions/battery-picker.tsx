@@ -2,6 +2,7 @@
 
 import type { ReactNode } from "react";
 import type { SheetTest } from "@/lib/client/queries";
+import { trialRuleWords } from "@/lib/labels";
 
 type Choice = Pick<SheetTest, "id" | "name" | "unit" | "trialRule" | "trialsPerSession">;
 
@@ -45,7 +46,7 @@ export function BatteryPicker({
           <span className="text-ink-faint">
             {locked.has(t.id)
               ? "has scores"
-              : `${t.unit} · ${t.trialRule === "best" ? "best" : "mean"} of ${t.trialsPerSession}`}
+              : `${t.unit} · ${trialRuleWords(t.trialRule, t.trialsPerSession).toLowerCase()}`}
           </span>
         </label>
       ))}

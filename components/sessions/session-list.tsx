@@ -101,13 +101,14 @@ export function SessionList({ canPublish, initialSquadId }: { canPublish: boolea
                   {STATUS_LABELS[s.status]}
                 </span>
               </td>
-              <td className="px-3 py-2.5 text-ink-soft">
+              <td className="min-w-40 px-3 py-2.5 text-ink-soft">
                 {s.testIds.map((id) => testName.get(id) ?? `Test ${id}`).join(" · ")}
                 {s.notes && <div className="text-xs text-ink-faint">{s.notes}</div>}
               </td>
               <td className="num px-3 py-2.5 text-right">{s.resultCount}</td>
               <td className="px-3 py-2.5">
-                <div className="flex justify-end gap-1.5 whitespace-nowrap">
+                {/* Stacked on a tablet, so both buttons stay on screen beside the battery. */}
+                <div className="flex flex-col items-stretch gap-1.5 whitespace-nowrap xl:flex-row xl:justify-end">
                   <Link href={`/sessions/${s.id}`} className="btn-quiet px-2 py-1 text-xs">
                     Session sheet
                   </Link>

@@ -3,7 +3,12 @@
 import type { CellState } from "@/hooks/use-session-sheet";
 import { describeEntry, timeWords } from "@/lib/sheet/model";
 
-export type Issue = { testId: number; testName: string; state: Extract<CellState, { status: "failed" | "conflict" }> };
+export type Issue = {
+  testId: number;
+  testName: string;
+  decimals: number;
+  state: Extract<CellState, { status: "failed" | "conflict" }>;
+};
 
 /**
  * Under an athlete's row: what did not save and why, with the way out. A conflict says who
@@ -22,7 +27,7 @@ export function CellIssues({
 }) {
   return (
     <ul className="space-y-1.5">
-      {issues.map(({ testId, testName, state }) => (
+      {issues.map(({ testId, testName, decimals, state }) => (
         <li
           key={testId}
           role="alert"
@@ -34,16 +39,16 @@ export function CellIssues({
                 {athleteName} · {testName}:
               </strong>{" "}
               {state.current
-                ? `${state.current.updatedByName ?? "Someone else"} changed this at ${timeWords(state.current.updatedAt)} (now ${describeEntry(state.current)}).`
+                ? `${state.current.updatedByName ?? "Someone else"} changed this at ${timeWords(state.current.updatedAt)} (now ${describeEntry(state.current, decimals)}).`
                 : "Someone else removed this result."}{" "}
-              Yours: {describeEntry(state.wanted)}.
+              Yours: {describeEntry(state.wanted, decimals)}.
             </span>
           ) : (
             <span>
               <strong>
                 {athleteName} · {testName}:
               </strong>{" "}
-              not saved. {state.message} Yours: {describeEntry(state.wanted)}.
+              not saved. {state.message} Yours: {describeEntry(state.wanted, decimals)}.
             </span>
           )}
           <span className="flex gap-2">

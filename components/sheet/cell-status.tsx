@@ -20,6 +20,17 @@ export function CellStatus({
           <span className="h-2 w-2 animate-pulse rounded-full bg-ink-faint" />
         </span>
       );
+    case "waiting":
+      return (
+        <span
+          role="status"
+          aria-label={`Waiting to send ${label}: no connection`}
+          title="No connection: kept in this browser, sent when the network is back."
+          className="inline-flex h-5 w-5 items-center justify-center rounded-full border border-dashed border-ink-soft text-[11px] font-bold text-ink-soft"
+        >
+          ⋯
+        </span>
+      );
     case "saved":
       return (
         <span

@@ -27,7 +27,7 @@ function EventText({ e }: { e: AuditEvent }) {
       <span className="font-semibold">{e.actorName ?? "Someone"}</span> {ACTION_WORDS[e.action]}{" "}
       {e.athleteName ?? "an athlete"} · {e.testName ?? "a test"}:{" "}
       <span className={`num ${e.undone ? "line-through" : ""}`}>
-        {describeEntry(e.before)} → {describeEntry(e.after)}
+        {describeEntry(e.before, e.decimals)} → {describeEntry(e.after, e.decimals)}
       </span>
     </>
   );

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useMemo, useState } from "react";
 import { Breadcrumbs } from "@/components/breadcrumbs";
 import { Dialog } from "@/components/dialog";
+import { DeleteSession } from "@/components/sessions/delete-session";
 import { PublishControl } from "@/components/sessions/publish-control";
 import { SessionEditForm } from "@/components/sessions/session-edit-form";
 import { useSessionSheet } from "@/hooks/use-session-sheet";
@@ -11,6 +12,7 @@ import { formatDate, PHASE_LABELS, STATUS_LABELS } from "@/lib/labels";
 import { RecentChanges } from "./recent-changes";
 import { SheetGrid } from "./sheet-grid";
 import { UndoButton } from "./undo-button";
+import { useSuspects } from "./use-suspects";
 
 /** The Session sheet: fast, keyboard-first score entry for one testing session. */
 export function SessionSheet({ sessionId }: { sessionId: number }) {
@@ -29,6 +31,7 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
   const expected = data.athletes.length * data.tests.length;
   const refused = Object.keys(sheet.invalid).length;
   const unsaved = Object.values(sheet.cells).filter((c) => c.status === "failed" || c.status === "conflict").length;
+  const { suspects, count: suspectCount, news } = useSuspects(data, sheet.shownFor);
 
   return (
     <section aria-labelledby="sheet-heading" className="space-y-3">
@@ -52,6 +55,24 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
               {STATUS_LABELS[session.status]}
             </span>{" "}
             · <span className="num">{filled}</span> of <span className="num">{expected}</span> results
+            {sheet.waiting > 0 && (
+              <>
+                {" "}
+                ·{" "}
+                <span className="rounded border border-dashed border-ink-soft px-1.5 py-0.5 text-sm font-semibold">
+                  {sheet.waiting} waiting to send
+                </span>
+              </>
+            )}
+            {suspectCount > 0 && (
+              <>
+                {" "}
+                ·{" "}
+                <span className="rounded border border-dashed border-decline px-1.5 py-0.5 text-sm font-semibold">
+                  {suspectCount} {suspectCount === 1 ? "score" : "scores"} to double-check
+                </span>
+              </>
+            )}
           </p>
           {session.notes && <p className="mt-1 text-sm text-ink-soft">{session.notes}</p>}
         </div>
@@ -67,6 +88,14 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
               </Link>
             </>
           )}
+          {data.canDelete && (
+            <DeleteSession
+              sessionId={session.id}
+              date={session.date}
+              squadName={session.squadName}
+              results={data.results.length}
+            />
+          )}
           {data.canPublish && (
             <PublishControl
               sessionId={session.id}
@@ -78,12 +107,25 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
         </div>
       </div>
 
-      <p className="text-xs text-ink-faint">
-        <span aria-hidden>⚠︎ </span>
-        Maximal tests (sprints, jumps, 1RM, intermittent runs) carry injury risk: screen athletes, warm up, and test
-        under qualified supervision, following your organisation&apos;s and governing body&apos;s protocols. Scores
-        support training decisions; they are not a medical or return-to-play judgement.
-      </p>
+      {/* Once per sheet, folded: the whole caution is one click away, not a paragraph above every sheet. */}
+      <details className="text-xs text-ink-soft">
+        <summary className="w-fit cursor-pointer font-semibold">
+          <span aria-hidden>⚠︎ </span>Maximal tests carry injury risk — read before testing
+        </summary>
+        <p className="mt-1 max-w-3xl">
+          Sprints, jumps, 1RM lifts and intermittent runs are maximal efforts: screen athletes, warm up, and test under
+          qualified supervision, following your organisation&apos;s and governing body&apos;s protocols. Scores support
+          training decisions; they are not a medical or return-to-play judgement — defer to your medical staff and
+          licensed practitioners.
+        </p>
+      </details>
+
+      {data.canEdit && session.status === "published" && (
+        <p role="note" className="rounded-md border border-ink bg-band px-3 py-2 text-sm">
+          <strong>Published:</strong> athletes see every change you save here on My progress at once. No new mail goes
+          out; take the session back to draft and publish again to mail those whose results changed.
+        </p>
+      )}
 
       {!data.canEdit && (
         <p className="rounded-md border border-line bg-band px-3 py-2 text-sm">
@@ -125,9 +167,19 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
         {refused > 0 &&
           ` ${refused} cell${refused === 1 ? " holds" : "s hold"} text that is not a number and ${refused === 1 ? "was" : "were"} not saved.`}
         {unsaved > 0 && ` ${unsaved} result${unsaved === 1 ? " needs" : "s need"} your attention below.`}
+        {news && ` ${news}`}
+        {sheet.waiting > 0 &&
+          ` No connection: ${sheet.waiting} ${sheet.waiting === 1 ? "result is" : "results are"} kept in this browser and will be sent when the network is back.`}
       </p>
 
-      <SheetGrid data={data} tests={tests} sheet={sheet} canEdit={data.canEdit} onAnnounce={setAnnouncement} />
+      <SheetGrid
+        data={data}
+        tests={tests}
+        sheet={sheet}
+        canEdit={data.canEdit}
+        onAnnounce={setAnnouncement}
+        suspects={suspects}
+      />
 
       <RecentChanges sessionId={session.id} />
 

@@ -4,6 +4,7 @@ import { useMemo, useRef } from "react";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
 import type { SheetData, SheetTest } from "@/lib/client/queries";
 import { isBlock, parseBlock, sheetColumns } from "@/lib/sheet/columns";
+import type { Suspect } from "@/lib/suspect";
 import { SheetHead } from "./sheet-head";
 import { SheetRow } from "./sheet-row";
 
@@ -19,12 +20,14 @@ export function SheetGrid({
   sheet,
   canEdit,
   onAnnounce,
+  suspects,
 }: {
   data: SheetData;
   tests: SheetTest[];
   sheet: SessionSheetState;
   canEdit: boolean;
   onAnnounce: (message: string) => void;
+  suspects: Map<string, Suspect[]>;
 }) {
   const tableRef = useRef<HTMLTableElement>(null);
   const anchor = useRef<number | null>(null);
@@ -132,6 +135,7 @@ export function SheetGrid({
               sheet={sheet}
               canEdit={canEdit}
               totalColumns={totalColumns}
+              suspects={suspects}
             />
           ))}
           {data.athletes.length === 0 && (

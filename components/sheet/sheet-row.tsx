@@ -7,10 +7,13 @@ import type { SheetTest } from "@/lib/client/queries";
 import { paddedNumber } from "@/lib/decimal";
 import { RESULT_FLAGS, type ResultFlag } from "@/lib/domain";
 import { FLAG_LABELS, formatValue } from "@/lib/labels";
-import { cellKey, outsidePlausible, padTrials, plausibleWords, trialKey } from "@/lib/sheet/model";
+import { cellKey, padTrials, trialKey } from "@/lib/sheet/model";
+import type { Suspect } from "@/lib/suspect";
 import { reduceTrials, trialSpread } from "@/lib/trials";
+import { suspectSentence } from "@/lib/words/suspect";
 import { CellIssues, type Issue } from "./cell-issues";
 import { CellStatus } from "./cell-status";
+import { SuspectNotes, suspectNoteId } from "./suspect-notes";
 import { TrialInput } from "./trial-input";
 
 type Athlete = { id: number; name: string; position: string | null };
@@ -24,6 +27,7 @@ export function SheetRow({
   sheet,
   canEdit,
   totalColumns,
+  suspects,
 }: {
   athlete: Athlete;
   row: number;
@@ -32,8 +36,11 @@ export function SheetRow({
   sheet: SessionSheetState;
   canEdit: boolean;
   totalColumns: number;
+  /** Suspect trials by cell key (lib/suspect.ts), as the sheet shows them now. */
+  suspects: Map<string, Suspect[]>;
 }) {
   const issues: Issue[] = [];
+  const doubts = tests.flatMap((t) => suspects.get(cellKey(athlete.id, t.id)) ?? []);
   return (
     <>
       <tr className="group">
@@ -55,7 +62,7 @@ export function SheetRow({
           const shown = sheet.shownFor(athlete.id, test.id);
           const state = sheet.cells[key];
           if (state && (state.status === "failed" || state.status === "conflict"))
-            issues.push({ testId: test.id, testName: test.name, state });
+            issues.push({ testId: test.id, testName: test.name, decimals: test.decimals, state });
           const trials = padTrials(shown.trials, test.trialsPerSession);
           const value = reduceTrials(trials, test.trialRule, test.direction);
           const spread = trialSpread(trials);
@@ -65,7 +72,10 @@ export function SheetRow({
             <Fragment key={test.id}>
               {Array.from({ length: test.trialsPerSession }, (_, index) => {
                 const v = trials[index] ?? null;
-                const outside = outsidePlausible(test, v) ? plausibleWords(test) : null;
+                const doubt = suspects.get(key)?.find((s) => s.trial === index + 1);
+                const suspect = doubt
+                  ? { why: suspectSentence(doubt.reasons, test), noteId: suspectNoteId(athlete.id, test.id, index + 1) }
+                  : null;
                 const trialLabel = `${label}, trial ${index + 1}`;
                 return (
                   <td
@@ -80,7 +90,7 @@ export function SheetRow({
                         value={v}
                         decimals={test.decimals}
                         invalid={sheet.invalid[trialKey(athlete.id, test.id, index)]}
-                        outside={outside}
+                        suspect={suspect}
                         dimmed={dimmed}
                         row={row}
                         col={navIndex.get(`${test.id}:${index}`) ?? 0}
@@ -91,8 +101,8 @@ export function SheetRow({
                       />
                     ) : (
                       <span
-                        title={outside ? `Outside the plausible range ${outside}` : undefined}
-                        className={`num block w-[4.25rem] rounded px-1.5 py-2 text-right ${outside ? "border border-dashed border-decline" : ""}`}
+                        aria-describedby={suspect?.noteId}
+                        className={`num block w-[4.25rem] rounded px-1.5 py-2 text-right ${suspect ? "border border-dashed border-decline" : ""}`}
                       >
                         <span className="sr-only">{trialLabel}: </span>
                         {v === null ? "–" : paddedNumber(v, test.decimals)}
@@ -150,6 +160,15 @@ export function SheetRow({
           );
         })}
       </tr>
+      {doubts.length > 0 && (
+        <tr>
+          <td colSpan={totalColumns} className="border-b border-line bg-paper px-2 py-1.5">
+            <div className="sticky left-2 w-fit max-w-[calc(100vw-4rem)]">
+              <SuspectNotes suspects={doubts} tests={tests} />
+            </div>
+          </td>
+        </tr>
+      )}
       {issues.length > 0 && (
         <tr>
           <td colSpan={totalColumns} className="border-b border-line bg-paper px-2 py-1.5">

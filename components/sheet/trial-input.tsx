@@ -13,7 +13,7 @@ export const TrialInput = memo(function TrialInput({
   value,
   decimals,
   invalid,
-  outside,
+  suspect,
   dimmed,
   row,
   col,
@@ -25,8 +25,8 @@ export const TrialInput = memo(function TrialInput({
   value: number | null;
   decimals: number;
   invalid?: { text: string; message: string };
-  /** Words for the plausible range when the value lies outside it. */
-  outside: string | null;
+  /** Why the typo guard doubts this score, and the id of the note under the row that says so. */
+  suspect: { why: string; noteId: string } | null;
   dimmed: boolean;
   row: number;
   col: number;
@@ -40,7 +40,7 @@ export const TrialInput = memo(function TrialInput({
 
   const tone = invalid
     ? "border-decline bg-decline-soft ring-1 ring-decline"
-    : outside
+    : suspect
       ? "border-decline border-dashed ring-1 ring-decline/60"
       : "border-control";
 
@@ -54,13 +54,19 @@ export const TrialInput = memo(function TrialInput({
         spellCheck={false}
         aria-label={label}
         aria-invalid={invalid ? true : undefined}
-        aria-describedby={invalid ? messageId : undefined}
-        title={invalid ? invalid.message : outside ? `Outside the plausible range ${outside}` : undefined}
+        aria-describedby={invalid ? messageId : suspect?.noteId}
+        title={invalid ? invalid.message : suspect ? `Check: ${suspect.why}` : undefined}
         data-row={row}
         data-col={col}
         value={shown}
         onFocus={(e) => {
           setDraft(stored);
+          e.currentTarget.select();
+        }}
+        // A click (on this cell or on one that already has focus) selects the score, as Tab and
+        // the arrows do; otherwise the caret lands inside it and new digits merge ("11.767.60").
+        onMouseUp={(e) => {
+          e.preventDefault();
           e.currentTarget.select();
         }}
         onChange={(e) => setDraft(e.target.value)}

@@ -9,7 +9,16 @@ import { useAddAthlete, useUpdateAthlete } from "@/hooks/use-writes";
 import type { RosterAthlete } from "@/lib/client/queries";
 import { type AthleteCreateInput, athleteCreateSchema } from "@/lib/validation/roster";
 
-const FIELDS = ["name", "position", "sex", "dateOfBirth", "externalId", "notes"] as const;
+const FIELDS = [
+  "name",
+  "position",
+  "sex",
+  "dateOfBirth",
+  "externalId",
+  "notes",
+  "consentRecordedOn",
+  "guardianConsentOn",
+] as const;
 const emptyToNull = (v: unknown) => (v === "" || v === undefined ? null : v);
 
 /** New athlete for a squad (POST), or changes to an existing one (PATCH). */
@@ -40,6 +49,8 @@ export function AthleteForm({
           dateOfBirth: athlete.dateOfBirth ?? "",
           externalId: athlete.externalId ?? "",
           notes: athlete.notes ?? "",
+          consentRecordedOn: athlete.consentRecordedOn ?? "",
+          guardianConsentOn: athlete.guardianConsentOn ?? "",
         }
       : { sex: null },
   });
@@ -88,6 +99,29 @@ export function AthleteForm({
           <textarea id={id("notes")} rows={2} className="field" {...register("notes")} />
         </Field>
       </div>
+      <fieldset className="space-y-2 rounded-md border border-line p-3">
+        <legend className="px-1 text-sm font-semibold">Consent to see their results</legend>
+        <p className="text-xs text-ink-soft">
+          Until the athlete&apos;s consent is recorded — and, while they are under 18, a parent&apos;s or
+          guardian&apos;s too — they do not see their results on My progress and get no results mail.
+        </p>
+        <div className="grid gap-4 sm:grid-cols-2">
+          <Field
+            id={id("consentRecordedOn")}
+            label="Athlete's consent recorded on"
+            error={errors.consentRecordedOn?.message}
+          >
+            <input id={id("consentRecordedOn")} type="date" className="field" {...register("consentRecordedOn")} />
+          </Field>
+          <Field
+            id={id("guardianConsentOn")}
+            label="Guardian's consent recorded on (under 18)"
+            error={errors.guardianConsentOn?.message}
+          >
+            <input id={id("guardianConsentOn")} type="date" className="field" {...register("guardianConsentOn")} />
+          </Field>
+        </div>
+      </fieldset>
       <p className="text-xs text-ink-faint">
         Athlete data is personal data. Record only what the squad needs, with consent (a guardian&apos;s for minors).
       </p>

@@ -7,19 +7,22 @@ import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
 import { type Column, TableCard } from "@/components/table-card";
 import { type TestItem, testQueries } from "@/lib/client/queries";
-import { formatDate, PHASE_LABELS } from "@/lib/labels";
+import { formatDate, PHASE_LABELS, trialRuleWords } from "@/lib/labels";
 import { directionWords, rangeWords, swcWords, typicalErrorWords } from "@/lib/words/tests";
 import { TestForm } from "./test-form";
 import { TestRowActions } from "./test-row-actions";
 
+// Below 1280 px the unit, direction, trials and range move into the Test cell, so the table
+// fits a tablet with its Results and actions on screen.
+const WIDE = "hidden xl:table-cell";
 const COLUMNS: Column[] = [
   { label: "Test" },
-  { label: "Unit" },
-  { label: "Direction" },
-  { label: "Trials" },
+  { label: "Unit", className: WIDE },
+  { label: "Direction", className: WIDE },
+  { label: "Trials", className: WIDE },
   { label: "SWC" },
   { label: "Typical error" },
-  { label: "Plausible range" },
+  { label: "Plausible range", className: WIDE },
   { label: "Results", align: "right" },
 ];
 
@@ -90,16 +93,21 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
                   <div className="text-xs text-ink-faint">
                     {test.decimals} decimal{test.decimals === 1 ? "" : "s"}
                   </div>
+                  <div className="text-xs text-ink-soft xl:hidden">
+                    {test.unit} · <span aria-hidden>{dir.arrow} </span>
+                    {dir.words} · {trialRuleWords(test.trialRule, test.trialsPerSession)}
+                    {range && ` · plausible ${range}`}
+                  </div>
                 </td>
-                <td className="px-3 py-2.5">{test.unit}</td>
-                <td className="whitespace-nowrap px-3 py-2.5">
+                <td className={`px-3 py-2.5 ${WIDE}`}>{test.unit}</td>
+                <td className={`whitespace-nowrap px-3 py-2.5 ${WIDE}`}>
                   <span aria-hidden className="mr-1 font-bold">
                     {dir.arrow}
                   </span>
                   {dir.words}
                 </td>
-                <td className="whitespace-nowrap px-3 py-2.5">
-                  {test.trialRule === "best" ? "Best" : "Mean"} of <span className="num">{test.trialsPerSession}</span>
+                <td className={`whitespace-nowrap px-3 py-2.5 ${WIDE}`}>
+                  {trialRuleWords(test.trialRule, test.trialsPerSession)}
                 </td>
                 <td className="px-3 py-2.5">
                   <span className="whitespace-nowrap">{swcWords(test)}</span>
@@ -123,7 +131,7 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
                     <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>
                   )}
                 </td>
-                <td className="num whitespace-nowrap px-3 py-2.5">
+                <td className={`num whitespace-nowrap px-3 py-2.5 ${WIDE}`}>
                   {range ?? <span className="text-ink-faint">Any</span>}
                 </td>
                 <td className="num px-3 py-2.5 text-right">{test.resultCount}</td>

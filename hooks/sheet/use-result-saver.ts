@@ -1,8 +1,9 @@
 "use client";
 
 import { useMutation } from "@tanstack/react-query";
-import { useCallback, useRef, useState } from "react";
+import { useCallback, useEffect, useRef, useState } from "react";
 import { ApiClientError } from "@/lib/client/fetch-json";
+import { forgetWrite, keepWrite, waitingWrites } from "@/lib/client/offline-writes";
 import type { ResultRow } from "@/lib/client/queries";
 import { saveResultsRequest } from "@/lib/client/writes";
 import { cellKey, type Wanted } from "@/lib/sheet/model";
@@ -11,6 +12,8 @@ import type { SheetCache } from "./use-sheet-cache";
 
 export type CellState =
   | { status: "saving"; wanted: Wanted }
+  /** Typed while the network was down: kept in the browser, sent when the connection returns. */
+  | { status: "waiting"; wanted: Wanted }
   | { status: "saved" }
   | { status: "failed"; wanted: Wanted; message: string }
   | { status: "conflict"; wanted: Wanted; current: ResultRow | null };
@@ -32,6 +35,8 @@ const conflictOf = (error: ApiClientError, athleteId: number, testId: number) =>
   (error.body as { error?: { details?: { conflicts?: ResultConflict[] } } } | null)?.error?.details?.conflicts?.find(
     (c) => c.athleteId === athleteId && c.testId === testId,
   );
+
+const offline = () => typeof navigator !== "undefined" && !navigator.onLine;
 
 /**
  * Saves each result (athlete × test) on its own with the version it read. Writes to the same
@@ -100,6 +105,11 @@ export function useResultSaver(sessionId: number, cache: SheetCache) {
         setCell(v.key, { status: "conflict", wanted, current: hit.current });
         return;
       }
+      if (!(error instanceof ApiClientError)) {
+        // No answer at all: the network is down. Keep the write and send it when it returns.
+        hold(v.athleteId, v.testId, wanted, v.version, v.note);
+        return;
+      }
       cache.writeRow(v.athleteId, v.testId, context?.previous ?? null);
       const message =
         error instanceof ApiClientError
@@ -131,6 +141,13 @@ export function useResultSaver(sessionId: number, cache: SheetCache) {
       setCell(key, { ...held, wanted: clean });
       return;
     }
+    if (offline() || held?.status === "waiting") {
+      // Behind an earlier write still waiting in the browser: join it, so they go in order.
+      const row = cache.readRow(athleteId, testId);
+      hold(athleteId, testId, clean, versionOf(row), row?.note ?? null);
+      if (!offline()) void replay();
+      return;
+    }
     if (inFlight.current.has(key)) {
       queued.current.set(key, clean);
       setCell(key, { status: "saving", wanted: clean });
@@ -142,11 +159,83 @@ export function useResultSaver(sessionId: number, cache: SheetCache) {
     mutation.mutate({ key, athleteId, testId, wanted: clean, version: versionOf(row), note: row?.note ?? null });
   }
 
+  /** Keeps a write in the browser until the network is back; the cell says it is waiting. */
+  function hold(athleteId: number, testId: number, wanted: Wanted, version: number | null, note: string | null) {
+    setCell(cellKey(athleteId, testId), { status: "waiting", wanted });
+    void keepWrite({ sessionId, athleteId, testId, ...wanted, note, version, typedAt: Date.now() }).catch(() =>
+      setCell(cellKey(athleteId, testId), {
+        status: "failed",
+        wanted,
+        message: "No connection, and this browser could not keep the score (storage is off or full).",
+      }),
+    );
+  }
+
+  const replaying = useRef(false);
+  /** Sends the writes kept in the browser, oldest first, each with the version it was typed against. */
+  async function replay() {
+    if (replaying.current) return;
+    replaying.current = true;
+    try {
+      for (const write of await waitingWrites(sessionId)) {
+        const key = cellKey(write.athleteId, write.testId);
+        const wanted = { trials: write.trials, flag: write.flag };
+        try {
+          const saved = await saveResultsRequest(sessionId, [
+            {
+              athleteId: write.athleteId,
+              testId: write.testId,
+              trials: write.trials,
+              flag: write.flag,
+              note: write.note,
+              version: write.version,
+            },
+          ]);
+          const row = saved.find((r) => r.athleteId === write.athleteId && r.testId === write.testId);
+          if (row) cache.writeRow(write.athleteId, write.testId, row);
+          setCell(key, { status: "saved" });
+        } catch (error) {
+          if (!(error instanceof ApiClientError)) return; // still offline: try again at the next "online"
+          const hit = error.status === 409 ? conflictOf(error, write.athleteId, write.testId) : undefined;
+          if (hit) {
+            cache.writeRow(write.athleteId, write.testId, hit.current);
+            setCell(key, { status: "conflict", wanted, current: hit.current });
+          } else setCell(key, { status: "failed", wanted, message: error.message });
+        }
+        await forgetWrite(write.seq!);
+      }
+      void cache.refreshAudit();
+    } finally {
+      replaying.current = false;
+    }
+  }
+
+  // Writes kept from an earlier visit show as waiting at once, and go as soon as there is a network.
+  // biome-ignore lint/correctness/useExhaustiveDependencies: once per sheet; replay reads refs and the store
+  useEffect(() => {
+    let live = true;
+    void waitingWrites(sessionId)
+      .then((writes) => {
+        if (!live) return;
+        for (const w of writes)
+          setCell(cellKey(w.athleteId, w.testId), { status: "waiting", wanted: { trials: w.trials, flag: w.flag } });
+        if (writes.length > 0 && !offline()) void replay();
+      })
+      .catch(() => undefined);
+    const online = () => void replay();
+    window.addEventListener("online", online);
+    return () => {
+      live = false;
+      window.removeEventListener("online", online);
+    };
+  }, [sessionId]);
+
   /** Retry a failed write, or overwrite after a conflict: the version now comes from their row. */
   function retry(athleteId: number, testId: number) {
     const state = cellsRef.current[cellKey(athleteId, testId)];
     if (state && state.status !== "saved") send(athleteId, testId, state.wanted, { overwrite: true });
   }
 
-  return { cells, send, retry, forget: (key: string) => setCell(key, null) };
+  const waiting = Object.values(cells).filter((c) => c.status === "waiting").length;
+  return { cells, send, retry, waiting, forget: (key: string) => setCell(key, null) };
 }

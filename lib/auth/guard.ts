@@ -10,7 +10,7 @@ import { forbidden, notFound, unauthenticated } from "@/lib/errors";
 import { currentSession } from "./session";
 
 // The role lists `roles` takes come with the guard; they are defined beside the rules they follow.
-export { MANAGERS, OWNERS, STAFF } from "./permissions";
+export { ATHLETES, MANAGERS, OWNERS, PUBLISHERS, STAFF } from "./permissions";
 export type { Actor };
 
 export type GuardOptions = {

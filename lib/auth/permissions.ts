@@ -22,6 +22,15 @@ export const isStaff = (who: RoleHolder) => !isAthlete(who);
 export const canEditSession = (who: RoleHolder, status: SessionStatus) =>
   isManager(who) || (isCoach(who) && status === "draft");
 
+/**
+ * Deleting a session made by mistake: drafts only (a published session goes back to draft
+ * first). Owner and scientist any draft; a coach the drafts they created.
+ */
+export const canDeleteSession = (
+  who: RoleHolder & { readonly userId: number },
+  session: { status: SessionStatus; createdBy: number | null },
+) => session.status === "draft" && (isManager(who) || (isCoach(who) && session.createdBy === who.userId));
+
 /** Publishing (or withdrawing) a session's results to its athletes. */
 export const canPublish = isManager;
 
@@ -51,6 +60,11 @@ export const canDeleteAthlete = isOwner;
 
 /** Asking the organisation to delete one's own record: athletes, about themselves. */
 export const canRequestDeletion = isAthlete;
+/** My progress and the data-rights export: an athlete's own results, read by the athlete alone. */
+export const hasOwnProgress = isAthlete;
+
+/** Who is told, before publishing, which athletes will see their results and who will get mail. */
+export const canSeePublishAudience = canPublish;
 
 const rolesWhere = (rule: (who: RoleHolder) => boolean): readonly Role[] => ROLES.filter((role) => rule({ role }));
 
@@ -62,3 +76,5 @@ export const RELIABILITY_ROLES = rolesWhere(canRunReliability);
 export const PEOPLE_ROLES = rolesWhere(canManagePeople);
 export const DELETION_ROLES = rolesWhere(canDeleteAthlete);
 export const DELETION_REQUEST_ROLES = rolesWhere(canRequestDeletion);
+export const ATHLETES = rolesWhere(hasOwnProgress);
+export const PUBLISHERS = rolesWhere(canSeePublishAudience);

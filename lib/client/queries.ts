@@ -14,7 +14,9 @@ import type { listSessionAudit } from "@/lib/data/audit";
 import type { listDeletionRequests } from "@/lib/data/deletion-requests";
 import type { listClaimableAthletes, listInvitations } from "@/lib/data/invitations";
 import type { listMembers } from "@/lib/data/members";
+import type { getMyProgress } from "@/lib/data/my-progress";
 import type { getCapturedMessage, getOutbox } from "@/lib/data/outbox";
+import type { getPublishCheck } from "@/lib/data/publish-mail";
 import type { getReliabilityFromFile, getReliabilityReport } from "@/lib/data/reliability";
 import type { getChangeReport, getSavedReport, listSavedReports } from "@/lib/data/reports";
 import type { getSessionSheet, listSessions } from "@/lib/data/sessions";
@@ -103,6 +105,12 @@ export const athleteQueries = {
       queryKey: [...queryKeys.athletes, athleteId, "history"] as const,
       queryFn: () => fetchJson<Loaded<typeof getAthleteHistory>>(`/api/athletes/${athleteId}/history`),
     }),
+  /** My progress: the signed-in athlete's own tests over their published sessions. */
+  myProgress: () =>
+    queryOptions({
+      queryKey: [...queryKeys.athletes, "me", "progress"] as const,
+      queryFn: () => fetchJson<Loaded<typeof getMyProgress>>("/api/me/progress"),
+    }),
 };
 
 export const testQueries = {
@@ -127,6 +135,12 @@ export const sessionQueries = {
     queryOptions({
       queryKey: [...queryKeys.sessions, sessionId] as const,
       queryFn: () => fetchJson<Loaded<typeof getSessionSheet>>(`/api/sessions/${sessionId}`),
+    }),
+  /** Read by the publish dialog when it opens: who will see the results and get mail, and why not. */
+  publishCheck: (sessionId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.sessions, sessionId, "publish-check"] as const,
+      queryFn: () => fetchJson<Loaded<typeof getPublishCheck>>(`/api/sessions/${sessionId}/publish-check`),
     }),
   audit: (sessionId: number) =>
     queryOptions({
@@ -205,6 +219,8 @@ export type SheetTest = SheetData["tests"][number];
 export type ResultRow = SheetData["results"][number];
 export type AuditEvent = Loaded<typeof listSessionAudit>[number];
 export type AthleteHistoryData = Loaded<typeof getAthleteHistory>;
+export type MyProgressData = Loaded<typeof getMyProgress>;
+export type PublishCheckData = Loaded<typeof getPublishCheck>;
 export type WorkToDo = Loaded<typeof getWorkToDo>;
 export type ChangeReportData = Loaded<typeof getChangeReport>;
 export type ReliabilityData = Loaded<typeof getReliabilityReport>;

@@ -12,6 +12,7 @@ import type { confirmPasswordReset } from "@/lib/data/password-reset";
 import type { adoptTypicalError, getReliabilityFromFile } from "@/lib/data/reliability";
 import type { saveReport } from "@/lib/data/reports";
 import type { writeResults } from "@/lib/data/results";
+import type { deleteDraftSession } from "@/lib/data/session-delete";
 import type { createSession, updateSession } from "@/lib/data/sessions";
 import type { createSquad, updateSquad } from "@/lib/data/squads";
 import type { createTest, deleteOrArchiveTest, updateTest } from "@/lib/data/tests";
@@ -67,6 +68,9 @@ export const createSessionRequest = (input: SessionCreateInput) =>
 
 export const updateSessionRequest = (sessionId: number, input: SessionUpdateInput) =>
   send<{ session: Loaded<typeof updateSession> }>(`/api/sessions/${sessionId}`, "PATCH", input).then((r) => r.session);
+
+export const deleteSessionRequest = (sessionId: number, confirmedResults: number) =>
+  send<Loaded<typeof deleteDraftSession>>(`/api/sessions/${sessionId}?results=${confirmedResults}`, "DELETE");
 
 export const saveResultsRequest = (sessionId: number, results: ResultWriteInput[]) =>
   send<{ results: Loaded<typeof writeResults> }>(`/api/sessions/${sessionId}/results`, "PUT", { results }).then(

@@ -15,7 +15,7 @@ import { athleteScope, sessionScope, squadScope } from "./scope";
  */
 export async function getAthleteHistory(actor: Actor, athleteId: number) {
   const db = getDb();
-  const [[athlete], squadRows, rows] = await Promise.all([
+  const [[athlete], squadRows, tests] = await Promise.all([
     db
       .select({ id: athletes.id, name: athletes.name, position: athletes.position, archived: athletes.archived })
       .from(athletes)
@@ -26,37 +26,49 @@ export async function getAthleteHistory(actor: Actor, athleteId: number) {
       .innerJoin(squads, eq(squads.id, squadAthletes.squadId))
       .where(and(eq(squadAthletes.athleteId, athleteId), squadScope(actor)))
       .orderBy(asc(squads.name)),
-    db
-      .select({
-        resultId: results.id,
-        sessionId: results.sessionId,
-        date: testingSessions.date,
-        phase: testingSessions.phase,
-        status: testingSessions.status,
-        squadName: squads.name,
-        value: results.value,
-        flag: results.flag,
-        testId: tests.id,
-        testName: tests.name,
-        unit: tests.unit,
-        decimals: tests.decimals,
-        direction: tests.direction,
-        swcMethod: tests.swcMethod,
-        swcValue: tests.swcValue,
-        cvPercent: tests.cvPercent,
-        typicalError: tests.typicalError,
-        typicalErrorDf: tests.typicalErrorDf,
-      })
-      .from(results)
-      .innerJoin(testingSessions, eq(testingSessions.id, results.sessionId))
-      .innerJoin(squads, eq(squads.id, testingSessions.squadId))
-      .innerJoin(tests, eq(tests.id, results.testId))
-      .where(
-        and(eq(results.athleteId, athleteId), eq(results.organizationId, actor.organizationId), sessionScope(actor)),
-      )
-      .orderBy(asc(tests.name), asc(testingSessions.date), asc(testingSessions.id)),
+    loadHistoryTests(actor, athleteId),
   ]);
   if (!athlete) throw notFound("Athlete");
+  return {
+    athlete: { ...athlete, squads: squadRows },
+    confidence: HISTORY_CONFIDENCE,
+    tests: tests.map((t) => historyOfTest(t, HISTORY_CONFIDENCE)),
+  };
+}
+
+/**
+ * One athlete's scores, grouped by test, oldest first, in the sessions the caller reaches (the
+ * session scope: a coach's squads, drafts included; an athlete's own squads, published only).
+ * Athlete history and My progress both read through here. The caller has the athlete in reach.
+ */
+export async function loadHistoryTests(actor: Actor, athleteId: number): Promise<HistoryTest[]> {
+  const rows = await getDb()
+    .select({
+      resultId: results.id,
+      sessionId: results.sessionId,
+      date: testingSessions.date,
+      phase: testingSessions.phase,
+      status: testingSessions.status,
+      squadName: squads.name,
+      value: results.value,
+      flag: results.flag,
+      testId: tests.id,
+      testName: tests.name,
+      unit: tests.unit,
+      decimals: tests.decimals,
+      direction: tests.direction,
+      swcMethod: tests.swcMethod,
+      swcValue: tests.swcValue,
+      cvPercent: tests.cvPercent,
+      typicalError: tests.typicalError,
+      typicalErrorDf: tests.typicalErrorDf,
+    })
+    .from(results)
+    .innerJoin(testingSessions, eq(testingSessions.id, results.sessionId))
+    .innerJoin(squads, eq(squads.id, testingSessions.squadId))
+    .innerJoin(tests, eq(tests.id, results.testId))
+    .where(and(eq(results.athleteId, athleteId), eq(results.organizationId, actor.organizationId), sessionScope(actor)))
+    .orderBy(asc(tests.name), asc(testingSessions.date), asc(testingSessions.id));
 
   const byTest = new Map<number, HistoryTest>();
   for (const r of rows) {
@@ -88,12 +100,8 @@ export async function getAthleteHistory(actor: Actor, athleteId: number) {
       flag: r.flag,
     });
   }
-  return {
-    athlete: { ...athlete, squads: squadRows },
-    confidence: HISTORY_CONFIDENCE,
-    tests: [...byTest.values()].map((t) => historyOfTest(t, HISTORY_CONFIDENCE)),
-  };
+  return [...byTest.values()];
 }
 
 /** The Change report's default level, so an athlete's verdicts read the same on both screens. */
-const HISTORY_CONFIDENCE = 0.9;
+export const HISTORY_CONFIDENCE = 0.9;

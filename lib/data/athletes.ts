@@ -17,6 +17,8 @@ const rosterColumns = {
   dateOfBirth: athletes.dateOfBirth,
   externalId: athletes.externalId,
   notes: athletes.notes,
+  consentRecordedOn: athletes.consentRecordedOn,
+  guardianConsentOn: athletes.guardianConsentOn,
   archived: athletes.archived,
 };
 
@@ -160,6 +162,8 @@ export type AthleteListItem = {
   sex: string | null;
   dateOfBirth: string | null;
   externalId: string | null;
+  consentRecordedOn: string | null;
+  guardianConsentOn: string | null;
   archived: boolean;
 };
 

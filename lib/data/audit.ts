@@ -84,6 +84,8 @@ export type AuditEvent = {
   actorName: string | null;
   athleteName: string | null;
   testName: string | null;
+  /** The test's decimals, so old and new scores read as the sheet writes them. */
+  decimals: number | null;
   before: Snapshot | null;
   after: Snapshot | null;
   /** For a file import: what was imported. */
@@ -130,13 +132,13 @@ export async function listSessionAudit(actor: Actor, sessionId: number, limit = 
       : [],
     testIds.length
       ? db
-          .select({ id: tests.id, name: tests.name })
+          .select({ id: tests.id, name: tests.name, decimals: tests.decimals })
           .from(tests)
           .where(and(inArray(tests.id, testIds), eq(tests.organizationId, actor.organizationId)))
       : [],
   ]);
   const athleteNames = new Map(athleteRows.map((a) => [a.id, a.name]));
-  const testNames = new Map(testRows.map((t) => [t.id, t.name]));
+  const testById = new Map(testRows.map((t) => [t.id, t]));
   const view = (v: unknown): Snapshot | null => {
     const s = v as Partial<ResultSnapshot> | null;
     return s && "trials" in s ? { trials: s.trials ?? [], flag: s.flag ?? null, note: s.note ?? null } : null;
@@ -149,7 +151,8 @@ export async function listSessionAudit(actor: Actor, sessionId: number, limit = 
       action: e.action as SheetAuditAction, // the WHERE clause above admits no other
       actorName: e.actorName,
       athleteName: r?.athleteId ? (athleteNames.get(r.athleteId) ?? null) : null,
-      testName: r?.testId ? (testNames.get(r.testId) ?? null) : null,
+      testName: r?.testId ? (testById.get(r.testId)?.name ?? null) : null,
+      decimals: r?.testId ? (testById.get(r.testId)?.decimals ?? null) : null,
       before: view(e.before),
       after: view(e.after),
       details: e.action === "results.import" ? (e.after as AuditEvent["details"]) : undefined,

@@ -28,6 +28,7 @@ import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
 import { findSessionInScope, onSessionSheet } from "./scope";
 import { sessionBattery } from "./sessions";
+import { suspectsAmong } from "./suspects";
 
 export type ImportSession = {
   id: number;
@@ -166,8 +167,14 @@ async function preview(
   const existing = await loadExisting(getDb(), session);
   const writes = planWrites(plan.groups, existing, testsMap(context), plan.columnOf);
   const width = table.headers.length;
+  const suspects = await suspectsAmong(
+    session.organizationId,
+    session.id,
+    writes.writes.map((w) => ({ ...w, flag: null })),
+  );
   return {
     mode: "preview",
+    suspects,
     file: { name: file.filename, size: file.bytes.length },
     format: resolved.mapping.format,
     detectedFormat: resolved.detectedFormat,
@@ -245,7 +252,7 @@ async function commitImport(
   const { plan } = analysis;
   const rowsImported = plan.rowsWithValues;
   const filename = (file.filename || "upload.csv").slice(0, 255);
-  return writeTransaction(async (tx) => {
+  const { committed, written } = await writeTransaction(async (tx) => {
     // Read inside the transaction: what is merged is what is there at this moment.
     const existing = await loadExisting(tx, session);
     const { writes, replacements, counts } = planWrites(plan.groups, existing, testsMap(context), plan.columnOf);
@@ -287,6 +294,16 @@ async function commitImport(
       before: before.length ? { results: before } : null,
       after: { uploadId: upload.id, filename, format: plan.format, rows: rowsImported, replace, ...counts },
     });
-    return { mode: "commit" as const, uploadId: upload.id, filename, format: plan.format, rowsImported, counts };
+    return {
+      committed: { mode: "commit" as const, uploadId: upload.id, filename, format: plan.format, rowsImported, counts },
+      written: writes,
+    };
   });
+  // After the commit: the typo guard reads earlier published sessions, not this write.
+  const suspects = await suspectsAmong(
+    session.organizationId,
+    session.id,
+    written.map((w) => ({ ...w, flag: null })),
+  );
+  return { ...committed, suspects };
 }

@@ -2,13 +2,17 @@ import "server-only";
 import { and, asc, count, desc, eq, inArray, notInArray } from "drizzle-orm";
 import { getDb, type Reader, writeTransaction } from "@/db/client";
 import { athletes, results, sessionTests, squads, testingSessions, tests } from "@/db/schema";
-import { canEditSession, canPublish } from "@/lib/auth/permissions";
+import { canDeleteSession, canEditSession, canPublish } from "@/lib/auth/permissions";
+import { todayIso } from "@/lib/consent";
 import { conflict, forbidden, invalidInput, notFound } from "@/lib/errors";
 import type { SessionCreateInput, SessionUpdateInput } from "@/lib/validation/sessions";
 import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
+import { sendQueuedMail } from "./mail";
+import { queueResultsMail } from "./publish-mail";
 import { listResultRows } from "./results";
 import { findSessionInScope, onSessionSheet, sessionScope, squadScope } from "./scope";
+import { loadTypoGuard } from "./suspects";
 
 const sessionColumns = {
   id: testingSessions.id,
@@ -120,7 +124,10 @@ export async function sessionBattery(sessionId: number, reader: Reader = getDb()
 export async function getSessionSheet(actor: Actor, sessionId: number) {
   const db = getDb();
   // The header comes first: it is the scope check for everything read after it.
-  const session = await findSessionInScope(db, actor, sessionId, sessionColumns);
+  const session = await findSessionInScope(db, actor, sessionId, {
+    ...sessionColumns,
+    createdBy: testingSessions.createdBy,
+  });
   const [battery, resultRows, athleteList] = await Promise.all([
     sessionBattery(sessionId),
     listResultRows(db, actor, sessionId),
@@ -136,27 +143,37 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
       )
       .orderBy(asc(athletes.name)),
   ]);
+  const typoGuard = await loadTypoGuard(
+    db,
+    actor.organizationId,
+    session,
+    battery.map((t) => t.id),
+    athleteList.map((a) => a.id),
+  );
   return {
     session,
     tests: battery,
     athletes: athleteList,
     results: resultRows,
+    typoGuard,
     canEdit: canEditSession(actor, session.status),
     canPublish: canPublish(actor),
+    canDelete: canDeleteSession(actor, session),
   };
 }
 
 export async function updateSession(actor: Actor, sessionId: number, input: SessionUpdateInput) {
   const { version, testIds, ...changes } = input;
   if (changes.status && !canPublish(actor)) throw forbidden("Only a sport scientist or the owner publishes results.");
-  return writeTransaction(async (tx) => {
-    const before = await findSessionInScope(tx, actor, sessionId, {
+  const answer = await writeTransaction(async (tx) => {
+    const { publishedAt, ...before } = await findSessionInScope(tx, actor, sessionId, {
       id: testingSessions.id,
       status: testingSessions.status,
       version: testingSessions.version,
       date: testingSessions.date,
       phase: testingSessions.phase,
       notes: testingSessions.notes,
+      publishedAt: testingSessions.publishedAt,
     });
     if (!canEditSession(actor, before.status))
       throw forbidden("This session is published; ask a sport scientist to change it.");
@@ -179,13 +196,24 @@ export async function updateSession(actor: Actor, sessionId: number, input: Sess
       await tx.delete(sessionTests).where(eq(sessionTests.sessionId, sessionId));
       await tx.insert(sessionTests).values(unique.map((testId, position) => ({ sessionId, testId, position })));
     }
+    // Each athlete's mail is queued with the change, so it exists exactly when the publication does.
+    const mailed = publishing
+      ? await queueResultsMail(
+          tx,
+          actor,
+          { id: sessionId, date: changes.date ?? before.date, phase: changes.phase ?? before.phase, publishedAt },
+          todayIso(),
+        )
+      : 0;
     await recordAudit(tx, actor, {
       action: publishing ? "session.publish" : "session.update",
       entity: { type: "session", id: sessionId },
       sessionId,
       before,
-      after: input,
+      after: publishing ? { ...input, mailedAthletes: mailed } : input,
     });
-    return { id: sessionId, version: version + 1, ...changes };
+    return { id: sessionId, version: version + 1, ...changes, mailed };
   });
+  if (answer.mailed > 0) void sendQueuedMail();
+  return answer;
 }

@@ -1,6 +1,7 @@
 /** The answers of the import API, shared by the route handler and the Import page. */
 
 import type { RowError } from "@/lib/errors";
+import type { Suspect } from "@/lib/suspect";
 import type { Replacement } from "./merge";
 import type { PreviewValue } from "./plan";
 import type {
@@ -26,6 +27,8 @@ export type ReplacementRow = RowError & {
 
 export type ImportPreview = {
   mode: "preview";
+  /** Scores the typo guard doubts (lib/suspect.ts): they import all the same, after a look. */
+  suspects: Suspect[];
   file: { name: string; size: number };
   format: ImportFormat;
   detectedFormat: ImportFormat;
@@ -58,6 +61,7 @@ export type ImportPreview = {
 
 export type ImportCommitted = {
   mode: "commit";
+  suspects: Suspect[];
   uploadId: number;
   filename: string;
   format: ImportFormat;

@@ -17,6 +17,8 @@ export type MailData = {
     /** The recipient's own results only, already worded in each test's unit and decimals. */
     lines: { test: string; value: string; note?: string }[];
     link: string;
+    /** Published again after changes: the mail says the results were updated. */
+    updated?: boolean;
   };
   "deletion-request": { athleteName: string; organizationName: string; message: string | null; link: string };
 };
@@ -72,11 +74,15 @@ export function renderMail(mail: AnyMail): MailContent {
     }
     case "results-published": {
       const d = mail.data;
-      const intro = `Hello ${d.athleteName}, your results from ${d.sessionLabel} at ${d.organizationName} are in.`;
+      const intro = d.updated
+        ? `Hello ${d.athleteName}, your results from ${d.sessionLabel} at ${d.organizationName} were updated. These are the numbers as they stand now.`
+        : `Hello ${d.athleteName}, your results from ${d.sessionLabel} at ${d.organizationName} are in.`;
       const list = d.lines.map((l) => `${l.test}: ${l.value}${l.note ? ` (${l.note})` : ""}`);
       const outro = "Open My progress to see how they compare with your earlier tests.";
       return {
-        subject: `Your new results are in — ${d.sessionLabel}`,
+        subject: d.updated
+          ? `Your results were updated — ${d.sessionLabel}`
+          : `Your new results are in — ${d.sessionLabel}`,
         text: textOf([intro, list.map((l) => `• ${l}`).join("\n"), outro], d.link),
         html: page(
           [

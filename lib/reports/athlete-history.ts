@@ -35,16 +35,26 @@ export type HistoryTest = {
 /**
  * Why a verdict can or cannot be given for one athlete alone:
  * - `fixed`: the test's fixed SWC; `cv`: factor × CV% of the athlete's previous score;
+ * - `squad`: factor × between-athlete SD of the previous session's scores, where the caller
+ *   supplies it (`HistoryOptions.squadSwc`) — per change, and only where the squad allows;
  * - `needs-squad`: an SD-based SWC is a spread of a squad's baseline, which one athlete has not got;
  * - `no-cv`: a CV-based SWC without a CV; `no-te`: no typical error, so no interval at all.
  */
-export type SwcBasis = "fixed" | "cv" | "needs-squad" | "no-cv" | "no-te";
+export type SwcBasis = "fixed" | "cv" | "squad" | "needs-squad" | "no-cv" | "no-te";
 
-function basisOf(test: HistoryTest): SwcBasis {
+export type HistoryOptions = {
+  /**
+   * The SD-based SWC of the squad's scores in a session (the one a change starts from), or null
+   * where the caller will not give one. Without it an SD-based test gets no verdicts.
+   */
+  squadSwc?: (sessionId: number) => number | null;
+};
+
+function basisOf(test: HistoryTest, options: HistoryOptions): SwcBasis {
   if (test.typicalError === null) return "no-te";
   if (test.swcMethod === "fixed") return "fixed";
   if (test.swcMethod === "cv-factor") return test.cvPercent === null ? "no-cv" : "cv";
-  return "needs-squad";
+  return options.squadSwc ? "squad" : "needs-squad";
 }
 
 const usable = (s: HistoryScore): s is HistoryScore & { value: number } => s.flag === null && s.value !== null;
@@ -63,9 +73,9 @@ export type HistoryPoint = HistoryScore & {
 };
 
 /** Each score with its change from the previous usable score and, where the test allows, interval and verdict. */
-export function historyOfTest(test: HistoryTest, confidence: number) {
+export function historyOfTest(test: HistoryTest, confidence: number, options: HistoryOptions = {}) {
   const higherIsBetter = test.direction === "higher";
-  const basis = basisOf(test);
+  const basis = basisOf(test, options);
   let previous: (HistoryScore & { value: number }) | null = null;
   const scores = test.scores.map((score): HistoryPoint => {
     const empty: HistoryPoint = {
@@ -94,7 +104,9 @@ export function historyOfTest(test: HistoryTest, confidence: number) {
         ? test.swcValue
         : basis === "cv" && pre.value !== 0
           ? swcFromCv(Math.abs(pre.value), test.cvPercent!, test.swcValue)
-          : null;
+          : basis === "squad"
+            ? (options.squadSwc?.(pre.sessionId) ?? null)
+            : null;
     if (test.typicalError === null || swc === null) return withChange;
     const individual = individualChange({
       pre: pre.value,
@@ -115,4 +127,17 @@ export function historyOfTest(test: HistoryTest, confidence: number) {
   });
   const { swcMethod: _m, swcValue: _v, cvPercent: _c, scores: _s, ...shown } = test;
   return { ...shown, swcMethod: test.swcMethod, swcBasis: basis, scores };
+}
+
+/**
+ * The athlete's best usable score in a test, by its direction (the highest jump, the fastest
+ * time); the earliest session holding it when it was equalled later.
+ */
+export function personalBest<S extends HistoryScore>(scores: S[], direction: Direction): S | null {
+  let best: S | null = null;
+  for (const s of scores) {
+    if (!usable(s)) continue;
+    if (best === null || (direction === "higher" ? s.value > best.value! : s.value < best.value!)) best = s;
+  }
+  return best;
 }

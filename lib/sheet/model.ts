@@ -2,7 +2,7 @@
 
 import type { ResultRow, SheetData, SheetTest } from "@/lib/client/queries";
 import type { ResultFlag } from "@/lib/domain";
-import { FLAG_LABELS } from "@/lib/labels";
+import { FLAG_LABELS, formatValue } from "@/lib/labels";
 import { trimTrials } from "@/lib/trials";
 
 export type Trials = (number | null)[];
@@ -35,14 +35,6 @@ export function withRow(data: SheetData, athleteId: number, testId: number, row:
   return { ...data, results: row ? [...rest, row] : rest };
 }
 
-export function outsidePlausible(test: SheetTest, value: number | null): boolean {
-  if (value === null) return false;
-  return (
-    (test.plausibleMin !== null && value < test.plausibleMin) ||
-    (test.plausibleMax !== null && value > test.plausibleMax)
-  );
-}
-
 export function plausibleWords(test: SheetTest): string {
   const { plausibleMin: min, plausibleMax: max, unit } = test;
   if (min !== null && max !== null) return `${min}–${max} ${unit}`;
@@ -50,11 +42,18 @@ export function plausibleWords(test: SheetTest): string {
   return `at most ${max} ${unit}`;
 }
 
-/** "35.1, 34.8, –" plus the flag, for the Recent changes panel and conflict messages. */
-export function describeEntry(entry: { trials: Trials; flag: ResultFlag | null } | null | undefined): string {
+/**
+ * "35.1, 34.8, –" plus the flag, for the Recent changes panel and conflict messages; with the
+ * test's decimals, scores read as the sheet shows them ("1.80", not "1.8").
+ */
+export function describeEntry(
+  entry: { trials: Trials; flag: ResultFlag | null } | null | undefined,
+  decimals: number | null = null,
+): string {
   if (!entry) return "empty";
   const trials = trimTrials(entry.trials);
-  const parts = trials.length > 0 ? trials.map((v) => (v === null ? "–" : String(v))).join(", ") : "";
+  const score = (v: number) => (decimals === null ? String(v) : formatValue(v, decimals));
+  const parts = trials.length > 0 ? trials.map((v) => (v === null ? "–" : score(v))).join(", ") : "";
   const flag = entry.flag ? FLAG_LABELS[entry.flag] : "";
   return [parts, flag].filter(Boolean).join(" · ") || "empty";
 }

@@ -27,6 +27,10 @@ const athleteFields = {
   position: optionalText(60, "Position or event"),
   externalId: optionalText(60, "External id"),
   notes: optionalText(2000, "Notes", { multiline: true }),
+  /** Day the athlete's consent was recorded; without it they are not shown their results. */
+  consentRecordedOn: optionalIsoDate,
+  /** Under 18: day a parent's or guardian's consent was recorded (lib/consent.ts). */
+  guardianConsentOn: optionalIsoDate,
 };
 
 export const athleteCreateSchema = z.object(athleteFields);

@@ -42,3 +42,11 @@ export type ResultWriteInput = z.infer<typeof resultWriteSchema>;
 export const resultsBatchSchema = z.object({
   results: z.array(resultWriteSchema).min(1, "Nothing to save.").max(5000, "Save at most 5000 results at once."),
 });
+
+/** `DELETE /api/sessions/[id]?results=N`: the number of results the person saw in the confirm step. */
+export const sessionDeleteQuerySchema = z.object({
+  results: z
+    .string({ message: "Say how many results you confirmed deleting (results=…)." })
+    .regex(/^(0|[1-9][0-9]{0,8})$/, "The number of results is a whole number.")
+    .transform(Number),
+});

@@ -155,7 +155,7 @@ describe("Session sheet in the browser (coach, Academy U18 post-block)", () => {
     await page.keyboard.press("Tab");
     const issue = page.getByRole("alert").filter({ hasText: "Dr Tomás Everly changed this at" });
     await issue.waitFor();
-    expect(await issue.textContent()).toContain("now 38, 38.5, 38.1");
+    expect(await issue.textContent()).toContain("now 38.0, 38.5, 38.1");
     await screenshot(page, "session-sheet-conflict");
 
     await issue.getByRole("button", { name: "Overwrite with mine" }).click();

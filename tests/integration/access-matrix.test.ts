@@ -49,6 +49,8 @@ type Target = {
   /** A waiting invitation of the organisation, and a member (not its only owner) to aim at. */
   invitation: number;
   member: number;
+  /** How many results `session` holds (what a deletion's confirm step saw). */
+  sessionResults: number;
   /** A cell that holds a result (version 1) on `session`'s sheet, and a score for it. */
   cell: { athleteId: number; testId: number; value: number };
   csv: string;
@@ -79,6 +81,12 @@ const route = (path: string) => import(/* @vite-ignore */ `@/app/api${path}/rout
 //                                                anon owner sci coach coach2 self other otherOrg
 const MATRIX: Record<string, Entry> = {
   "GET /api/me": { expect: [401, 200, 200, 200, 200, 200, 200, 200], request: () => ({}) },
+  // Athletes only, each about themself: no id to aim with, so nobody can ask about another.
+  "GET /api/me/progress": { expect: [401, 403, 403, 403, 403, 200, 200, 403], request: () => ({}) },
+  "GET /api/me/export": {
+    expect: [401, 403, 403, 403, 403, 200, 200, 403],
+    request: () => ({ url: "http://test.local/api/me/export?format=json" }),
+  },
   "GET /api/squads": { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
   "POST /api/squads": {
     expect: [401, 201, 403, 403, 403, 403, 403, 201],
@@ -162,6 +170,15 @@ const MATRIX: Record<string, Entry> = {
     aimed: true,
     request: (t) => ({ params: { sessionId: `${t.session}` }, body: { version: 1, notes: "Matrix" } }),
   },
+  "DELETE /api/sessions/[sessionId]": {
+    // The coach did not create the demo's drafts: only their own drafts are theirs to delete. Not
+    // aimed: the other organisation's only session is published, so nobody may delete it there.
+    expect: [401, 200, 200, 403, 404, 403, 403, 404],
+    request: (t) => ({
+      params: { sessionId: `${t.session}` },
+      url: `http://test.local/api/sessions/${t.session}?results=${t.sessionResults}`,
+    }),
+  },
   "PUT /api/sessions/[sessionId]/results": {
     expect: [401, 200, 200, 200, 404, 403, 403, 404],
     aimed: true,
@@ -177,6 +194,11 @@ const MATRIX: Record<string, Entry> = {
         params: { sessionId: `${t.session}` },
         body: sheetWrite(t),
       }),
+    request: (t) => ({ params: { sessionId: `${t.session}` } }),
+  },
+  "GET /api/sessions/[sessionId]/publish-check": {
+    expect: [401, 200, 200, 403, 403, 403, 403, 404],
+    aimed: true,
     request: (t) => ({ params: { sessionId: `${t.session}` } }),
   },
   "GET /api/sessions/[sessionId]/audit": {
@@ -358,7 +380,13 @@ beforeAll(async () => {
         })
       ).rows[0][0],
     );
+  const resultsOf = async (sessionId: number) =>
+    Number(
+      (await getClient().execute({ sql: "SELECT count(*) FROM results WHERE session_id = ?", args: [sessionId] }))
+        .rows[0][0],
+    );
   club = {
+    sessionResults: await resultsOf(seniorDraft.id),
     squad: senior.id,
     baseline: await seniorPhase("baseline"),
     retest: await seniorPhase("retest"),
@@ -388,6 +416,7 @@ beforeAll(async () => {
   const rowingSquad = byName(world.squads, "Junior Sculling");
   const rowingSession = world.sessions.find((s) => s.squadId === rowingSquad.id)!.id;
   rowing = {
+    sessionResults: await resultsOf(rowingSession),
     squad: rowingSquad.id,
     athlete: rower.id,
     session: rowingSession,
@@ -469,6 +498,7 @@ describe("authorisation matrix", () => {
     expect(Object.keys(MATRIX).filter((key) => !onDisk.includes(key))).toEqual([]);
   });
 
+  // Each of the next three sends hundreds of requests: more than the default 20 s on a busy two-core machine.
   it("every caller × every route, aimed at the demo club's Senior Women records", async () => {
     for (const [key, entry] of Object.entries(MATRIX)) {
       if ("exempt" in entry) continue;
@@ -698,7 +728,7 @@ describe("authorisation matrix", () => {
       });
     }
     expectClean();
-  });
+  }, 90_000);
 
   it("the leak finder has teeth: the Senior Women roster, as the Academy coach would see it, is all leaks", async () => {
     await signInAs("owner@example.com");
