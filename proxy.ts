@@ -12,8 +12,10 @@ import { contentSecurityPolicy, runtimeSecurityHeaders, servedOverHttps, withHea
  * 3. signed-out visitors of app pages go to the sign-in page.
  */
 
-// Static files, the sign-in page and the API (which answers 401 itself) need no session.
-const PUBLIC_PATH = /^\/(?:_next\/|sign-in(?:\/|$)|icon\.svg$|favicon\.ico$)/;
+// Static files, the sign-in page, the pages a mailed link opens (accepting an invitation, choosing
+// a new password) and the API (which answers 401 itself) need no session.
+const PUBLIC_PATH =
+  /^\/(?:_next\/|sign-in(?:\/|$)|forgot-password(?:\/|$)|reset-password\/|invitations\/|icon\.svg$|favicon\.ico$)/;
 
 function nonce(): string {
   return btoa(String.fromCharCode(...crypto.getRandomValues(new Uint8Array(16))));

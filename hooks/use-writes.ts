@@ -10,18 +10,26 @@ import { queryKeys } from "@/lib/client/queries";
 import {
   addAthleteRequest,
   adoptTypicalErrorRequest,
+  createInvitationRequest,
   createSessionRequest,
   createSquadRequest,
   createTestRequest,
+  deleteAthleteRequest,
   deleteSessionRequest,
   deleteTestRequest,
   reliabilityFromFileRequest,
+  removeMemberRequest,
+  requestDeletionRequest,
+  resendInvitationRequest,
+  revokeInvitationRequest,
   saveReportRequest,
   updateAthleteRequest,
+  updateMemberRequest,
   updateSessionRequest,
   updateSquadRequest,
   updateTestRequest,
 } from "@/lib/client/writes";
+import type { DeletionRequestInput, InvitationCreateInput, MemberUpdateInput } from "@/lib/validation/people";
 import type { ReliabilityFileInput, SavedReportCreateInput, TypicalErrorAdoptInput } from "@/lib/validation/reports";
 import type {
   AthleteUpdateInput,
@@ -98,3 +106,44 @@ export const useAdoptTypicalError = () =>
 /** A Reliability check of a two-trial file: a POST that stores nothing, so it refreshes nothing. */
 export const useReliabilityFromFile = () =>
   useWrite((input: ReliabilityFileInput) => reliabilityFromFileRequest(input), []);
+
+/** Invitations show on the People page and their mail in the Outbox. */
+const INVITATION_FAMILIES = [queryKeys.people, queryKeys.outbox] as const;
+
+export const useCreateInvitation = () =>
+  useWrite((input: InvitationCreateInput) => createInvitationRequest(input), INVITATION_FAMILIES);
+
+export const useResendInvitation = () =>
+  useWrite((invitationId: number) => resendInvitationRequest(invitationId), INVITATION_FAMILIES);
+
+export const useRevokeInvitation = () =>
+  useWrite((invitationId: number) => revokeInvitationRequest(invitationId), INVITATION_FAMILIES);
+
+/** A role change or removal changes who coaches which squad. */
+const MEMBER_FAMILIES = [queryKeys.people, queryKeys.coaches, queryKeys.squads] as const;
+
+export const useUpdateMember = () =>
+  useWrite(
+    ({ userId, input }: { userId: number; input: MemberUpdateInput }) => updateMemberRequest(userId, input),
+    MEMBER_FAMILIES,
+  );
+
+export const useRemoveMember = () => useWrite((userId: number) => removeMemberRequest(userId), MEMBER_FAMILIES);
+
+/** A deleted athlete leaves rosters, sessions, reports and the result counts of tests. */
+export const useDeleteAthlete = () =>
+  useWrite(
+    (athleteId: number) => deleteAthleteRequest(athleteId),
+    [
+      queryKeys.people,
+      queryKeys.athletes,
+      queryKeys.squads,
+      queryKeys.sessions,
+      queryKeys.reports,
+      queryKeys.tests,
+      queryKeys.outbox,
+    ],
+  );
+
+/** The athlete's own request; nothing they can see changes. */
+export const useRequestDeletion = () => useWrite((input: DeletionRequestInput) => requestDeletionRequest(input), []);

@@ -8,6 +8,7 @@ export type ErrorCode =
   | "not_found"
   | "method_not_allowed"
   | "conflict"
+  | "gone"
   | "invalid_input"
   | "payload_too_large"
   | "unsupported_media_type"

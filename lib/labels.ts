@@ -28,6 +28,11 @@ export function formatValue(value: number | null | undefined, decimals: number):
   return value === null || value === undefined || !Number.isFinite(value) ? "–" : value.toFixed(decimals);
 }
 
+/** A moment (ms since 1970) as "2026-09-14 18:05 UTC": the same on the server and in any browser. */
+export function formatMoment(ms: number): string {
+  return `${new Date(ms).toISOString().slice(0, 16).replace("T", " ")} UTC`;
+}
+
 /** How a test turns its trials into the session's score: "Best of 3", "Mean of 2", or "One trial". */
 export function trialRuleWords(rule: TrialRule, trials: number): string {
   if (trials === 1) return "One trial";

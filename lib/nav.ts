@@ -1,4 +1,4 @@
-import { RELIABILITY_ROLES, STAFF } from "@/lib/auth/permissions";
+import { PEOPLE_ROLES, RELIABILITY_ROLES, STAFF } from "@/lib/auth/permissions";
 import type { Role } from "@/lib/domain";
 
 export type NavItem = { href: string; label: string; roles: readonly Role[] };
@@ -11,6 +11,8 @@ export const NAV_ITEMS: NavItem[] = [
   { href: "/sessions", label: "Sessions", roles: STAFF },
   { href: "/reports/change", label: "Change report", roles: STAFF },
   { href: "/reports/reliability", label: "Reliability check", roles: RELIABILITY_ROLES },
+  { href: "/people", label: "People", roles: PEOPLE_ROLES },
+  { href: "/outbox", label: "Outbox", roles: PEOPLE_ROLES },
   { href: "/", label: "My progress", roles: ["athlete"] },
 ];
 

@@ -10,7 +10,8 @@ export const ROUTE_METHODS = {
   "me/progress": ["GET"],
   "me/export": ["GET"],
   athletes: ["GET"],
-  "athletes/[athleteId]": ["GET", "PATCH"],
+  "athletes/[athleteId]": ["GET", "PATCH", "DELETE"],
+  "athletes/[athleteId]/deletion": ["GET"],
   "athletes/[athleteId]/results": ["GET"],
   "athletes/[athleteId]/history": ["GET"],
   coaches: ["GET"],
@@ -34,6 +35,19 @@ export const ROUTE_METHODS = {
   "reports/notes": ["GET", "POST"],
   "reports/notes/[reportId]": ["GET"],
   "work-to-do": ["GET"],
+  // The fixed address before the one with an id, which would match "accept" too.
+  "invitations/accept": ["POST"],
+  invitations: ["GET", "POST"],
+  "invitations/[invitationId]": ["DELETE"],
+  "invitations/[invitationId]/resend": ["POST"],
+  "password-reset": ["POST"],
+  "password-reset/confirm": ["POST"],
+  members: ["GET"],
+  "members/[userId]": ["GET", "PATCH", "DELETE"],
+  "me/deletion-request": ["POST"],
+  "deletion-requests": ["GET"],
+  outbox: ["GET"],
+  "outbox/[messageId]": ["GET"],
 } as const satisfies Record<string, readonly string[]>;
 
 const patternOf = (route: string) =>

@@ -52,6 +52,14 @@ export const canEditTestLibrary = isManager;
 /** The Reliability check measures a test's noise and may change the Test library's typical error. */
 export const canRunReliability = isManager;
 
+/** Members, roles, invitations and the mail outbox: the organisation's owner (PRODUCT.md §2). */
+export const canManagePeople = isOwner;
+
+/** Deleting an athlete and every trace of them, e.g. on their request: the owner. */
+export const canDeleteAthlete = isOwner;
+
+/** Asking the organisation to delete one's own record: athletes, about themselves. */
+export const canRequestDeletion = isAthlete;
 /** My progress and the data-rights export: an athlete's own results, read by the athlete alone. */
 export const hasOwnProgress = isAthlete;
 
@@ -65,5 +73,8 @@ export const STAFF = rolesWhere(isStaff);
 export const MANAGERS = rolesWhere(isManager);
 export const OWNERS = rolesWhere(isOwner);
 export const RELIABILITY_ROLES = rolesWhere(canRunReliability);
+export const PEOPLE_ROLES = rolesWhere(canManagePeople);
+export const DELETION_ROLES = rolesWhere(canDeleteAthlete);
+export const DELETION_REQUEST_ROLES = rolesWhere(canRequestDeletion);
 export const ATHLETES = rolesWhere(hasOwnProgress);
 export const PUBLISHERS = rolesWhere(canSeePublishAudience);

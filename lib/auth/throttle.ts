@@ -48,3 +48,62 @@ export async function reserveSignIn(email: string, address: string, now = Date.n
 export function releaseSignIn({ email, address, id }: Reservation) {
   return releaseAttempt(email, address, id);
 }
+
+/**
+ * Password-reset requests, per 15 minutes: a few per account (each one sends a mail, so more would
+ * let anyone flood a member's inbox) and a bounded number per address. Without a declared proxy all
+ * callers share one bucket, so that bucket gets a larger allowance.
+ */
+export const MAX_RESETS_PER_EMAIL = 3;
+export const MAX_RESETS_PER_ADDRESS = 10;
+const SHARED_BUCKET_RESETS = 100;
+const RESET_WINDOW_MS = 15 * 60_000;
+
+/**
+ * "send": record and mail; "quiet": this account had its share, answer as always but mail nothing
+ * (the answer must not differ, or it would tell who has an account); "held": the address asked too
+ * often, a 429 that says nothing about any account.
+ */
+export type ResetVerdict = "send" | "quiet" | "held";
+
+export async function reserveResetRequest(email: string, address: string, now = Date.now()): Promise<ResetVerdict> {
+  const known = address !== UNKNOWN_ADDRESS;
+  let verdict: ResetVerdict = "send";
+  // Own keys, so reset requests and failed sign-ins never count against each other.
+  await reserveAttempt(`reset:${email}`, `reset:${address}`, { since: now - RESET_WINDOW_MS, at: now }, (counts) => {
+    if (counts.byAddress >= (known ? MAX_RESETS_PER_ADDRESS : SHARED_BUCKET_RESETS)) verdict = "held";
+    else if (counts.byEmail >= MAX_RESETS_PER_EMAIL) verdict = "quiet";
+    return verdict === "send";
+  });
+  return verdict;
+}
+
+/** Wrong or spent links a minute from one address before it is held (accepting, resetting). */
+export const MAX_TOKEN_FAILURES_PER_ADDRESS = 20;
+const SHARED_BUCKET_TOKEN_FAILURES = 100;
+
+export const TOKEN_THROTTLED_MESSAGE = "Too many attempts with links that do not work. Wait a minute, then try again.";
+
+/**
+ * Counts one use of a mailed link before it is checked; null when the address is held. A token is
+ * 256 random bits, so this is not what keeps it unguessable: it keeps a script from hammering the
+ * password hashing behind it.
+ */
+export async function reserveTokenUse(
+  kind: "invitation" | "reset",
+  address: string,
+  now = Date.now(),
+): Promise<Reservation | null> {
+  const limit = address === UNKNOWN_ADDRESS ? SHARED_BUCKET_TOKEN_FAILURES : MAX_TOKEN_FAILURES_PER_ADDRESS;
+  const key = { email: `${kind}-link`, address: `${kind}-link:${address}` };
+  const id = await reserveAttempt(
+    key.email,
+    key.address,
+    { since: now - WINDOW_MS, at: now },
+    (counts) => counts.byAddress < limit,
+  );
+  return id === null ? null : { ...key, id };
+}
+
+/** The link worked: its use is not a failure. */
+export const releaseTokenUse = releaseSignIn;

@@ -6,11 +6,16 @@
  * invalidates a whole family with one prefix.
  */
 import { queryOptions } from "@tanstack/react-query";
+import type { previewAthleteDeletion } from "@/lib/data/athlete-deletion";
 import type { getAthleteHistory } from "@/lib/data/athlete-history";
 import type { listAthleteResults } from "@/lib/data/athlete-results";
 import type { getAthlete, listAthletes, listSquadAthletes } from "@/lib/data/athletes";
 import type { listSessionAudit } from "@/lib/data/audit";
+import type { listDeletionRequests } from "@/lib/data/deletion-requests";
+import type { listClaimableAthletes, listInvitations } from "@/lib/data/invitations";
+import type { listMembers } from "@/lib/data/members";
 import type { getMyProgress } from "@/lib/data/my-progress";
+import type { getCapturedMessage, getOutbox } from "@/lib/data/outbox";
 import type { getPublishCheck } from "@/lib/data/publish-mail";
 import type { getReliabilityFromFile, getReliabilityReport } from "@/lib/data/reliability";
 import type { getChangeReport, getSavedReport, listSavedReports } from "@/lib/data/reports";
@@ -33,6 +38,8 @@ export const queryKeys = {
   sessions: ["sessions"] as const,
   coaches: ["coaches"] as const,
   reports: ["reports"] as const,
+  people: ["people"] as const,
+  outbox: ["outbox"] as const,
 };
 
 export const squadQueries = {
@@ -221,3 +228,55 @@ export type ReliabilityFileData = Loaded<typeof getReliabilityFromFile>;
 /** A test–retest study as the screens show it, from two sessions or from a two-trial file. */
 export type ReliabilityStudy = ReliabilityData | ReliabilityFileData;
 export type SavedReportItem = Loaded<typeof listSavedReports>[number];
+
+export const peopleQueries = {
+  members: () =>
+    queryOptions({
+      queryKey: [...queryKeys.people, "members"] as const,
+      queryFn: () => fetchJson<{ members: Loaded<typeof listMembers> }>("/api/members").then((r) => r.members),
+    }),
+  /** Waiting invitations, and the athletes an athlete invitation may still claim. */
+  invitations: () =>
+    queryOptions({
+      queryKey: [...queryKeys.people, "invitations"] as const,
+      queryFn: () =>
+        fetchJson<{
+          invitations: Loaded<typeof listInvitations>;
+          claimableAthletes: Loaded<typeof listClaimableAthletes>;
+        }>("/api/invitations"),
+    }),
+  deletionRequests: () =>
+    queryOptions({
+      queryKey: [...queryKeys.people, "deletion-requests"] as const,
+      queryFn: () =>
+        fetchJson<{ requests: Loaded<typeof listDeletionRequests> }>("/api/deletion-requests").then((r) => r.requests),
+    }),
+  /** What deleting an athlete would remove (read when the confirmation opens). */
+  deletionPreview: (athleteId: number) =>
+    queryOptions({
+      queryKey: [...queryKeys.athletes, athleteId, "deletion"] as const,
+      queryFn: () => fetchJson<Loaded<typeof previewAthleteDeletion>>(`/api/athletes/${athleteId}/deletion`),
+    }),
+};
+
+export const outboxQueries = {
+  list: () =>
+    queryOptions({
+      queryKey: [...queryKeys.outbox] as const,
+      queryFn: () => fetchJson<Loaded<typeof getOutbox>>("/api/outbox"),
+    }),
+  message: (messageId: string) =>
+    queryOptions({
+      queryKey: [...queryKeys.outbox, messageId] as const,
+      queryFn: () =>
+        fetchJson<{ message: Loaded<typeof getCapturedMessage> }>(`/api/outbox/${encodeURIComponent(messageId)}`).then(
+          (r) => r.message,
+        ),
+    }),
+};
+
+export type MemberItem = Loaded<typeof listMembers>[number];
+export type InvitationItem = Loaded<typeof listInvitations>[number];
+export type ClaimableAthlete = Loaded<typeof listClaimableAthletes>[number];
+export type DeletionRequestItem = Loaded<typeof listDeletionRequests>[number];
+export type OutboxData = Loaded<typeof getOutbox>;

@@ -3,7 +3,12 @@
  * route validates with, the answer the return type of the lib/data function that performs it.
  * Components run these through React Query mutations (`hooks/use-writes.ts`), never bare.
  */
+import type { deleteAthlete } from "@/lib/data/athlete-deletion";
 import type { addAthleteToSquad, updateAthlete } from "@/lib/data/athletes";
+import type { requestDeletion } from "@/lib/data/deletion-requests";
+import type { acceptInvitation, createInvitation, resendInvitation, revokeInvitation } from "@/lib/data/invitations";
+import type { removeMember, updateMemberRole } from "@/lib/data/members";
+import type { confirmPasswordReset } from "@/lib/data/password-reset";
 import type { adoptTypicalError, getReliabilityFromFile } from "@/lib/data/reliability";
 import type { saveReport } from "@/lib/data/reports";
 import type { writeResults } from "@/lib/data/results";
@@ -12,6 +17,14 @@ import type { createSession, updateSession } from "@/lib/data/sessions";
 import type { createSquad, updateSquad } from "@/lib/data/squads";
 import type { createTest, deleteOrArchiveTest, updateTest } from "@/lib/data/tests";
 import type { undoLastChange } from "@/lib/data/undo";
+import type {
+  DeletionRequestInput,
+  InvitationAcceptInput,
+  InvitationCreateInput,
+  MemberUpdateInput,
+  PasswordResetConfirmInput,
+  PasswordResetRequestInput,
+} from "@/lib/validation/people";
 import type { ReliabilityFileInput, SavedReportCreateInput, TypicalErrorAdoptInput } from "@/lib/validation/reports";
 import type {
   AthleteUpdateInput,
@@ -77,4 +90,41 @@ export const reliabilityFromFileRequest = (input: ReliabilityFileInput) =>
 export const adoptTypicalErrorRequest = (testId: number, input: TypicalErrorAdoptInput) =>
   send<{ test: Loaded<typeof adoptTypicalError> }>(`/api/tests/${testId}/typical-error`, "POST", input).then(
     (r) => r.test,
+  );
+
+export const createInvitationRequest = (input: InvitationCreateInput) =>
+  send<{ invitation: Loaded<typeof createInvitation> }>("/api/invitations", "POST", input).then((r) => r.invitation);
+
+export const resendInvitationRequest = (invitationId: number) =>
+  send<{ invitation: Loaded<typeof resendInvitation> }>(`/api/invitations/${invitationId}/resend`, "POST").then(
+    (r) => r.invitation,
+  );
+
+export const revokeInvitationRequest = (invitationId: number) =>
+  send<{ revoked: Loaded<typeof revokeInvitation> }>(`/api/invitations/${invitationId}`, "DELETE").then(
+    (r) => r.revoked,
+  );
+
+export const updateMemberRequest = (userId: number, input: MemberUpdateInput) =>
+  send<{ member: Loaded<typeof updateMemberRole> }>(`/api/members/${userId}`, "PATCH", input).then((r) => r.member);
+
+export const removeMemberRequest = (userId: number) =>
+  send<{ removed: Loaded<typeof removeMember> }>(`/api/members/${userId}`, "DELETE").then((r) => r.removed);
+
+export const deleteAthleteRequest = (athleteId: number) =>
+  send<{ deleted: Loaded<typeof deleteAthlete> }>(`/api/athletes/${athleteId}`, "DELETE").then((r) => r.deleted);
+
+export const requestDeletionRequest = (input: DeletionRequestInput) =>
+  send<Loaded<typeof requestDeletion>>("/api/me/deletion-request", "POST", input);
+
+// Signed-out pages (no QueryClient there, as on the sign-in page): plain requests.
+export const acceptInvitationRequest = (input: InvitationAcceptInput) =>
+  send<{ accepted: Loaded<typeof acceptInvitation> }>("/api/invitations/accept", "POST", input).then((r) => r.accepted);
+
+export const passwordResetRequest = (input: PasswordResetRequestInput) =>
+  send<{ requested: true; message: string }>("/api/password-reset", "POST", input);
+
+export const passwordResetConfirmRequest = (input: PasswordResetConfirmInput) =>
+  send<{ reset: Loaded<typeof confirmPasswordReset> }>("/api/password-reset/confirm", "POST", input).then(
+    (r) => r.reset,
   );

@@ -1,6 +1,6 @@
 import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
-import { getDb, writeTransaction } from "@/db/client";
+import { getDb, type Transaction, writeTransaction } from "@/db/client";
 import { athletes, memberships, organizations, users } from "@/db/schema";
 import { isAthlete } from "@/lib/auth/permissions";
 import type { Role } from "@/lib/domain";
@@ -70,14 +70,16 @@ export async function sessionIsCurrent({ userId, sessionVersion }: SessionClaims
 /**
  * Ends every session of this user, on every device. Call it when a password is changed or
  * reset and when a member is removed: the next request with any older token is signed out.
+ * Inside a write transaction pass its `tx`, so the sessions end exactly when the change commits.
  */
-export async function endAllSessions(userId: number): Promise<void> {
-  await writeTransaction((tx) =>
-    tx
+export async function endAllSessions(userId: number, tx?: Transaction): Promise<void> {
+  const end = (t: Transaction) =>
+    t
       .update(users)
       .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
-      .where(eq(users.id, userId)),
-  );
+      .where(eq(users.id, userId));
+  if (tx) await end(tx);
+  else await writeTransaction(end);
 }
 
 /**

@@ -28,7 +28,8 @@ export type ResultSnapshot = {
 
 export type AuditEntry = {
   action: AuditAction;
-  entity: { type: AuditEntityType; id: number };
+  /** `id` null: the record is gone and its id must not outlive it (a deleted athlete). */
+  entity: { type: AuditEntityType; id: number | null };
   /** The session the change belongs to, so its sheet can list and undo it. */
   sessionId?: number;
   before?: unknown;

@@ -56,6 +56,7 @@ function smtpSender(config: MailConfig): Sender {
 
 const globalSend = globalThis as typeof globalThis & {
   __changewiseMailRun?: Promise<number>;
+  __changewiseMailAgain?: boolean;
   __changewiseMailTimer?: ReturnType<typeof setInterval>;
 };
 
@@ -75,9 +76,18 @@ export function keepSendingMail() {
  */
 export function sendQueuedMail(now = () => new Date(), sender?: Sender): Promise<number> {
   const running = globalSend.__changewiseMailRun;
-  if (running) return running;
+  if (running) {
+    // That run may have picked its batch before this caller's mail was queued; without another
+    // run straight after it, the mail would wait for the next minute's timer.
+    globalSend.__changewiseMailAgain = true;
+    return running;
+  }
   const run = deliver(now, sender).finally(() => {
     globalSend.__changewiseMailRun = undefined;
+    if (globalSend.__changewiseMailAgain) {
+      globalSend.__changewiseMailAgain = false;
+      void sendQueuedMail(now, sender);
+    }
   });
   globalSend.__changewiseMailRun = run;
   // The caller does not wait: a failure is recorded on the message, never thrown at a request.

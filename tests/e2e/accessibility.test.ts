@@ -8,8 +8,10 @@ import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { openBrowser, screenshot, signInThroughForm } from "../helpers/browser";
 import { HttpSession } from "../helpers/http";
+import { linkIn, waitForMail } from "../helpers/outbox-files";
 
 const baseUrl = inject("baseUrl");
+const outboxDir = inject("outboxDir");
 const axePath = createRequire(import.meta.url).resolve("axe-core/axe.min.js");
 
 type Violation = { id: string; impact: string | null; nodes: { target: string[] }[] };
@@ -42,6 +44,10 @@ async function audit(page: Page, name: string) {
 describe("accessibility and fit of every screen", () => {
   let browser: Awaited<ReturnType<typeof openBrowser>>;
   let paths: string[] = [];
+  /** The owner's own screens. */
+  const ownerPaths = ["/people", "/outbox"];
+  /** Signed-out pages a mailed link opens (a working invitation and reset link, and a spent one). */
+  let linkPaths: string[] = [];
 
   beforeAll(async () => {
     browser = await openBrowser();
@@ -62,6 +68,28 @@ describe("accessibility and fit of every screen", () => {
       "/reports/change",
       "/reports/reliability",
       "/reports/reliability/file",
+    ];
+    // Links to open on a phone: an invitation (the owner sends it) and a reset link (not used, so
+    // the demo password stays).
+    const owner = new HttpSession(baseUrl);
+    await owner.signIn("owner@example.com");
+    const invited = await owner.json("/api/invitations", {
+      method: "POST",
+      headers: { "content-type": "application/json", origin: baseUrl },
+      body: JSON.stringify({ email: "a11y.invitee@example.com", role: "scientist" }),
+    });
+    expect(invited.status).toBe(201);
+    const reset = await fetch(`${baseUrl}/api/password-reset`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ email: "coach@example.com" }),
+    });
+    expect(reset.status).toBe(202);
+    const path = (link: string) => new URL(link).pathname;
+    linkPaths = [
+      path(linkIn(await waitForMail(outboxDir, "a11y.invitee@example.com", /^Join /), "invitations")),
+      path(linkIn(await waitForMail(outboxDir, "coach@example.com", /^Reset /), "reset-password")),
+      `/invitations/${"A".repeat(43)}`,
     ];
   });
   afterAll(() => browser?.close());
@@ -87,6 +115,44 @@ describe("accessibility and fit of every screen", () => {
     },
     120_000,
   );
+
+  it.each([1280, 820])(
+    "owner screens at %i px",
+    async (width) => {
+      const page = await browser.context.newPage();
+      await signInThroughForm(page, baseUrl, "owner@example.com");
+      const problems: string[] = [];
+      await page.setViewportSize({ width, height: 900 });
+      for (const path of ownerPaths) {
+        await page.goto(`${baseUrl}${path}`);
+        await page.waitForSelector("h1");
+        const { violations, sideways } = await audit(page, `a11y-${width}-${path.replaceAll("/", "_")}`);
+        problems.push(...violations.map((v) => `${width}px ${path}: ${v}`));
+        if (sideways > 0) problems.push(`${width}px ${path}: scrolls sideways by ${sideways}px`);
+      }
+      await page.close();
+      expect(problems).toEqual([]);
+    },
+    60_000,
+  );
+
+  it("the pages a mailed link opens, and forgotten password, on a 390 px phone", async () => {
+    const { context, close } = await openBrowser();
+    const page = await context.newPage();
+    await page.setViewportSize({ width: 390, height: 844 });
+    const problems: string[] = [];
+    for (const [i, path] of ["/forgot-password", ...linkPaths].entries()) {
+      await page.goto(`${baseUrl}${path}`);
+      await page.waitForSelector("h1");
+      const name = `a11y-390-${["forgot-password", "invitation", "reset-password", "invitation-spent"][i]}`;
+      const { violations, sideways } = await audit(page, name);
+      problems.push(...violations.map((v) => `390px ${path.slice(0, 20)}…: ${v}`));
+      if (sideways > 0) problems.push(`390px ${path.slice(0, 20)}…: scrolls sideways by ${sideways}px`);
+    }
+    await page.close();
+    await close();
+    expect(problems).toEqual([]);
+  });
 
   it("sign-in and the athlete's home on a 390 px phone", async () => {
     const page = await browser.context.newPage();

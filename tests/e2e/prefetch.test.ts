@@ -53,6 +53,16 @@ describe("server-prefetched pages", () => {
       );
     }
 
+    const owner = new HttpSession(baseUrl);
+    await owner.signIn("owner@example.com");
+    for (const [path, expected] of [
+      ["/people", ["Rhiannon Cole", "scientist@example.com", "Invitations ("]],
+      ["/outbox", ["Queue ("]],
+    ] as const) {
+      const body = await html(owner, path);
+      for (const text of expected) expect(body, `${path} holds ${text}`).toContain(text);
+    }
+
     const athlete = new HttpSession(baseUrl);
     await athlete.signIn("athlete@example.com");
     const own = await athlete.json("/api/me");

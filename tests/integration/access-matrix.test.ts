@@ -9,6 +9,7 @@ import { dirname } from "node:path";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { getClient } from "@/db/client";
 import { loadActor } from "@/lib/data/actors";
+import { createInvitation } from "@/lib/data/invitations";
 import { saveReport } from "@/lib/data/reports";
 import { discoverApiRoutes, routeKeys } from "../helpers/api-routes";
 import { setupTestDatabase, userIdOf } from "../helpers/db";
@@ -45,6 +46,9 @@ type Target = {
   retest: number;
   /** A saved Change report of the squad. */
   savedReport: number;
+  /** A waiting invitation of the organisation, and a member (not its only owner) to aim at. */
+  invitation: number;
+  member: number;
   /** How many results `session` holds (what a deletion's confirm step saw). */
   sessionResults: number;
   /** A cell that holds a result (version 1) on `session`'s sheet, and a score for it. */
@@ -270,6 +274,70 @@ const MATRIX: Record<string, Entry> = {
     request: () => ({ params: { reportId: `${club.savedReport}` } }),
   },
   "GET /api/work-to-do": { expect: [401, 200, 200, 200, 200, 403, 403, 200], request: () => ({}) },
+  "GET /api/invitations": { expect: [401, 200, 403, 403, 403, 403, 403, 200], request: () => ({}) },
+  "POST /api/invitations": {
+    expect: [401, 201, 403, 403, 403, 403, 403, 201],
+    request: () => ({ body: { email: "matrix.invite@example.com", role: "coach" } }),
+  },
+  "DELETE /api/invitations/[invitationId]": {
+    expect: [401, 200, 403, 403, 403, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { invitationId: `${t.invitation}` } }),
+  },
+  "POST /api/invitations/[invitationId]/resend": {
+    expect: [401, 200, 403, 403, 403, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { invitationId: `${t.invitation}` } }),
+  },
+  // Public: the token is the credential, so every caller gets the same answer for one that opens nothing.
+  "POST /api/invitations/accept": {
+    expect: [404, 404, 404, 404, 404, 404, 404, 404],
+    request: () => ({ body: { token: "A".repeat(43), name: "Matrix Person", password: "matrix-password" } }),
+  },
+  "POST /api/password-reset": {
+    expect: [202, 202, 202, 202, 202, 202, 202, 202],
+    request: () => ({ body: { email: "matrix.nobody@example.com" } }),
+  },
+  "POST /api/password-reset/confirm": {
+    expect: [404, 404, 404, 404, 404, 404, 404, 404],
+    request: () => ({ body: { token: "A".repeat(43), password: "matrix-password" } }),
+  },
+  "GET /api/members": { expect: [401, 200, 403, 403, 403, 403, 403, 200], request: () => ({}) },
+  "GET /api/members/[userId]": {
+    expect: [401, 200, 403, 403, 403, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { userId: `${t.member}` } }),
+  },
+  // Not aimed: the other organisation's only member is its last owner (409 for a change of role).
+  "PATCH /api/members/[userId]": {
+    expect: [401, 200, 403, 403, 403, 403, 403, 404],
+    request: (t) => ({ params: { userId: `${t.member}` }, body: { role: "scientist" } }),
+  },
+  "DELETE /api/members/[userId]": {
+    expect: [401, 200, 403, 403, 403, 403, 403, 404],
+    request: (t) => ({ params: { userId: `${t.member}` } }),
+  },
+  "POST /api/me/deletion-request": {
+    expect: [401, 403, 403, 403, 403, 201, 201, 403],
+    request: () => ({ body: { message: "Matrix request" } }),
+  },
+  "GET /api/deletion-requests": { expect: [401, 200, 403, 403, 403, 403, 403, 200], request: () => ({}) },
+  "GET /api/athletes/[athleteId]/deletion": {
+    expect: [401, 200, 403, 403, 403, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { athleteId: `${t.athlete}` } }),
+  },
+  "DELETE /api/athletes/[athleteId]": {
+    expect: [401, 200, 403, 403, 403, 403, 403, 404],
+    aimed: true,
+    request: (t) => ({ params: { athleteId: `${t.athlete}` } }),
+  },
+  "GET /api/outbox": { expect: [401, 200, 403, 403, 403, 403, 403, 200], request: () => ({}) },
+  // Mail goes nowhere in these tests (no local fake), so there is no captured message to read.
+  "GET /api/outbox/[messageId]": {
+    expect: [401, 404, 403, 403, 403, 403, 403, 404],
+    request: () => ({ params: { messageId: "2026-01-01T00-00-00.000Z-1-1.eml" } }),
+  },
   "GET /api/auth/[...nextauth]": {
     exempt:
       "next-auth's own endpoints (csrf, providers, session): public by design; sign-in throttling and sign-out have their own tests",
@@ -327,6 +395,8 @@ beforeAll(async () => {
     preSession: seniorPre.id,
     test: cmj.id,
     savedReport: 0,
+    invitation: 0,
+    member: await userIdOf("coach2@example.com"),
     cell: { athleteId: tessa.id, testId: cmj.id, value: 31.5 },
     csv: `${tessa.externalId},Countermovement jump,1,31.5`,
   };
@@ -354,10 +424,17 @@ beforeAll(async () => {
     baseline: rowingSession,
     retest: rowingSession,
     savedReport: 0,
+    invitation: 0,
+    member: await userIdOf("owner@other.example.com"),
     test: erg.id,
     cell: { athleteId: rower.id, testId: erg.id, value: 451.2 },
     csv: `${rower.externalId},2000 m ergometer,1,451.2`,
   };
+  // A waiting invitation in each organisation, sent by its owner.
+  const clubOwner = (await loadActor(await userIdOf("owner@example.com")))!;
+  const otherOwner = (await loadActor(await userIdOf("owner@other.example.com")))!;
+  club.invitation = (await createInvitation(clubOwner, { email: "matrix.waiting@example.com", role: "coach" })).id;
+  rowing.invitation = (await createInvitation(otherOwner, { email: "matrix.rower@example.com", role: "coach" })).id;
   template = `${dirname(env.url.slice("file:".length))}/template.db`;
   await snapshotTo(template);
   switchToFreshCopy(template, dirname(template));
@@ -439,7 +516,7 @@ describe("authorisation matrix", () => {
       }
     }
     expectClean();
-  }, 90_000);
+  }, 180_000);
 
   it("every caller × every route with an id, aimed at the other organisation's records", async () => {
     for (const [key, entry] of Object.entries(MATRIX)) {
@@ -462,7 +539,7 @@ describe("authorisation matrix", () => {
       }
     }
     expectClean();
-  }, 90_000);
+  }, 180_000);
 
   it("ids of other organisations and other squads sent in bodies and queries are refused", async () => {
     const academy = byName(world.squads, "Academy U18");

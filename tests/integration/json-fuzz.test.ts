@@ -60,6 +60,29 @@ const asJson = (kind: string, value: unknown): FuzzCase => ({
 
 /** A valid body for every JSON route; the fuzzer breaks it. Versions are read fresh each time. */
 const BASES: Record<string, Base> = {
+  "POST /api/invitations": {
+    params: () => ({}),
+    body: async () => ({ email: "fuzz.invite@example.com", role: "coach" }),
+    specials: (i) => [
+      asJson("athlete with an account", { email: "fuzz.athlete@example.com", role: "athlete", athleteId: i.tessa }),
+      asJson("staff role naming an athlete", { email: "fuzz.staff@example.com", role: "coach", athleteId: i.tessa }),
+    ],
+  },
+  // A well-formed token that opens nothing: the fuzzer's variations must never reach a 500.
+  "POST /api/invitations/accept": {
+    params: () => ({}),
+    body: async () => ({ token: "A".repeat(43), name: "Fuzz Person", password: "a-long-password" }),
+  },
+  "POST /api/password-reset": { params: () => ({}), body: async () => ({ email: "fuzz.reset@example.com" }) },
+  "POST /api/password-reset/confirm": {
+    params: () => ({}),
+    body: async () => ({ token: "A".repeat(43), password: "a-long-password" }),
+  },
+  "PATCH /api/members/[userId]": {
+    params: (i) => ({ userId: `${i.coach2}` }),
+    body: async () => ({ role: "scientist" }),
+  },
+  "POST /api/me/deletion-request": { params: () => ({}), body: async () => ({ message: "Fuzzed request" }) },
   "POST /api/squads": { params: () => ({}), body: async () => ({ name: "Fuzz Squad", sport: "Rugby" }) },
   "PATCH /api/squads/[squadId]": {
     params: (i) => ({ squadId: `${i.senior}` }),

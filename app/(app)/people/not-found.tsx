@@ -1,0 +1,6 @@
+import { RecordNotFound } from "@/components/record-not-found";
+
+/** Anyone but the owner meets this: the page exists for owners only. */
+export default function PeopleNotFound() {
+  return <RecordNotFound what="People" back="/" backLabel="Back to Squads" />;
+}
