@@ -2,6 +2,7 @@
 
 import { useSuspenseQuery } from "@tanstack/react-query";
 import { athleteQueries } from "@/lib/client/queries";
+import { AskForDeletion } from "./ask-for-deletion";
 import { ProgressTestCard } from "./progress-test-card";
 
 /** My progress: consent first, then one card per test, then the athlete's own data to take away. */
@@ -51,6 +52,7 @@ export function MyProgress() {
             Download as JSON
           </a>
         </p>
+        <AskForDeletion />
       </div>
     </div>
   );
