@@ -7,7 +7,7 @@ import { SignOutButton } from "./sign-out-button";
 export function AppShell({ actor, children }: { actor: Actor; children: React.ReactNode }) {
   return (
     <div className="min-h-screen">
-      <header className="bg-ink text-white print:hidden">
+      <header className="on-dark bg-ink text-white print:hidden">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <Link href="/" className="text-lg font-bold tracking-tight">
             Changewise
