@@ -19,8 +19,10 @@ export function AskForDeletion() {
     <>
       {sent ? (
         <p role="status" className="text-sm">
-          Your request has reached your club&apos;s owner. They will delete your record and results, or tell you why
-          something must be kept.
+          {ask.data?.created === false
+            ? `You already asked on ${new Date(ask.data.request.requestedAt).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" })}; your club's owner has that request.`
+            : "Your request has reached your club's owner."}{" "}
+          They will delete your record and results, or tell you why something must be kept.
         </p>
       ) : (
         <button type="button" className="btn-quiet" onClick={() => setOpen(true)}>

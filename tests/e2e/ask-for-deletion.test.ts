@@ -1,4 +1,7 @@
-/** An athlete asks for their data to be deleted from My progress, on a phone; the request reaches the owner. */
+/**
+ * An athlete asks for their data to be deleted from My progress, on a phone; the request reaches
+ * the owner. Tessa (athlete@): the People browser test makes Priya's request.
+ */
 import { afterAll, beforeAll, describe, expect, inject, it } from "vitest";
 import { openBrowser, screenshot, signInThroughForm } from "../helpers/browser";
 import { HttpSession } from "../helpers/http";
@@ -15,7 +18,7 @@ describe("asking for deletion", () => {
   it("sends the request with a message, and the owner's list holds it", async () => {
     const page = await browser.context.newPage();
     await page.setViewportSize({ width: 390, height: 844 });
-    await signInThroughForm(page, baseUrl, "athlete2@example.com");
+    await signInThroughForm(page, baseUrl, "athlete@example.com");
     await page.getByRole("button", { name: "Ask for my data to be deleted…" }).click();
     const dialog = page.getByRole("dialog", { name: "Ask your club to delete your data?" });
     await dialog.getByLabel(/A message for the owner/).fill("I have left the club.");
