@@ -53,7 +53,8 @@ export function ImportDone({
   return (
     <section role="status" aria-labelledby="done-h" className="card border-gain p-6">
       <h2 id="done-h" className="text-xl font-bold">
-        Imported {written} {written === 1 ? "result" : "results"}
+        {written} {written === 1 ? "result" : "results"} stored
+        {c.trialsReplaced > 0 && `, ${c.trialsReplaced} ${c.trialsReplaced === 1 ? "value" : "values"} replaced`}
       </h2>
       <p className="mt-1 text-ink-soft">
         From <span className="font-semibold text-ink">{result.filename}</span>: <span className="num">{c.values}</span>{" "}
@@ -72,8 +73,16 @@ export function ImportDone({
         ) : null}
         .
       </p>
+      {result.suspects.length > 0 && (
+        <p className="mt-2 w-fit rounded-md border border-dashed border-decline px-3 py-1 text-sm">
+          <span className="font-semibold">
+            {result.suspects.length} {result.suspects.length === 1 ? "score" : "scores"} to double-check
+          </span>{" "}
+          — stored as in the file; the Session sheet shows which and why.
+        </p>
+      )}
       <p className="mt-1 text-sm text-ink-soft">
-        The file itself is kept with the session (upload {result.uploadId}), so every value can be traced back to it.
+        The file itself is kept with the session, so every value can be traced back to it.
       </p>
       <div className="mt-4 flex flex-wrap gap-2">
         <Link href={`/sessions/${sessionId}`} className="btn-primary">

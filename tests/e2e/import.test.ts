@@ -93,7 +93,7 @@ describe("Import in the browser", () => {
     expect(await importButton.isEnabled()).toBe(true);
     await screenshot(page, "import-preview-good");
     await importButton.click();
-    await page.getByRole("heading", { name: "Imported 2 results" }).waitFor();
+    await page.getByRole("heading", { name: "2 results stored" }).waitFor();
     await screenshot(page, "import-done");
     await page.getByRole("link", { name: "Back to the Session sheet" }).click();
     await page.waitForURL(`${baseUrl}/sessions/${session.id}`);
@@ -119,7 +119,7 @@ describe("Import in the browser", () => {
     await one.waitFor();
     await expect.poll(() => one.isEnabled()).toBe(true);
     await one.click();
-    await page.getByRole("heading", { name: "Imported 1 result" }).waitFor();
+    await page.getByRole("heading", { name: "1 result stored", exact: true }).waitFor();
 
     await page.getByRole("button", { name: "Import another file" }).click();
     await input.setInputFiles({
@@ -133,7 +133,7 @@ describe("Import in the browser", () => {
     await page.getByLabel(/Replace the 1 stored value/).check();
     await screenshot(page, "import-replace");
     await replaceButton.click();
-    await page.getByRole("heading", { name: "Imported 1 result" }).waitFor();
+    await page.getByRole("heading", { name: "1 result stored, 1 value replaced" }).waitFor();
     const sheet = await (await page.request.get(`${baseUrl}/api/sessions/${session.id}`)).json();
     const luca = sheet.athletes.find((a: any) => a.name === "Luca Dempsey");
     const cmj = sheet.tests.find((t: any) => t.name === "Countermovement jump");
