@@ -154,6 +154,22 @@ describe("accessibility and fit of every screen", () => {
     expect(problems).toEqual([]);
   });
 
+  it("a coach's reading screens on a 390 px phone: no sideways page scrolling", async () => {
+    const page = await browser.context.newPage();
+    await page.setViewportSize({ width: 390, height: 844 });
+    await signInThroughForm(page, baseUrl, "coach@example.com");
+    const problems: string[] = [];
+    for (const path of ["/", "/squads", "/tests", "/sessions"]) {
+      await page.goto(`${baseUrl}${path}`);
+      await page.waitForSelector("h1");
+      const { violations, sideways } = await audit(page, `a11y-390-coach-${path.replaceAll("/", "_") || "home"}`);
+      problems.push(...violations.map((v) => `390px ${path}: ${v}`));
+      if (sideways > 0) problems.push(`390px ${path}: scrolls sideways by ${sideways}px`);
+    }
+    await page.close();
+    expect(problems).toEqual([]);
+  }, 120_000);
+
   it("sign-in and the athlete's home on a 390 px phone", async () => {
     const page = await browser.context.newPage();
     await page.setViewportSize({ width: 390, height: 844 });
