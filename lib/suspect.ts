@@ -99,9 +99,11 @@ export function suspectReasons(
 export type Suspect = { athleteId: number; testId: number; trial: number; value: number; reasons: SuspectReason[] };
 
 /**
- * Every suspect trial of one result, trials numbered from 1 as the sheet shows them. Of two
- * trials that disagree, when only one is also out of range or far from history, that one alone
- * is the suspect: the other reasons tell which is wrong.
+ * Every suspect trial of one result, trials numbered from 1 as the sheet shows them. Two
+ * refinements keep one slip from reading as several: of two trials that disagree, when only one
+ * is also out of range or far from history, that one alone is the suspect; and when several
+ * trials are far from the last published score (a real jump in form moves them all), only the
+ * farthest carries that reason.
  */
 export function suspectTrials(
   athleteId: number,
@@ -109,12 +111,20 @@ export function suspectTrials(
   trials: readonly (number | null)[],
   ctx: SuspectContext,
 ): Suspect[] {
-  const found: Suspect[] = [];
+  let found: Suspect[] = [];
   trials.forEach((value, index) => {
     if (value === null) return;
     const reasons = suspectReasons(value, trials, ctx);
     if (reasons.length > 0) found.push({ athleteId, testId, trial: index + 1, value, reasons });
   });
+  const far = found.filter((s) => s.reasons.some((r) => r.code === "far-from-history"));
+  if (far.length > 1 && ctx.previous !== null) {
+    const previous = ctx.previous;
+    const farthest = far.reduce((a, b) => (Math.abs(b.value - previous) > Math.abs(a.value - previous) ? b : a));
+    found = found
+      .map((s) => (s === farthest ? s : { ...s, reasons: s.reasons.filter((r) => r.code !== "far-from-history") }))
+      .filter((s) => s.reasons.length > 0);
+  }
   const onlyApart = (s: Suspect) => s.reasons.every((r) => r.code === "far-from-trials");
   if (found.some((s) => !onlyApart(s))) return found.filter((s) => !onlyApart(s));
   return found;

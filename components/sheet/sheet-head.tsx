@@ -8,7 +8,7 @@ export function SheetHead({ tests }: { tests: SheetTest[] }) {
         <th
           rowSpan={2}
           scope="col"
-          className="sticky left-0 z-30 min-w-44 border-b border-line bg-white px-3 py-2 align-bottom text-xs uppercase tracking-wide text-ink-faint"
+          className="sticky left-0 z-30 min-w-32 border-b xl:min-w-44 border-line bg-white px-3 py-2 align-bottom text-xs uppercase tracking-wide text-ink-faint"
         >
           Athlete
         </th>

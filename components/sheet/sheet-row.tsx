@@ -46,11 +46,11 @@ export function SheetRow({
       <tr className="group">
         <th
           scope="row"
-          className="sticky left-0 z-10 border-b border-line bg-white px-3 py-1 text-left font-semibold group-hover:bg-paper"
+          className="sticky left-0 z-10 max-w-36 border-b border-line bg-white px-3 py-1 text-left font-semibold group-hover:bg-paper xl:max-w-none"
         >
           <Link
             href={`/athletes/${athlete.id}`}
-            className="block whitespace-nowrap text-sm underline-offset-2 hover:underline"
+            className="block text-sm underline-offset-2 hover:underline xl:whitespace-nowrap"
             title={`Athlete history of ${athlete.name}`}
           >
             {athlete.name}
@@ -102,7 +102,7 @@ export function SheetRow({
                     ) : (
                       <span
                         aria-describedby={suspect?.noteId}
-                        className={`num block w-[4.25rem] rounded px-1.5 py-2 text-right ${suspect ? "border border-dashed border-decline" : ""}`}
+                        className={`num block w-[3.5rem] rounded px-1 py-2 text-right xl:w-[4.25rem] xl:px-1.5 ${suspect ? "border border-dashed border-decline" : ""}`}
                       >
                         <span className="sr-only">{trialLabel}: </span>
                         {v === null ? "–" : paddedNumber(v, test.decimals)}
@@ -111,7 +111,7 @@ export function SheetRow({
                   </td>
                 );
               })}
-              <td className="whitespace-nowrap border-b border-line px-2 py-1 text-right">
+              <td className="whitespace-nowrap border-b border-line px-1 py-1 text-right xl:px-2">
                 <span className="flex items-center justify-end gap-1.5">
                   <span className="flex flex-col items-end leading-tight">
                     <span className="num text-base font-semibold">
@@ -141,7 +141,7 @@ export function SheetRow({
                     data-col={navIndex.get(`${test.id}:flag`) ?? 0}
                     value={shown.flag ?? ""}
                     onChange={(e) => sheet.setFlag(athlete.id, test.id, (e.target.value || null) as ResultFlag | null)}
-                    className={`h-10 w-[5.5rem] rounded border border-control bg-white px-1 text-sm focus:border-gain focus:outline-none focus:ring-2 focus:ring-gain ${
+                    className={`h-10 w-16 rounded border border-control bg-white px-1 text-sm xl:w-[5.5rem] focus:border-gain focus:outline-none focus:ring-2 focus:ring-gain ${
                       shown.flag ? "font-semibold" : "text-ink-faint"
                     }`}
                   >

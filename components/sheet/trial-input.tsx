@@ -81,7 +81,7 @@ export const TrialInput = memo(function TrialInput({
             onRevert();
           }
         }}
-        className={`num h-10 w-[4.25rem] rounded border px-1.5 text-right text-base focus:border-gain focus:outline-none focus:ring-2 focus:ring-gain ${tone} ${
+        className={`num h-10 w-[3.5rem] rounded border px-1 text-right xl:w-[4.25rem] xl:px-1.5 text-base focus:border-gain focus:outline-none focus:ring-2 focus:ring-gain ${tone} ${
           dimmed ? "text-ink-faint" : "text-ink"
         }`}
       />

@@ -76,6 +76,12 @@ describe("suspectReasons", () => {
     expect(suspectTrials(7, 1, [3.85, 38.5], cmj).map((s) => [s.trial, s.value])).toEqual([[1, 3.85]]);
   });
 
+  it("names only the farthest of several trials that are all far from the last published score", () => {
+    // A real jump in form moves every trial: one note for the result, not three.
+    const cmj = { plausibleMin: 15, plausibleMax: 70, typicalError: null, betweenAthleteSd: 2.7, previous: 35 };
+    expect(suspectTrials(7, 1, [42, 40.8, 41.5], cmj).map((s) => [s.trial, s.value])).toEqual([[1, 42]]);
+  });
+
   it("respects each end of the plausible range on its own", () => {
     expect(codes(1.2, [], { ...sprint, previous: null, plausibleMax: null })).toEqual(["outside-plausible"]);
     expect(codes(3, [], { ...sprint, previous: null, plausibleMin: null })).toEqual(["outside-plausible"]);
