@@ -47,6 +47,11 @@ export function ProblemList({
                   {a.reason === "ambiguous" ? "two athletes share this name · " : ""}
                   {rowsText(a.rows, a.count)}
                 </span>
+                {a.suggestions && a.suggestions.length > 0 && (
+                  <span className="block text-ink">
+                    did you mean <span className="font-semibold">{a.suggestions.join(" or ")}</span>?
+                  </span>
+                )}
               </li>
             ))}
             {(unknownAthleteCount ?? unknownAthletes.length) > 40 && (
@@ -68,6 +73,11 @@ export function ProblemList({
                     : "not in the Test library"}{" "}
                   · {t.column ? "column header" : rowsText(t.rows, t.count)}
                 </span>
+                {t.suggestions && t.suggestions.length > 0 && (
+                  <span className="block text-ink">
+                    did you mean <span className="font-semibold">{t.suggestions.join(" or ")}</span>?
+                  </span>
+                )}
               </li>
             ))}
           </ul>

@@ -11,6 +11,7 @@ import type { CsvTable } from "./csv";
 import { MAX_LISTED_ERRORS, MAX_SHOWN_CHARS, PREVIEW_ROWS } from "./limits";
 import { trialLimit } from "./mapping";
 import { parseScore } from "./numbers";
+import { suggestNames } from "./suggest";
 import type {
   ColumnOf,
   ImportAthlete,
@@ -405,9 +406,36 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
     errorCount: errors.count,
     warnings: warnings.items,
     warningCount: warnings.count,
-    unknownAthletes: unknownAthletes.list().slice(0, MAX_LISTED_ERRORS),
+    // Suggestions for the listed ones only: a bounded list against a squad's roster and battery.
+    unknownAthletes: unknownAthletes
+      .list()
+      .slice(0, MAX_LISTED_ERRORS)
+      .map((a) =>
+        a.reason === "unknown"
+          ? {
+              ...a,
+              suggestions: suggestNames(
+                a.value,
+                context.athletes.map((x) => x.name),
+              ),
+            }
+          : a,
+      ),
     unknownAthleteCount: unknownAthletes.byKey.size,
-    unknownTests: unknownTests.list().slice(0, MAX_LISTED_ERRORS),
+    unknownTests: unknownTests
+      .list()
+      .slice(0, MAX_LISTED_ERRORS)
+      .map((t) =>
+        t.reason === "unknown"
+          ? {
+              ...t,
+              suggestions: suggestNames(
+                t.name,
+                context.tests.map((x) => x.name),
+              ),
+            }
+          : t,
+      ),
     sample,
   };
 }

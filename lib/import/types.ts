@@ -57,13 +57,22 @@ export type ImportGroup = { athleteId: number; testId: number; values: (number |
 /** The column header a trial value of a test was read from (for row/column messages). */
 export type ColumnOf = (testId: number, trial: number) => string;
 
-export type UnknownAthlete = { value: string; reason: "unknown" | "ambiguous"; count: number; rows: number[] };
+export type UnknownAthlete = {
+  value: string;
+  reason: "unknown" | "ambiguous";
+  count: number;
+  rows: number[];
+  /** Roster names close to this one ("did you mean …?"), closest first. */
+  suggestions?: string[];
+};
 export type UnknownTest = {
   name: string;
   reason: "unknown" | "not-in-battery";
   count: number;
   rows: number[];
   column?: string;
+  /** Battery tests close to this name, closest first. */
+  suggestions?: string[];
 };
 
 export type ExistingResult = { trials: (number | null)[]; flag: ResultFlag | null; version: number };

@@ -354,10 +354,10 @@ describe("bad files write nothing and say where the problem is", () => {
     const csv = `${header}\nGhost One,Countermovement jump,1,40\nGhost One,Countermovement jump,2,41\nNHA001,30 m sprint X,1,4.4`;
     const answer = await upload(sessionId, csv);
     expect(answer.json.error.details.unknownAthletes).toEqual([
-      { value: "Ghost One", reason: "unknown", count: 2, rows: [2, 3] },
+      { value: "Ghost One", reason: "unknown", count: 2, rows: [2, 3], suggestions: [] },
     ]);
     expect(answer.json.error.details.unknownTests).toEqual([
-      { name: "30 m sprint X", reason: "unknown", count: 1, rows: [4] },
+      expect.objectContaining({ name: "30 m sprint X", reason: "unknown", count: 1, rows: [4] }),
     ]);
   });
 

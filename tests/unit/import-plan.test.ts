@@ -76,7 +76,7 @@ describe("long format", () => {
     expect(byRow.get(9)).toMatch(/Rows 8 and 9 both give 10 m sprint trial 2 for Ben Okoro/);
     expect(byRow.get(10)).toMatch(/external id/);
     expect(plan.unknownAthletes).toEqual([
-      { value: "Zoe Nobody", reason: "unknown", count: 1, rows: [3] },
+      { value: "Zoe Nobody", reason: "unknown", count: 1, rows: [3], suggestions: [] },
       { value: "Sam Lee", reason: "ambiguous", count: 1, rows: [10] },
     ]);
     expect(plan.unknownTests.map((t) => [t.name, t.reason, t.rows])).toEqual([

@@ -1,0 +1,63 @@
+/**
+ * "Did you mean …?" for names the Import does not know: the same name with other accents or
+ * case, initials for a first name ("L. Dempsey"), first and last name swapped, or a spelling a
+ * key or two away ("Luca Dempsy"). Suggestions only; nothing is matched without the person.
+ */
+
+/** Lower case, accents and punctuation gone, single spaces: "Clío  O'Neil" → "clio o neil". */
+export function foldName(value: string): string {
+  return value
+    .normalize("NFD")
+    .replace(/\p{M}/gu, "")
+    .toLowerCase()
+    .replace(/[^\p{L}\p{N}]+/gu, " ")
+    .trim();
+}
+
+/**
+ * Levenshtein distance (insertions, deletions, substitutions), one row of memory.
+ * @example editDistance("dempsy", "dempsey") // 1
+ */
+export function editDistance(a: string, b: string): number {
+  let previous = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    const current = [i];
+    for (let j = 1; j <= b.length; j++)
+      current[j] = Math.min(previous[j] + 1, current[j - 1] + 1, previous[j - 1] + (a[i - 1] === b[j - 1] ? 0 : 1));
+    previous = current;
+  }
+  return previous[b.length];
+}
+
+/** How close a folded value is to a folded candidate: lower is closer, null is not close. */
+function closeness(value: string, candidate: string): number | null {
+  if (value === candidate) return 0;
+  const v = value.split(" ");
+  const c = candidate.split(" ");
+  const swapped = v.length === 2 && c.length === 2 && v[0] === c[1] && v[1] === c[0];
+  // "l dempsey" for "luca dempsey": an initial for every name but the last.
+  const initials =
+    v.length === c.length && v.length > 1 && v.every((t, i) => (i === v.length - 1 ? t === c[i] : c[i].startsWith(t)));
+  if (swapped || initials) return 0.5;
+  // Numbers name different things: a 10 m sprint is never a 30 m sprint mistyped.
+  const digits = (text: string) => text.replace(/\D+/g, " ").trim();
+  if (digits(value) !== digits(candidate)) return null;
+  // A slip of a key or two: at most one edit in five characters.
+  const distance = editDistance(value, candidate);
+  return distance <= Math.max(1, Math.floor(candidate.length / 5)) ? distance : null;
+}
+
+/**
+ * Up to `max` candidates close to `value`, closest first.
+ * @example suggestNames("Luca Dempsy", ["Luca Dempsey", "Theo Varga"]) // ["Luca Dempsey"]
+ */
+export function suggestNames(value: string, candidates: readonly string[], max = 3): string[] {
+  const folded = foldName(value).slice(0, 120);
+  if (folded === "") return [];
+  return candidates
+    .map((name) => ({ name, score: closeness(folded, foldName(name).slice(0, 120)) }))
+    .filter((c): c is { name: string; score: number } => c.score !== null)
+    .sort((a, b) => a.score - b.score || a.name.localeCompare(b.name))
+    .slice(0, max)
+    .map((c) => c.name);
+}
