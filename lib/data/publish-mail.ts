@@ -3,7 +3,7 @@
  * results are in" mail, one per athlete, holding that athlete's own numbers and nobody else's.
  */
 import "server-only";
-import { and, asc, eq, inArray, ne, sql } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import { getDb, type Reader, type Transaction } from "@/db/client";
 import { athletes, results, sessionTests, testingSessions, tests, users } from "@/db/schema";
 import { checkConsent, todayIso } from "@/lib/consent";
@@ -15,6 +15,7 @@ import type { Actor } from "./actors";
 import { queueMail } from "./mail";
 import { findSessionInScope } from "./scope";
 import { scoreCheck } from "./score-check";
+import { earlierScores } from "./suspects";
 
 export type PublishSession = { id: number; date: string; phase: Phase; publishedAt: Date | null };
 
@@ -115,31 +116,14 @@ export async function queueResultsMail(tx: Transaction, actor: Actor, session: P
         ),
       )
       .orderBy(asc(sessionTests.position)),
-    // Each athlete's own earlier published scores, for "since …"; the latest one per test wins below.
-    tx
-      .select({
-        athleteId: results.athleteId,
-        testId: results.testId,
-        value: results.value,
-        date: testingSessions.date,
-        sessionId: testingSessions.id,
-      })
-      .from(results)
-      .innerJoin(testingSessions, eq(testingSessions.id, results.sessionId))
-      .where(
-        and(
-          eq(results.organizationId, actor.organizationId),
-          inArray(results.athleteId, ids),
-          eq(testingSessions.status, "published"),
-          ne(testingSessions.id, session.id),
-          sql`${results.flag} is null and ${results.value} is not null`,
-          sql`(${testingSessions.date} < ${session.date} or (${testingSessions.date} = ${session.date} and ${testingSessions.id} < ${session.id}))`,
-        ),
-      )
-      .orderBy(asc(testingSessions.date), asc(testingSessions.id)),
+    // Each athlete's own earlier published scores, for "since …"; newest first, so the first per test wins.
+    earlierScores(tx, actor.organizationId, session, ids),
   ]);
   const previous = new Map<string, { value: number; date: string }>();
-  for (const e of earlier) previous.set(`${e.athleteId}:${e.testId}`, { value: e.value!, date: e.date });
+  for (const e of earlier) {
+    const key = `${e.athleteId}:${e.testId}`;
+    if (!previous.has(key)) previous.set(key, { value: e.value!, date: e.date });
+  }
 
   const sessionLabel = `${PHASE_LABELS[session.phase]} testing on ${formatDate(session.date)}`;
   let queued = 0;

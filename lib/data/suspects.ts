@@ -5,7 +5,7 @@
  * API and the import use it to report suspect scores.
  */
 import "server-only";
-import { and, eq, inArray, isNotNull, isNull, lte, ne } from "drizzle-orm";
+import { and, eq, inArray, isNotNull, isNull, lt, or } from "drizzle-orm";
 import { sampleStandardDeviation } from "simple-statistics";
 import { getDb, type Reader } from "@/db/client";
 import { athletes, results, testingSessions, tests } from "@/db/schema";
@@ -37,7 +37,7 @@ export async function loadTypoGuard(
       })
       .from(tests)
       .where(and(eq(tests.organizationId, organizationId), inArray(tests.id, testIds))),
-    earlierScores(reader, organizationId, session, testIds, athleteIds),
+    earlierScores(reader, organizationId, session, athleteIds, testIds),
   ]);
   const previous = new Map<string, { athleteId: number; testId: number; value: number }>();
   for (const row of earlier) {
@@ -58,13 +58,17 @@ export async function loadTypoGuard(
 /** SQLite caps the variables of one statement; big imports ask for their athletes in chunks. */
 const CHUNK = 500;
 
-/** Every unflagged score of these athletes and tests in earlier published sessions, newest first. */
-async function earlierScores(
+/**
+ * Every unflagged score of these athletes (and tests, when given) in published sessions before
+ * this one — earlier in date, or the same day and created first — newest first. The typo guard
+ * and the results mail's "since …" read an athlete's history through this one query.
+ */
+export async function earlierScores(
   reader: Reader,
   organizationId: number,
   session: { id: number; date: string },
-  testIds: number[],
   athleteIds: number[],
+  testIds?: number[],
 ) {
   const chunks: number[][] = [];
   for (let i = 0; i < athleteIds.length; i += CHUNK) chunks.push(athleteIds.slice(i, i + CHUNK));
@@ -84,12 +88,14 @@ async function earlierScores(
           and(
             eq(results.organizationId, organizationId),
             inArray(results.athleteId, ids),
-            inArray(results.testId, testIds),
+            testIds ? inArray(results.testId, testIds) : undefined,
             isNotNull(results.value),
             isNull(results.flag),
             eq(testingSessions.status, "published"),
-            ne(testingSessions.id, session.id),
-            lte(testingSessions.date, session.date),
+            or(
+              lt(testingSessions.date, session.date),
+              and(eq(testingSessions.date, session.date), lt(testingSessions.id, session.id)),
+            ),
           ),
         ),
     ),
