@@ -103,6 +103,8 @@ export const athletes = sqliteTable(
     sex: text("sex", { enum: SEXES }),
     position: text("position"),
     externalId: text("external_id"),
+    /** Other spellings of the name the Import has been told are this athlete (remembered matches). */
+    aliases: text("aliases", { mode: "json" }).$type<string[]>().notNull().default([]),
     notes: text("notes"),
     /** Day the athlete's consent to have results processed and shown to them was recorded (YYYY-MM-DD). */
     consentRecordedOn: text("consent_recorded_on"),
@@ -154,6 +156,8 @@ export const tests = sqliteTable(
     typicalErrorSource: text("typical_error_source"),
     plausibleMin: real("plausible_min"),
     plausibleMax: real("plausible_max"),
+    /** Other names files use for this test ("CMJ"); the Import reads them as this test. */
+    aliases: text("aliases", { mode: "json" }).$type<string[]>().notNull().default([]),
     archived: integer("archived", { mode: "boolean" }).notNull().default(false),
     version: integer("version").notNull().default(1),
     createdAt: createdAt(),

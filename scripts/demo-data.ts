@@ -26,6 +26,8 @@ export type DemoTest = {
   blockChangeSd: number;
   plausible: [number, number];
   typicalError?: { value: number; df: number; source: string };
+  /** Other names files use for the test (the Test library's "Other names in files"). */
+  aliases?: string[];
 };
 
 export const DEMO_TESTS: DemoTest[] = [
@@ -43,6 +45,7 @@ export const DEMO_TESTS: DemoTest[] = [
     blockChange: 1.8,
     blockChangeSd: 1.4,
     plausible: [15, 70],
+    aliases: ["CMJ"],
   },
   {
     key: "sprint10",

@@ -216,6 +216,7 @@ export async function seedDemo(db: Database, { passwordCost }: { passwordCost?: 
         typicalError: t.typicalError?.value ?? null,
         typicalErrorDf: t.typicalError?.df ?? null,
         typicalErrorSource: t.typicalError?.source ?? null,
+        aliases: t.aliases ?? [],
       })),
     )
     .returning({ id: s.tests.id });

@@ -38,7 +38,13 @@ const mayHold = (column: SQLiteColumn | SQL, traces: Traces, extra: string[] = [
 
 async function findTraces(reader: Reader, actor: Actor, athleteId: number) {
   const [athlete] = await reader
-    .select({ id: athletes.id, name: athletes.name, externalId: athletes.externalId, userId: athletes.userId })
+    .select({
+      id: athletes.id,
+      name: athletes.name,
+      externalId: athletes.externalId,
+      userId: athletes.userId,
+      aliases: athletes.aliases,
+    })
     .from(athletes)
     .where(and(eq(athletes.id, athleteId), eq(athletes.organizationId, actor.organizationId)));
   if (!athlete) throw notFound("Athlete");
@@ -51,7 +57,10 @@ async function findTraces(reader: Reader, actor: Actor, athleteId: number) {
   const traces: Traces = {
     athleteId,
     userId: account?.id ?? null,
-    words: [athlete.name, athlete.externalId, account?.email, account?.name].filter((w): w is string => Boolean(w)),
+    // Other spellings the Import remembered name them too (in files, and in the import's audit note).
+    words: [athlete.name, ...athlete.aliases, athlete.externalId, account?.email, account?.name].filter(
+      (w): w is string => Boolean(w),
+    ),
   };
   return { athlete, account: account ?? null, traces };
 }

@@ -9,7 +9,7 @@ import { getDb, type Reader, type Transaction as Tx, writeTransaction } from "@/
 import { athletes, results, squads, testingSessions, tests, uploads } from "@/db/schema";
 import { canEditSession } from "@/lib/auth/permissions";
 import type { Phase, SessionStatus } from "@/lib/domain";
-import { ApiError, forbidden } from "@/lib/errors";
+import { ApiError, forbidden, invalidInput } from "@/lib/errors";
 import { type Analysis, analyseCsvInSlices } from "@/lib/import/analyse";
 import { runInSlices } from "@/lib/import/cooperative";
 import { decodeSteps, ImportFileError } from "@/lib/import/decode";
@@ -20,11 +20,13 @@ import {
   PREVIEW_ROWS,
   TOO_LARGE_MESSAGE,
 } from "@/lib/import/limits";
+import { applyMatches, NO_MATCHES } from "@/lib/import/matches";
 import { planWrites, type ResultWrite, resultKey } from "@/lib/import/merge";
 import { describeReplacements, type ImportCommitted, type ImportPreview } from "@/lib/import/summary";
-import type { ExistingResult, ImportContext } from "@/lib/import/types";
+import type { ExistingResult, ImportContext, ImportMatches } from "@/lib/import/types";
 import { type ImportOptions, mappingRequestOf } from "@/lib/validation/import";
 import type { Actor } from "./actors";
+import { rememberMatches } from "./aliases";
 import { recordAudit } from "./audit";
 import { findSessionInScope, onSessionSheet } from "./scope";
 import { sessionBattery } from "./sessions";
@@ -61,17 +63,26 @@ export async function getImportSession(actor: Actor, sessionId: number): Promise
 export async function loadImportContext(session: ImportSession, db: Reader = getDb()): Promise<ImportContext> {
   const [battery, allTests, roster] = await Promise.all([
     sessionBattery(session.id, db),
-    db.select({ id: tests.id, name: tests.name }).from(tests).where(eq(tests.organizationId, session.organizationId)),
+    db
+      .select({ id: tests.id, name: tests.name, aliases: tests.aliases })
+      .from(tests)
+      .where(eq(tests.organizationId, session.organizationId)),
     // The same athletes the Session sheet takes scores for (lib/data/scope.ts, onSessionSheet).
     db
-      .select({ id: athletes.id, name: athletes.name, externalId: athletes.externalId })
+      .select({ id: athletes.id, name: athletes.name, externalId: athletes.externalId, aliases: athletes.aliases })
       .from(athletes)
       .where(and(eq(athletes.organizationId, session.organizationId), onSessionSheet(session)))
       .orderBy(asc(athletes.name)),
   ]);
+  const aliasesOf = new Map(allTests.map((t) => [t.id, t.aliases]));
   const inBattery = new Set(battery.map((t) => t.id));
   const others = allTests.filter((t) => !inBattery.has(t.id));
-  return { squadName: session.squadName, tests: battery, otherTestNames: others.map((t) => t.name), athletes: roster };
+  return {
+    squadName: session.squadName,
+    tests: battery.map((t) => ({ ...t, aliases: aliasesOf.get(t.id) ?? [] })),
+    otherTestNames: others.flatMap((t) => [t.name, ...t.aliases]),
+    athletes: roster,
+  };
 }
 
 async function loadExisting(
@@ -122,7 +133,10 @@ export async function runImport(
   if (!session.canImport)
     throw forbidden("This session is published; a sport scientist or the owner can import into it.");
   const text = await decode(file.bytes);
-  const context = await loadImportContext(session);
+  const matches = options.matches ?? NO_MATCHES;
+  const { context, problems } = applyMatches(await loadImportContext(session), matches);
+  if (problems.length > 0)
+    throw invalidInput(`${problems.join(" ")} Choose the match again.`, { matches: problems[0] });
   const analysis = await analyseCsvInSlices(text, mappingRequestOf(options), context);
   if (options.mode === "preview") return preview(session, context, analysis, file);
   const { plan, table } = analysis;
@@ -154,7 +168,10 @@ export async function runImport(
       },
     );
   }
-  return commitImport(actor, session, context, analysis, file, options.replace);
+  return commitImport(actor, session, context, analysis, file, {
+    replace: options.replace,
+    remember: options.remember ? matches : NO_MATCHES,
+  });
 }
 
 async function preview(
@@ -247,7 +264,7 @@ async function commitImport(
   context: ImportContext,
   analysis: Analysis,
   file: ImportFile,
-  replace: boolean,
+  { replace, remember }: { replace: boolean; remember: ImportMatches },
 ): Promise<ImportCommitted> {
   const { plan } = analysis;
   const rowsImported = plan.rowsWithValues;
@@ -280,6 +297,7 @@ async function commitImport(
       })
       .returning({ id: uploads.id });
     await upsertResults(tx, session, writes, actor.userId, new Date());
+    const names = await rememberMatches(tx, actor, remember);
     const before = writes
       .filter((w) => !w.isNew)
       .map((w) => {
@@ -292,10 +310,26 @@ async function commitImport(
       sessionId: session.id,
       // The results as they were, so the import can be reviewed (or undone) later.
       before: before.length ? { results: before } : null,
-      after: { uploadId: upload.id, filename, format: plan.format, rows: rowsImported, replace, ...counts },
+      after: {
+        uploadId: upload.id,
+        filename,
+        format: plan.format,
+        rows: rowsImported,
+        replace,
+        ...counts,
+        ...(names.remembered.length ? { remembered: names.remembered } : {}),
+      },
     });
     return {
-      committed: { mode: "commit" as const, uploadId: upload.id, filename, format: plan.format, rowsImported, counts },
+      committed: {
+        mode: "commit" as const,
+        uploadId: upload.id,
+        filename,
+        format: plan.format,
+        rowsImported,
+        counts,
+        ...names,
+      },
       written: writes,
     };
   });

@@ -25,6 +25,7 @@ export async function getMyExport(actor: Actor) {
         sex: athletes.sex,
         position: athletes.position,
         externalId: athletes.externalId,
+        otherNamesInFiles: athletes.aliases,
         consentRecordedOn: athletes.consentRecordedOn,
         guardianConsentOn: athletes.guardianConsentOn,
         archived: athletes.archived,

@@ -1,9 +1,10 @@
 import "server-only";
 import { and, asc, count, eq } from "drizzle-orm";
-import { getDb, writeTransaction } from "@/db/client";
+import { getDb, type Transaction, writeTransaction } from "@/db/client";
 import { results, sessionTests, tests } from "@/db/schema";
+import { aliasClash, aliasKey, cleanAliases } from "@/lib/aliases";
 import { canSeeResultCounts } from "@/lib/auth/permissions";
-import { conflict, notFound } from "@/lib/errors";
+import { ApiError, conflict, notFound } from "@/lib/errors";
 import type { TestCreateInput, TestUpdateInput } from "@/lib/validation/tests";
 import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
@@ -26,11 +27,43 @@ export const testColumns = {
   typicalErrorSource: tests.typicalErrorSource,
   plausibleMin: tests.plausibleMin,
   plausibleMax: tests.plausibleMax,
+  aliases: tests.aliases,
   archived: tests.archived,
   version: tests.version,
 };
 
 const nameTaken = (name: string) => conflict(`A test called "${name}" already exists in your library.`);
+
+/**
+ * A test's name and other names must each read as one test only: the Import could not tell
+ * two tests apart otherwise. Returns the aliases as stored.
+ */
+async function checkNames(
+  tx: Transaction,
+  organizationId: number,
+  test: { id: number | null; name: string; aliases: readonly string[] },
+): Promise<string[]> {
+  const aliases = cleanAliases(test.aliases, test.name);
+  const others = await tx
+    .select({ id: tests.id, name: tests.name, aliases: tests.aliases })
+    .from(tests)
+    .where(eq(tests.organizationId, organizationId));
+  // The name against other tests' names is the unique index's job (a clearer 409 there).
+  const aliasOwner = others.find((o) => o.id !== test.id && o.aliases.some((a) => aliasKey(a) === aliasKey(test.name)));
+  if (aliasOwner) throw conflict(`“${test.name}” is another name of ${aliasOwner.name}. Remove it there first.`);
+  const clash = aliasClash(aliases, test.id, others);
+  if (clash) {
+    throw new ApiError(
+      409,
+      "conflict",
+      `“${clash.name}” already reads as ${clash.owner}; a file could not tell the two apart.`,
+      {
+        fields: { aliases: `“${clash.name}” already reads as ${clash.owner}.` },
+      },
+    );
+  }
+  return aliases;
+}
 
 /**
  * A Test library row; for staff only, `resultCount` (results across the organisation) and
@@ -70,9 +103,10 @@ export async function getTest(actor: Actor, testId: number) {
 export async function createTest(actor: Actor, input: TestCreateInput) {
   try {
     return await writeTransaction(async (tx) => {
+      const aliases = await checkNames(tx, actor.organizationId, { id: null, ...input });
       const [row] = await tx
         .insert(tests)
-        .values({ ...input, organizationId: actor.organizationId })
+        .values({ ...input, aliases, organizationId: actor.organizationId })
         .returning(testColumns);
       await recordAudit(tx, actor, { action: "test.create", entity: { type: "test", id: row.id }, after: row });
       return row;
@@ -102,9 +136,10 @@ export async function updateTest(actor: Actor, testId: number, input: TestUpdate
       if (merged.plausibleMin !== null && merged.plausibleMax !== null && merged.plausibleMin >= merged.plausibleMax) {
         throw conflict("The lowest plausible value must be below the highest.");
       }
+      const aliases = await checkNames(tx, actor.organizationId, { ...merged, id: testId });
       const [row] = await tx
         .update(tests)
-        .set({ ...changes, version: version + 1 })
+        .set({ ...changes, aliases, version: version + 1 })
         .where(and(eq(tests.id, testId), eq(tests.version, version)))
         .returning(testColumns);
       await recordAudit(tx, actor, { action: "test.update", entity: { type: "test", id: testId }, before, after: row });

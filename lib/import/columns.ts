@@ -94,7 +94,10 @@ export function parseTrialHeader(header: string): { name: string; trial: number 
   return { name, trial: Number(digits) };
 }
 
-/** Test lookup by name, also accepting the name followed by its unit: "Countermovement jump (cm)". */
+/**
+ * Test lookup by name, also accepting the name followed by its unit ("Countermovement jump (cm)")
+ * and the test's other names ("CMJ", "CMJ (cm)").
+ */
 export function testNameIndex(tests: ImportTest[]): Map<string, ImportTest> {
   const index = new Map<string, ImportTest>();
   for (const test of tests) {
@@ -104,7 +107,15 @@ export function testNameIndex(tests: ImportTest[]): Map<string, ImportTest> {
       if (!index.has(key)) index.set(key, test);
     }
   }
-  // Plain names last so they win over a variant that happens to collide.
+  for (const test of tests) {
+    for (const alias of test.aliases) {
+      for (const variant of [alias, `${alias} (${test.unit})`, `${alias} [${test.unit}]`]) {
+        const key = normaliseName(variant);
+        if (!index.has(key)) index.set(key, test);
+      }
+    }
+  }
+  // Plain names last so they win over a variant or an alias that happens to collide.
   for (const test of tests) index.set(normaliseName(test.name), test);
   return index;
 }

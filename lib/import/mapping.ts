@@ -10,10 +10,12 @@ import {
   findAthleteColumn,
   findLongColumns,
   normaliseName,
+  parseTrialHeader,
   suggestWideColumns,
   wideMappingOf,
 } from "./columns";
 import type { CsvTable } from "./csv";
+import { suggestionsFor } from "./suggest";
 import type {
   ImportContext,
   ImportFormat,
@@ -169,9 +171,20 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
     columns = wideMappingOf(suggestions);
     const testsById = new Map(context.tests.map((t) => [t.id, t]));
     const targetOwner = new Map<string, string>();
+    // "CMJ 1", "CMJ 2", "CMJ 3" are one unknown test, named as the file names it.
+    const unknownByName = new Map<string, UnknownTest>();
     for (const s of suggestions) {
       if (s.status === "unknown" || s.status === "not-in-battery") {
-        unknownTests.push({ name: s.header, reason: s.status, count: 1, rows: [row], column: s.header });
+        const name = parseTrialHeader(s.header)?.name ?? s.header.trim();
+        const key = normaliseName(name);
+        const known = unknownByName.get(key);
+        if (known) known.count++;
+        else {
+          const entry: UnknownTest = { name, reason: s.status, count: 1, rows: [row], column: s.header };
+          if (s.status === "unknown") entry.suggestions = suggestionsFor(name, context.tests);
+          unknownByName.set(key, entry);
+          unknownTests.push(entry);
+        }
         errors.push({
           row,
           column: s.header,

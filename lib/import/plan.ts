@@ -11,7 +11,7 @@ import type { CsvTable } from "./csv";
 import { MAX_LISTED_ERRORS, MAX_SHOWN_CHARS, PREVIEW_ROWS } from "./limits";
 import { trialLimit } from "./mapping";
 import { parseScore } from "./numbers";
-import { suggestNames } from "./suggest";
+import { suggestionsFor } from "./suggest";
 import type {
   ColumnOf,
   ImportAthlete,
@@ -67,27 +67,34 @@ class Listing {
 
 type AthleteMatch = { athlete: ImportAthlete } | { problem: "unknown" | "ambiguous" | "missing" };
 
-/** External id first, then exact (case-insensitive, trimmed) name; each distinct cell resolved once. */
+/** Keys to athletes; a key two athletes share maps to null (ambiguous). */
+function uniqueIndex(athletes: ImportAthlete[], keysOf: (a: ImportAthlete) => string[]) {
+  const index = new Map<string, ImportAthlete | null>();
+  for (const a of athletes) {
+    for (const key of new Set(keysOf(a).map(normaliseName))) index.set(key, index.has(key) ? null : a);
+  }
+  return index;
+}
+
+/**
+ * External id first, then exact (case-insensitive, trimmed) name, then another name of the
+ * athlete (remembered, or matched in this import: that one also settles a name two athletes
+ * share); each distinct cell resolved once.
+ */
 function athleteMatcher(athletes: ImportAthlete[]) {
   const byExternal = new Map<string, ImportAthlete>();
-  const byName = new Map<string, ImportAthlete | null>();
-  for (const a of athletes) {
-    if (a.externalId) byExternal.set(normaliseName(a.externalId), a);
-    const key = normaliseName(a.name);
-    byName.set(key, byName.has(key) ? null : a);
-  }
+  for (const a of athletes) if (a.externalId) byExternal.set(normaliseName(a.externalId), a);
+  const byName = uniqueIndex(athletes, (a) => [a.name]);
+  const byAlias = uniqueIndex(athletes, (a) => a.aliases);
   const cache = new Map<string, AthleteMatch>();
   return (cell: string): AthleteMatch => {
     let match = cache.get(cell);
     if (match) return match;
     const key = normaliseName(cell);
     if (key === "") return { problem: "missing" };
-    const external = byExternal.get(key);
-    if (external) match = { athlete: external };
-    else {
-      const named = byName.get(key);
-      match = named ? { athlete: named } : { problem: named === null ? "ambiguous" : "unknown" };
-    }
+    const found = byExternal.get(key) ?? byName.get(key) ?? byAlias.get(key);
+    if (found) match = { athlete: found };
+    else match = { problem: byName.get(key) === null || byAlias.get(key) === null ? "ambiguous" : "unknown" };
     cache.set(cell, match);
     return match;
   };
@@ -414,10 +421,7 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
         a.reason === "unknown"
           ? {
               ...a,
-              suggestions: suggestNames(
-                a.value,
-                context.athletes.map((x) => x.name),
-              ),
+              suggestions: suggestionsFor(a.value, context.athletes),
             }
           : a,
       ),
@@ -429,10 +433,7 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
         t.reason === "unknown"
           ? {
               ...t,
-              suggestions: suggestNames(
-                t.name,
-                context.tests.map((x) => x.name),
-              ),
+              suggestions: suggestionsFor(t.name, context.tests),
             }
           : t,
       ),

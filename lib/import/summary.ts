@@ -67,6 +67,10 @@ export type ImportCommitted = {
   format: ImportFormat;
   rowsImported: number;
   counts: ImportCounts;
+  /** Matches kept as other names of athletes and tests, for the next import. */
+  remembered: { kind: "athlete" | "test"; value: string; id: number; name: string }[];
+  /** Matches asked to be remembered that were not, and why. */
+  unremembered: { kind: "athlete" | "test"; value: string; reason: string }[];
 };
 
 const fmt = (v: number | null) => (v === null ? "empty" : String(v));

@@ -1,4 +1,5 @@
 import type { Direction, ResultFlag, TrialRule } from "@/lib/domain";
+import type { Suggestion } from "./suggest";
 
 export type ImportFormat = "long" | "wide";
 export const IMPORT_FORMATS = ["long", "wide"] as const;
@@ -15,10 +16,12 @@ export type ImportTest = {
   trialsPerSession: number;
   plausibleMin: number | null;
   plausibleMax: number | null;
+  /** Other names files use for it (Test library), and names matched in this import. */
+  aliases: string[];
 };
 
-/** An athlete on the session's squad roster. */
-export type ImportAthlete = { id: number; name: string; externalId: string | null };
+/** An athlete on the session's squad roster, with other spellings remembered from earlier imports. */
+export type ImportAthlete = { id: number; name: string; externalId: string | null; aliases: string[] };
 
 /** What a file is checked against: the battery, the rest of the Test library, the roster. */
 export type ImportContext = {
@@ -62,8 +65,8 @@ export type UnknownAthlete = {
   reason: "unknown" | "ambiguous";
   count: number;
   rows: number[];
-  /** Roster names close to this one ("did you mean …?"), closest first. */
-  suggestions?: string[];
+  /** Roster athletes whose name is close to this one ("did you mean …?"), closest first. */
+  suggestions?: Suggestion[];
 };
 export type UnknownTest = {
   name: string;
@@ -71,9 +74,15 @@ export type UnknownTest = {
   count: number;
   rows: number[];
   column?: string;
-  /** Battery tests close to this name, closest first. */
-  suggestions?: string[];
+  /** Battery tests whose name is close to this one, closest first. */
+  suggestions?: Suggestion[];
 };
+
+/**
+ * Names in a file that the person importing has said are a roster athlete or a battery test
+ * (the mapping step's "Use …"), keyed by the file's text.
+ */
+export type ImportMatches = { athletes: Record<string, number>; tests: Record<string, number> };
 
 export type ExistingResult = { trials: (number | null)[]; flag: ResultFlag | null; version: number };
 

@@ -73,3 +73,26 @@ export const isoDate = z
   }, "That date does not exist.");
 
 export const optionalIsoDate = isoDate.nullish().or(z.literal("").transform(() => null));
+
+export const MAX_ALIASES = 12;
+const ALIAS_CHARS = 60;
+
+/**
+ * Other names a file may use ("CMJ, Counter movement jump"): typed comma-separated in a form, a
+ * list in JSON. Each cleaned like any text; blanks dropped. Repeats and the owner's own name are
+ * dropped where the owner is known (lib/aliases.ts).
+ */
+export const aliasList = z
+  .preprocess(
+    (value) => (typeof value === "string" ? value.split(",") : value),
+    z.array(
+      z.string().transform((v) => cleanText(v)),
+      { message: "Other names are a list of names." },
+    ),
+  )
+  .transform((list) => list.filter((alias) => alias !== "" && hasVisibleText(alias)))
+  .pipe(
+    z
+      .array(z.string().max(ALIAS_CHARS, `Each other name is limited to ${ALIAS_CHARS} characters.`))
+      .max(MAX_ALIASES, `At most ${MAX_ALIASES} other names.`),
+  );

@@ -20,6 +20,41 @@ const wideMappingSchema = z
   .record(column, wideTarget)
   .refine((m) => Object.keys(m).length <= 500, "At most 500 columns.");
 
+const matchesSchema = z
+  .object({
+    athletes: z.record(column, z.number().int().positive()).default({}),
+    tests: z.record(column, z.number().int().positive()).default({}),
+  })
+  .refine((m) => Object.keys(m.athletes).length + Object.keys(m.tests).length <= 500, "At most 500 matches.");
+
+/** A JSON text field, parsed and checked against `schema`; empty means not sent. */
+const jsonField = <T>(schema: z.ZodType<T>, what: string) =>
+  z
+    .string()
+    .max(200_000)
+    .optional()
+    .transform((text, ctx): T | undefined => {
+      if (text === undefined || text === "") return undefined;
+      let parsed: unknown;
+      try {
+        parsed = JSON.parse(text);
+      } catch {
+        ctx.addIssue({ code: "custom", message: `${what.split(" ")[0]} is not valid JSON.` });
+        return z.NEVER;
+      }
+      const result = schema.safeParse(parsed);
+      if (!result.success) {
+        ctx.addIssue({ code: "custom", message: what });
+        return z.NEVER;
+      }
+      return result.data;
+    });
+
+const yes = z
+  .string()
+  .optional()
+  .transform((v) => v !== undefined && ["yes", "true", "1", "on"].includes(v.trim().toLowerCase()));
+
 export const importOptionsSchema = z.object({
   mode: z.enum(["preview", "commit"], { message: "mode is preview or commit." }).default("preview"),
   format: z.enum(IMPORT_FORMATS, { message: "format is long or wide." }).optional(),
@@ -28,30 +63,12 @@ export const importOptionsSchema = z.object({
   /** An empty string says "no trial column": every row is trial 1. */
   trialColumn: column.optional(),
   valueColumn: column.optional(),
-  mapping: z
-    .string()
-    .max(200_000)
-    .optional()
-    .transform((text, ctx) => {
-      if (text === undefined || text === "") return undefined;
-      let parsed: unknown;
-      try {
-        parsed = JSON.parse(text);
-      } catch {
-        ctx.addIssue({ code: "custom", message: "mapping is not valid JSON." });
-        return z.NEVER;
-      }
-      const result = wideMappingSchema.safeParse(parsed);
-      if (!result.success) {
-        ctx.addIssue({ code: "custom", message: "mapping maps each column to { testId, trial } or null." });
-        return z.NEVER;
-      }
-      return result.data;
-    }),
-  replace: z
-    .string()
-    .optional()
-    .transform((v) => v !== undefined && ["yes", "true", "1", "on"].includes(v.trim().toLowerCase())),
+  mapping: jsonField(wideMappingSchema, "mapping maps each column to { testId, trial } or null."),
+  /** Names in the file read as a roster athlete or a battery test: { athletes: { name: id }, tests: { name: id } }. */
+  matches: jsonField(matchesSchema, "matches gives { athletes: { name: athleteId }, tests: { name: testId } }."),
+  replace: yes,
+  /** Keep the matches as other names of those athletes and tests, for the next import. */
+  remember: yes,
 });
 
 export type ImportOptions = z.infer<typeof importOptionsSchema>;

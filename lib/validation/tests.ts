@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { DIRECTIONS, MAX_TRIALS, SWC_METHODS, TRIAL_RULES } from "@/lib/domain";
-import { optionalText, requiredText } from "./common";
+import { aliasList, optionalText, requiredText } from "./common";
 
 const fields = {
   name: requiredText(80, "Name"),
@@ -17,6 +17,7 @@ const fields = {
   typicalErrorSource: optionalText(300, "Source note"),
   plausibleMin: z.number().finite().nullable(),
   plausibleMax: z.number().finite().nullable(),
+  aliases: aliasList,
 };
 
 type RangeLike = {
@@ -47,6 +48,7 @@ export const testCreateSchema = z
     typicalErrorDf: fields.typicalErrorDf.default(null),
     plausibleMin: fields.plausibleMin.default(null),
     plausibleMax: fields.plausibleMax.default(null),
+    aliases: fields.aliases.default([]),
   })
   .refine(rangeIsOrdered, { message: "The lowest plausible value must be below the highest.", path: ["plausibleMax"] })
   .refine((v) => v.swcMethod !== "cv-factor" || v.cvPercent !== null, {

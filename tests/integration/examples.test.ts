@@ -147,25 +147,26 @@ describe("examples/ imported into the demo club", () => {
     expect(await storeChecksum()).toBe(before);
   });
 
-  it("academy-post-block-catch-up-misspelt.csv is refused, naming the unknown athlete and test and their rows", async () => {
+  it("academy-post-block-catch-up-misspelt.csv reads CMJ by its other name, and imports once the misspelt name is matched", async () => {
     await signInAs("coach@example.com");
     const sessionId = await postBlockOf("Academy U18");
+    const [luca] = await env.db.select({ id: athletes.id }).from(athletes).where(eq(athletes.name, "Luca Dempsey"));
     const before = await storeChecksum();
     const { status, json } = await importFile(sessionId, "academy-post-block-catch-up-misspelt.csv");
     expect(status).toBe(422);
-    expect(json.error.message).toBe("6 problems in the file. Nothing was imported.");
+    expect(json.error.message).toBe("3 problems in the file. Nothing was imported.");
     expect(json.error.details.unknownAthletes).toEqual([
-      // The Import suggests the roster name (lib/import/suggest.ts); the file still needs the fix.
-      { value: "Luca Dempsy", reason: "unknown", count: 3, rows: [5, 6, 7], suggestions: ["Luca Dempsey"] },
+      // "Did you mean …?" (lib/import/suggest.ts), with the id the mapping step's "Use …" sends.
+      {
+        value: "Luca Dempsy",
+        reason: "unknown",
+        count: 3,
+        rows: [5, 6, 7],
+        suggestions: [{ id: luca.id, name: "Luca Dempsey" }],
+      },
     ]);
-    expect(json.error.details.unknownTests).toEqual([
-      { name: "CMJ", reason: "unknown", count: 3, rows: [2, 3, 4], suggestions: [] },
-    ]);
-    expect(json.error.rows).toContainEqual({
-      row: 2,
-      column: "test",
-      message: "No test in the Test library is called “CMJ”.",
-    });
+    // "CMJ" is another name of the countermovement jump in the demo's Test library.
+    expect(json.error.details.unknownTests).toEqual([]);
     expect(json.error.rows).toContainEqual({
       row: 5,
       column: "athlete",
@@ -174,12 +175,31 @@ describe("examples/ imported into the demo club", () => {
     });
     expect(await storeChecksum()).toBe(before);
 
-    // Corrected as the README says, the same file imports.
-    const corrected = readFileSync("examples/academy-post-block-catch-up-misspelt.csv", "utf8")
-      .replaceAll("Luca Dempsy,", "Luca Dempsey,")
-      .replaceAll(",CMJ,", ",Countermovement jump,");
-    const fixed = await uploadTo(importRoute.POST, sessionId, corrected, { filename: "corrected.csv" });
-    expect(fixed.status).toBe(200);
-    expect(fixed.json).toMatchObject({ rowsImported: 11, counts: { values: 11, resultsCreated: 5 } });
+    // The mapping step's two clicks: "Use Luca Dempsey" (remembered for next time), then Import.
+    const fields = { matches: JSON.stringify({ athletes: { "Luca Dempsy": luca.id } }), remember: "yes" };
+    const preview = await uploadTo(importRoute.POST, sessionId, example("academy-post-block-catch-up-misspelt.csv"), {
+      mode: "preview",
+      fields,
+    });
+    expect(preview.json).toMatchObject({ errorCount: 0, canCommit: true, unknownAthletes: [] });
+    const committed = await uploadTo(importRoute.POST, sessionId, example("academy-post-block-catch-up-misspelt.csv"), {
+      fields,
+      filename: "academy-post-block-catch-up-misspelt.csv",
+    });
+    expect(committed.status).toBe(200);
+    expect(committed.json).toMatchObject({
+      rowsImported: 11,
+      counts: { values: 11, resultsCreated: 5 },
+      remembered: [{ kind: "athlete", value: "Luca Dempsy", id: luca.id, name: "Luca Dempsey" }],
+      unremembered: [],
+    });
+    expect(await storedBest(sessionId, "Luca Dempsey", "Countermovement jump")).toEqual({
+      trials: [36.1, 36.8, 35.9],
+      value: 36.8,
+    });
+
+    // The next file that spells him so is read without asking.
+    const again = await importFile(sessionId, "academy-post-block-catch-up-misspelt.csv", "preview");
+    expect(again.json).toMatchObject({ errorCount: 0, counts: { resultsUnchanged: 5, resultsCreated: 0 } });
   });
 });

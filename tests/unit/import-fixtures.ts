@@ -13,6 +13,7 @@ export const context: ImportContext = {
       trialsPerSession: 3,
       plausibleMin: 15,
       plausibleMax: 70,
+      aliases: [],
     },
     {
       id: 2,
@@ -23,6 +24,7 @@ export const context: ImportContext = {
       trialsPerSession: 3,
       plausibleMin: 1.5,
       plausibleMax: 2.6,
+      aliases: [],
     },
     {
       id: 4,
@@ -33,6 +35,7 @@ export const context: ImportContext = {
       trialsPerSession: 1,
       plausibleMin: 200,
       plausibleMax: 3200,
+      aliases: [],
     },
     {
       id: 5,
@@ -43,13 +46,14 @@ export const context: ImportContext = {
       trialsPerSession: 1,
       plausibleMin: null,
       plausibleMax: null,
+      aliases: [],
     },
   ],
   otherTestNames: ["30 m sprint"],
   athletes: [
-    { id: 11, name: "Ana Silva", externalId: "NHA001" },
-    { id: 12, name: "Ben Okoro", externalId: "NHA002" },
-    { id: 13, name: "Sam Lee", externalId: "NHA003" },
-    { id: 14, name: "sam lee", externalId: null },
+    { id: 11, name: "Ana Silva", externalId: "NHA001", aliases: [] },
+    { id: 12, name: "Ben Okoro", externalId: "NHA002", aliases: [] },
+    { id: 13, name: "Sam Lee", externalId: "NHA003", aliases: [] },
+    { id: 14, name: "sam lee", externalId: null, aliases: [] },
   ],
 };

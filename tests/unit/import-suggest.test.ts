@@ -34,3 +34,18 @@ describe("suggestNames", () => {
     expect(foldName("Clío  O'Neil")).toBe("clio o neil");
   });
 });
+
+describe("suggestNames for short forms", () => {
+  // Common practice: coaches write a test by its initials ("CMJ" for the countermovement jump).
+  it("offers a test whose words a short form abbreviates, in order", () => {
+    const battery = ["Countermovement jump", "10 m sprint", "Back squat 1RM", "Squat jump"];
+    expect(suggestNames("CMJ", battery)).toEqual(["Countermovement jump"]);
+    expect(suggestNames("SJ", battery)).toEqual(["Squat jump"]);
+  });
+
+  it("offers nothing when the letters are out of order, or the numbers differ", () => {
+    expect(suggestNames("JMC", ["Countermovement jump"])).toEqual([]);
+    expect(suggestNames("BS", ["Back squat 1RM"])).toEqual([]);
+    expect(suggestNames("C", ["Countermovement jump"])).toEqual([]);
+  });
+});

@@ -1,6 +1,6 @@
 /**
  * POST /api/sessions/[sessionId]/import?mode=preview|commit — multipart with a `file` field
- * (plus format, athleteColumn, testColumn, trialColumn, valueColumn, mapping, replace).
+ * (plus format, athleteColumn, testColumn, trialColumn, valueColumn, mapping, matches, replace, remember).
  * Preview checks the file and writes nothing; commit writes all of it or nothing.
  */
 
@@ -54,7 +54,9 @@ export const POST = withApi<{ sessionId: string }>(async (request, { params }) =
     trialColumn: text("trialColumn"),
     valueColumn: text("valueColumn"),
     mapping: text("mapping"),
+    matches: text("matches"),
     replace: url.searchParams.get("replace") ?? text("replace"),
+    remember: text("remember"),
   });
   return json(
     await runImport(actor, sessionId, { bytes: file.bytes, filename: file.filename, contentType: file.type }, options),
