@@ -6,11 +6,14 @@ import { ApiClientError } from "@/lib/client/fetch-json";
 import { queryKeys } from "@/lib/client/queries";
 import { type UploadProgress, uploadImport } from "@/lib/client/upload";
 import type { RowError } from "@/lib/errors";
-import { draftFromPreview, fieldsOf, type MappingDraft } from "@/lib/import/mapping-draft";
+import { draftFromPreview, fieldsOf, hasMatches, type MappingDraft, matchFields } from "@/lib/import/mapping-draft";
+import { NO_MATCHES } from "@/lib/import/matches";
 import type { ImportCommitted, ImportPreview, ReplacementRow } from "@/lib/import/summary";
+import type { ImportMatches } from "@/lib/import/types";
 import { FilePicker } from "./file-picker";
 import { ImportDone, PreviewFacts } from "./import-summary";
 import { MappingStep } from "./mapping-step";
+import { NameMatches } from "./name-matches";
 import { ParsedValues, PreviewTable } from "./preview-table";
 import { ProblemList, ReplacementList, WarningList } from "./problem-list";
 import { ProgressBar } from "./progress-bar";
@@ -21,13 +24,15 @@ const bodyOf = (error: unknown): ErrorBody | null =>
   error instanceof ApiClientError ? (error.body as ErrorBody | null) : null;
 
 /** The Import screen: choose a file → preview and mapping → import, all or nothing. */
-export function ImportFlow({ sessionId }: { sessionId: number }) {
+export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number; canRememberTests: boolean }) {
   const client = useQueryClient();
   const [file, setFile] = useState<File | null>(null);
   const [draft, setDraft] = useState<MappingDraft | null>(null);
   const [sentFields, setSentFields] = useState<Record<string, string>>({});
   const [dirty, setDirty] = useState(false);
   const [replace, setReplace] = useState(false);
+  const [matches, setMatches] = useState<ImportMatches>(NO_MATCHES);
+  const [remember, setRemember] = useState(true);
   const [progress, setProgress] = useState<UploadProgress | null>(null);
   const [result, setResult] = useState<ImportCommitted | null>(null);
 
@@ -58,13 +63,24 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
     setFile(next);
     setResult(null);
     setDraft(null);
+    setMatches(NO_MATCHES);
     commit.reset();
     preview.mutate({ file: next, fields: {} });
+  };
+  // A match is checked at once: one click, and the preview shows what the name now reads as.
+  const match = (kind: keyof ImportMatches, value: string, id: number | null) => {
+    if (!file || !draft) return;
+    const next = { ...matches, [kind]: { ...matches[kind] } };
+    if (id === null) delete next[kind][value];
+    else next[kind][value] = id;
+    setMatches(next);
+    preview.mutate({ file, fields: { ...fieldsOf(draft), ...matchFields(next) } });
   };
   const startOver = () => {
     setFile(null);
     setResult(null);
     setDraft(null);
+    setMatches(NO_MATCHES);
     preview.reset();
     commit.reset();
   };
@@ -113,7 +129,9 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
                 type="button"
                 className="btn-primary"
                 disabled={busy || !file}
-                onClick={() => file && preview.mutate({ file, fields: fieldsOf(draft) })}
+                onClick={() =>
+                  file && preview.mutate({ file, fields: { ...fieldsOf(draft), ...matchFields(matches) } })
+                }
               >
                 Check the file with this mapping
               </button>
@@ -130,20 +148,21 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
               </button>
             </div>
           )}
-          <ProblemList
-            errors={data.errors}
-            errorCount={data.errorCount}
-            unknownAthletes={data.unknownAthletes}
-            unknownAthleteCount={data.unknownAthleteCount}
-            unknownTests={data.unknownTests}
+          <NameMatches
+            preview={data}
+            matches={matches}
+            remember={remember}
+            busy={busy}
+            canRememberTests={canRememberTests}
+            onMatch={match}
+            onRemember={setRemember}
           />
+          <ProblemList errors={data.errors} errorCount={data.errorCount} />
           {commitProblems.length > 0 && (
             <ProblemList
               title="The import was refused"
               errors={commitProblems}
               errorCount={commitBody?.error?.details?.errorCount ?? commitProblems.length}
-              unknownAthletes={[]}
-              unknownTests={[]}
             />
           )}
           <ReplacementList rows={conflictRows.length ? conflictRows : data.replacements} count={replacements} />
@@ -168,7 +187,15 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
               className="btn-primary"
               disabled={!canCommit}
               onClick={() =>
-                file && commit.mutate({ file, fields: { ...sentFields, ...(replace ? { replace: "yes" } : {}) } })
+                file &&
+                commit.mutate({
+                  file,
+                  fields: {
+                    ...sentFields,
+                    ...(replace ? { replace: "yes" } : {}),
+                    ...(remember && hasMatches(matches) ? { remember: "yes" } : {}),
+                  },
+                })
               }
             >
               Import {toWrite} {toWrite === 1 ? "result" : "results"}
@@ -177,7 +204,7 @@ export function ImportFlow({ sessionId }: { sessionId: number }) {
               {dirty
                 ? "Check the file with the new mapping first."
                 : data.errorCount > 0
-                  ? "Fix the problems above (in the file, or in the mapping) and choose the file again."
+                  ? "Fix the problems above: match the names, change the mapping, or correct the file and choose it again."
                   : toWrite === 0
                     ? "The session already holds every score in this file."
                     : replacements > 0 && !replace

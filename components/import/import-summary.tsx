@@ -81,6 +81,28 @@ export function ImportDone({
           — stored as in the file; the Session sheet shows which and why.
         </p>
       )}
+      {result.remembered.length > 0 && (
+        <p className="mt-2 text-sm">
+          Remembered for the next file:{" "}
+          {result.remembered.map((r, i) => (
+            <span key={`${r.kind}:${r.value}`}>
+              {i > 0 && "; "}“{r.value}” is <span className="font-semibold">{r.name}</span>
+            </span>
+          ))}
+          .
+        </p>
+      )}
+      {result.unremembered.length > 0 && (
+        <p className="mt-1 text-sm text-ink-soft">
+          Matched for this file only:{" "}
+          {result.unremembered.map((r, i) => (
+            <span key={`${r.kind}:${r.value}`}>
+              {i > 0 && "; "}“{r.value}” ({r.reason})
+            </span>
+          ))}
+          .
+        </p>
+      )}
       <p className="mt-1 text-sm text-ink-soft">
         The file itself is kept with the session, so every value can be traced back to it.
       </p>

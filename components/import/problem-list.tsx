@@ -3,27 +3,9 @@
 import { useState } from "react";
 import type { RowError } from "@/lib/errors";
 import type { ReplacementRow } from "@/lib/import/summary";
-import type { UnknownAthlete, UnknownTest } from "@/lib/import/types";
-
-const rowsText = (rows: number[], count: number) =>
-  `${rows.length === 1 ? "row" : "rows"} ${rows.join(", ")}${count > rows.length ? ` and ${count - rows.length} more` : ""}`;
 
 /** Problems by row and column: what blocks the import, and what it would replace. */
-export function ProblemList({
-  errors,
-  errorCount,
-  unknownAthletes,
-  unknownTests,
-  title,
-  unknownAthleteCount,
-}: {
-  errors: RowError[];
-  errorCount: number;
-  unknownAthletes: UnknownAthlete[];
-  unknownTests: UnknownTest[];
-  title?: string;
-  unknownAthleteCount?: number;
-}) {
+export function ProblemList({ errors, errorCount, title }: { errors: RowError[]; errorCount: number; title?: string }) {
   const [all, setAll] = useState(false);
   if (errorCount === 0) return null;
   const shown = all ? errors : errors.slice(0, 25);
@@ -35,54 +17,6 @@ export function ProblemList({
       <p className="text-sm text-ink-soft">
         Nothing is imported while any remain. Row numbers are as a spreadsheet shows them (the header is row 1).
       </p>
-
-      {unknownAthletes.length > 0 && (
-        <div className="mt-3">
-          <h3 className="text-sm font-semibold">Athletes not found on the roster</h3>
-          <ul className="mt-1 flex flex-wrap gap-2 text-sm">
-            {unknownAthletes.slice(0, 40).map((a) => (
-              <li key={a.value} className="rounded border border-line bg-paper px-2 py-0.5">
-                <span className="font-semibold">{a.value}</span>{" "}
-                <span className="text-ink-soft">
-                  {a.reason === "ambiguous" ? "two athletes share this name · " : ""}
-                  {rowsText(a.rows, a.count)}
-                </span>
-                {a.suggestions && a.suggestions.length > 0 && (
-                  <span className="block text-ink">
-                    did you mean <span className="font-semibold">{a.suggestions.join(" or ")}</span>?
-                  </span>
-                )}
-              </li>
-            ))}
-            {(unknownAthleteCount ?? unknownAthletes.length) > 40 && (
-              <li className="text-ink-soft">and {(unknownAthleteCount ?? unknownAthletes.length) - 40} more</li>
-            )}
-          </ul>
-        </div>
-      )}
-      {unknownTests.length > 0 && (
-        <div className="mt-3">
-          <h3 className="text-sm font-semibold">Tests not found in this session's battery</h3>
-          <ul className="mt-1 flex flex-wrap gap-2 text-sm">
-            {unknownTests.map((t) => (
-              <li key={`${t.name}|${t.column ?? ""}`} className="rounded border border-line bg-paper px-2 py-0.5">
-                <span className="font-semibold">{t.name}</span>{" "}
-                <span className="text-ink-soft">
-                  {t.reason === "not-in-battery"
-                    ? "in the Test library, not in this battery"
-                    : "not in the Test library"}{" "}
-                  · {t.column ? "column header" : rowsText(t.rows, t.count)}
-                </span>
-                {t.suggestions && t.suggestions.length > 0 && (
-                  <span className="block text-ink">
-                    did you mean <span className="font-semibold">{t.suggestions.join(" or ")}</span>?
-                  </span>
-                )}
-              </li>
-            ))}
-          </ul>
-        </div>
-      )}
 
       <table className="mt-3 w-full text-left text-sm">
         <caption className="sr-only">Problems by row and column</caption>

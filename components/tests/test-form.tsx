@@ -27,6 +27,7 @@ const FIELDS = [
   "typicalErrorSource",
   "plausibleMin",
   "plausibleMax",
+  "aliases",
 ] as const;
 
 const numberText = (value: number | null | undefined) => (value === null || value === undefined ? "" : String(value));
@@ -44,6 +45,7 @@ function defaultsFor(test: TestItem | null): Record<string, unknown> {
     plausibleMin: numberText(test.plausibleMin),
     plausibleMax: numberText(test.plausibleMax),
     typicalErrorSource: test.typicalErrorSource ?? "",
+    aliases: test.aliases.join(", "),
   };
 }
 
@@ -109,6 +111,20 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
           <input className="field num" inputMode="numeric" {...field("decimals")} {...register("decimals", num)} />
         </Field>
       </div>
+
+      <Field id="test-aliases" label="Other names in files (optional)" error={err("aliases")}>
+        <input
+          className="field"
+          placeholder="e.g. CMJ, Counter movement jump"
+          aria-describedby={err("aliases") ? "test-aliases-error" : "test-aliases-help"}
+          aria-invalid={err("aliases") ? true : undefined}
+          id="test-aliases"
+          {...register("aliases")}
+        />
+        <p id="test-aliases-help" className="mt-1 text-xs text-ink-soft">
+          Separate them with commas. The Import reads a column or row named so as this test.
+        </p>
+      </Field>
 
       <fieldset>
         <legend className="label">Direction</legend>

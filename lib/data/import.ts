@@ -219,6 +219,7 @@ async function preview(
     replacements: describeReplacements(writes.replacements, context, MAX_LISTED_REPLACEMENTS),
     canCommit: plan.errorCount === 0 && plan.valueCount > 0,
     tests: context.tests.map((t) => ({ id: t.id, name: t.name, unit: t.unit, trialsPerSession: t.trialsPerSession })),
+    roster: context.athletes.map((a) => ({ id: a.id, name: a.name })),
   };
 }
 

@@ -56,9 +56,9 @@ async function checkNames(
     throw new ApiError(
       409,
       "conflict",
-      `“${clash.name}” already reads as ${clash.owner}; a file could not tell the two apart.`,
+      `“${clash.name}” is taken: it reads as ${clash.owner}, and a file could not tell the two apart.`,
       {
-        fields: { aliases: `“${clash.name}” already reads as ${clash.owner}.` },
+        fields: { aliases: `“${clash.name}” reads as ${clash.owner}; choose another name.` },
       },
     );
   }

@@ -1,5 +1,5 @@
 import type { ImportPreview } from "@/lib/import/summary";
-import type { ImportFormat, WideTarget } from "@/lib/import/types";
+import type { ImportFormat, ImportMatches, WideTarget } from "@/lib/import/types";
 
 /** The mapping step's choices, in the shape the selects need. */
 export type MappingDraft =
@@ -63,3 +63,10 @@ export function fieldsOf(draft: MappingDraft): Record<string, string> {
   }
   return { format: "wide", athleteColumn: draft.athleteColumn, mapping: JSON.stringify(draft.columns) };
 }
+
+export const hasMatches = (matches: ImportMatches) =>
+  Object.keys(matches.athletes).length + Object.keys(matches.tests).length > 0;
+
+/** The multipart field that carries the names matched in the mapping step (none: no field). */
+export const matchFields = (matches: ImportMatches): Record<string, string> =>
+  hasMatches(matches) ? { matches: JSON.stringify(matches) } : {};

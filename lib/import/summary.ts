@@ -57,6 +57,8 @@ export type ImportPreview = {
   replacements: ReplacementRow[];
   canCommit: boolean;
   tests: { id: number; name: string; unit: string; trialsPerSession: number }[];
+  /** The roster the file is read against, for matching a name the file spells its own way. */
+  roster: { id: number; name: string }[];
 };
 
 export type ImportCommitted = {

@@ -56,7 +56,7 @@ describe("other names in the Test library", () => {
     await signInAs("scientist@example.com");
     const taken = await patch(ids.squat, { aliases: ["Squat", "cmj"] });
     expect(taken.status).toBe(409);
-    expect(taken.json.error.fields).toEqual({ aliases: "“cmj” already reads as Countermovement jump." });
+    expect(taken.json.error.fields).toEqual({ aliases: "“cmj” reads as Countermovement jump; choose another name." });
     const asName = await patch(ids.squat, { aliases: ["Countermovement jump"] });
     expect(asName.status).toBe(409);
     const created = await call(testsRoute.POST, {

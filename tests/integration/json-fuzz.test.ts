@@ -131,6 +131,7 @@ const BASES: Record<string, Base> = {
       typicalErrorSource: "Fuzz",
       plausibleMin: 0,
       plausibleMax: 100,
+      aliases: ["FH", "Fuzz hop test"],
     }),
     specials: () => [
       asJson("cv-factor without CV", { name: "Fuzz cv", unit: "cm", direction: "higher", swcMethod: "cv-factor" }),
@@ -148,6 +149,7 @@ const BASES: Record<string, Base> = {
     body: async (i) => ({
       version: await version("tests", i.mean),
       name: "Drop jump contact time",
+      aliases: "DJ contact, Drop jump CT",
       decimals: 2,
       trialsPerSession: 3,
       typicalError: 0.01,

@@ -5,6 +5,7 @@ import { Breadcrumbs } from "@/components/breadcrumbs";
 import { ImportFlow } from "@/components/import/import-flow";
 import { STAFF } from "@/lib/auth/guard";
 import { pageGuard, pageId } from "@/lib/auth/page-guard";
+import { canEditTestLibrary } from "@/lib/auth/permissions";
 import { getImportSession, loadImportContext } from "@/lib/data/import";
 import { ApiError } from "@/lib/errors";
 import { formatDate, PHASE_LABELS, STATUS_LABELS } from "@/lib/labels";
@@ -15,7 +16,7 @@ async function load(sessionId: number) {
   const actor = await pageGuard({ roles: STAFF, sessionId });
   try {
     const session = await getImportSession(actor, sessionId);
-    return { session, context: await loadImportContext(session) };
+    return { session, context: await loadImportContext(session), canRememberTests: canEditTestLibrary(actor) };
   } catch (error) {
     if (error instanceof ApiError && error.status === 404) notFound();
     throw error;
@@ -23,7 +24,7 @@ async function load(sessionId: number) {
 }
 
 export default async function ImportPage({ params }: { params: Promise<{ sessionId: string }> }) {
-  const { session, context } = await load(pageId((await params).sessionId));
+  const { session, context, canRememberTests } = await load(pageId((await params).sessionId));
 
   return (
     <section aria-labelledby="import-heading" className="space-y-4">
@@ -84,11 +85,13 @@ export default async function ImportPage({ params }: { params: Promise<{ session
             <ul className="mt-3 list-disc space-y-1 pl-5 text-ink-soft">
               <li>
                 Athletes are matched on the {session.squadName} roster by external id, then by name (capitals and spaces
-                do not matter). Nobody is added.
+                do not matter), then by other names remembered from earlier files. Nobody is added; a name the roster
+                does not know can be matched to an athlete before importing.
               </li>
               <li>
-                Tests are matched by name within this session's battery. “Countermovement jump #2” and “Countermovement
-                jump (trial 2)” also work; a plain test name is trial 1.
+                Tests are matched by name, or by an other name from the Test library (such as “CMJ”), within this
+                session's battery. “Countermovement jump #2” and “Countermovement jump (trial 2)” also work; a plain
+                test name is trial 1.
               </li>
               <li>
                 , ; tab or | between columns; in files separated by ; or tab a comma is a decimal comma. Empty cells are
@@ -101,7 +104,7 @@ export default async function ImportPage({ params }: { params: Promise<{ session
               </li>
             </ul>
           </details>
-          <ImportFlow sessionId={session.id} />
+          <ImportFlow sessionId={session.id} canRememberTests={canRememberTests} />
         </>
       )}
     </section>
