@@ -1,6 +1,7 @@
 "use client";
 
 import { useMemo, useRef } from "react";
+import { useOverflowsParent } from "@/hooks/use-overflows-parent";
 import type { SessionSheetState } from "@/hooks/use-session-sheet";
 import type { SheetData, SheetTest } from "@/lib/client/queries";
 import { isBlock, parseBlock, sheetColumns } from "@/lib/sheet/columns";
@@ -30,6 +31,8 @@ export function SheetGrid({
   suspects: Map<string, Suspect[]>;
 }) {
   const tableRef = useRef<HTMLTableElement>(null);
+  const boxRef = useRef<HTMLDivElement>(null);
+  const tooWide = useOverflowsParent(boxRef, tableRef);
   const anchor = useRef<number | null>(null);
   const { nav, trials, navIndex } = useMemo(() => sheetColumns(tests), [tests]);
   const totalColumns = 1 + tests.reduce((n, t) => n + t.trialsPerSession + 2, 0);
@@ -112,41 +115,54 @@ export function SheetGrid({
   }
 
   return (
-    <div className="card relative w-fit max-w-full max-h-[calc(100vh-7rem)] overflow-auto">
-      <table
-        ref={tableRef}
-        className="w-max border-separate border-spacing-0 text-sm"
-        onKeyDown={canEdit ? onKeyDown : undefined}
-        onPaste={canEdit ? onPaste : undefined}
-        onPointerDown={() => (anchor.current = null)}
+    // One scroll area, the page: the header sticks to the top of the window as the squad scrolls by.
+    // A sheet wider than the screen scrolls in a box as tall as the window instead, so the header
+    // and the names still stick ("Show" one test makes it fit again).
+    <>
+      {tooWide && (
+        <p className="text-sm text-ink-soft">
+          These tests are wider than the screen: the sheet scrolls sideways, or choose one test under Show.
+        </p>
+      )}
+      <div
+        ref={boxRef}
+        className={`card relative w-fit max-w-full ${tooWide ? "max-h-[calc(100dvh-1rem)] overflow-auto" : ""}`}
       >
-        <caption className="sr-only">
-          Session sheet: one row per athlete; for each test its trials, the reduced score and a flag.
-        </caption>
-        <SheetHead tests={tests} />
-        <tbody>
-          {data.athletes.map((athlete, row) => (
-            <SheetRow
-              key={athlete.id}
-              athlete={athlete}
-              row={row}
-              tests={tests}
-              navIndex={navIndex}
-              sheet={sheet}
-              canEdit={canEdit}
-              totalColumns={totalColumns}
-              suspects={suspects}
-            />
-          ))}
-          {data.athletes.length === 0 && (
-            <tr>
-              <td colSpan={totalColumns} className="px-4 py-6 text-center text-ink-soft">
-                This squad has no athletes yet. Add them on the Roster first.
-              </td>
-            </tr>
-          )}
-        </tbody>
-      </table>
-    </div>
+        <table
+          ref={tableRef}
+          className="w-max border-separate border-spacing-0 text-sm"
+          onKeyDown={canEdit ? onKeyDown : undefined}
+          onPaste={canEdit ? onPaste : undefined}
+          onPointerDown={() => (anchor.current = null)}
+        >
+          <caption className="sr-only">
+            Session sheet: one row per athlete; for each test its trials, the reduced score and a flag.
+          </caption>
+          <SheetHead tests={tests} />
+          <tbody>
+            {data.athletes.map((athlete, row) => (
+              <SheetRow
+                key={athlete.id}
+                athlete={athlete}
+                row={row}
+                tests={tests}
+                navIndex={navIndex}
+                sheet={sheet}
+                canEdit={canEdit}
+                totalColumns={totalColumns}
+                suspects={suspects}
+              />
+            ))}
+            {data.athletes.length === 0 && (
+              <tr>
+                <td colSpan={totalColumns} className="px-4 py-6 text-center text-ink-soft">
+                  This squad has no athletes yet. Add them on the Roster first.
+                </td>
+              </tr>
+            )}
+          </tbody>
+        </table>
+      </div>
+    </>
   );
 }
