@@ -45,7 +45,7 @@ export function PreviewTable({ preview }: { preview: ImportPreview }) {
       caption={
         <>
           The first {preview.sample.length} of <span className="num">{preview.rowCount}</span> rows as written in the
-          file. Marked cells have a problem, listed below.
+          file.{preview.errorCount > 0 && " Marked cells have a problem, listed above."}
         </>
       }
       columns={columns}

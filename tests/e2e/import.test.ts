@@ -100,6 +100,39 @@ describe("Import in the browser", () => {
     await page.close();
   });
 
+  it("a file with “CMJ” and a misspelt name imports after two clicks, and the spelling is remembered", async () => {
+    const page = await browser.context.newPage();
+    await signInThroughForm(page, baseUrl, "coach@example.com");
+    await page.setViewportSize({ width: 820, height: 1180 });
+    await page.goto(`${baseUrl}/sessions/${session.id}/import`);
+    const file = {
+      name: "catch-up.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from(
+        "athlete,test,trial,value\nTheo Vargaa,CMJ,1,30.1\nTheo Vargaa,CMJ,2,30.6\nTheo Vargaa,10 m sprint,1,1.86\n",
+      ),
+    };
+    await page.locator('input[type="file"]').setInputFiles(file);
+    await page.getByRole("heading", { name: "Names in the file" }).waitFor();
+    // CMJ is another name of the countermovement jump in the demo's Test library: only the name is asked about.
+    expect(await page.getByText("Tests not in this session's battery").count()).toBe(0);
+    await page.getByRole("button", { name: "Use Theo Varga" }).click();
+    await page.getByText("Theo Vargaa reads as Theo Varga").waitFor();
+    const importButton = page.getByRole("button", { name: "Import 2 results" });
+    await expect.poll(() => importButton.isEnabled()).toBe(true);
+    await screenshot(page, "import-names-matched");
+    await importButton.click();
+    await page.getByText("Remembered for the next file").waitFor();
+    await screenshot(page, "import-names-done");
+
+    // The next file that spells him so is read without asking.
+    await page.getByRole("button", { name: "Import another file" }).click();
+    await page.locator('input[type="file"]').setInputFiles(file);
+    await page.getByText("0 new · 0 updated · 2 already stored").waitFor();
+    expect(await page.getByRole("heading", { name: "Names in the file" }).count()).toBe(0);
+    await page.close();
+  });
+
   it("maps an unknown column in the mapping step, and replaces a stored value only when asked", async () => {
     const page = await browser.context.newPage();
     await signInThroughForm(page, baseUrl, "coach@example.com");
