@@ -3,7 +3,7 @@ import type { Metadata } from "next";
 import { AthleteHome } from "@/components/athlete-home";
 import { SquadsOverview } from "@/components/squads-overview";
 import { pageGuard } from "@/lib/auth/page-guard";
-import { isAthlete } from "@/lib/auth/permissions";
+import { canManageSquad, isAthlete } from "@/lib/auth/permissions";
 import { athleteQueries, squadQueries } from "@/lib/client/queries";
 import { getMyProgress } from "@/lib/data/my-progress";
 import { listSquads } from "@/lib/data/squads";
@@ -30,7 +30,7 @@ export default async function HomePage() {
   ]);
   return (
     <HydrationBoundary state={dehydrate(client)}>
-      <SquadsOverview role={actor.role} />
+      <SquadsOverview role={actor.role} canCreate={canManageSquad(actor)} />
     </HydrationBoundary>
   );
 }

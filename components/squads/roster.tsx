@@ -54,7 +54,7 @@ export function Roster({ squadId }: { squadId: number }) {
   const { squad } = detail;
   return (
     <section aria-labelledby="squad-heading" className="space-y-4">
-      <Breadcrumbs trail={[{ href: "/squads", label: "Roster" }, { label: squad.name }]} />
+      <Breadcrumbs trail={[{ href: "/", label: "Squads" }, { label: squad.name }]} />
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
           <h1 id="squad-heading" className="text-2xl font-bold">

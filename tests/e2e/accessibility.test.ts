@@ -58,7 +58,6 @@ describe("accessibility and fit of every screen", () => {
     const athletes = (await http.json("/api/athletes")).json.athletes as { id: number }[];
     paths = [
       "/",
-      "/squads",
       `/squads/${squads[0].id}`,
       `/athletes/${athletes[0].id}`,
       "/tests",
@@ -159,7 +158,10 @@ describe("accessibility and fit of every screen", () => {
     await page.setViewportSize({ width: 390, height: 844 });
     await signInThroughForm(page, baseUrl, "coach@example.com");
     const problems: string[] = [];
-    for (const path of ["/", "/squads", "/tests", "/sessions"]) {
+    const coach = new HttpSession(baseUrl);
+    await coach.signIn("coach@example.com");
+    const [own] = (await coach.json("/api/squads")).json.squads as { id: number }[];
+    for (const path of ["/", `/squads/${own.id}`, "/tests", "/sessions"]) {
       await page.goto(`${baseUrl}${path}`);
       await page.waitForSelector("h1");
       const { violations, sideways } = await audit(page, `a11y-390-coach-${path.replaceAll("/", "_") || "home"}`);

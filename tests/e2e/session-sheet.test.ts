@@ -242,8 +242,8 @@ describe("other Capture screens render for the owner", () => {
     expect(await page.getByText("0.2 × between-athlete SD").count()).toBeGreaterThan(0);
     await screenshot(page, "test-library");
 
-    await page.getByRole("link", { name: "Roster" }).click();
-    await page.getByRole("link", { name: /Academy U18/ }).click();
+    await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Squads" }).click();
+    await page.getByRole("link", { name: "Academy U18", exact: true }).click();
     await page.getByRole("cell", { name: "Jonah Pellegrini", exact: true }).waitFor();
     await page.getByLabel("Filter athletes").fill("mateo");
     expect(await page.locator("tbody tr").count()).toBe(1);
