@@ -103,7 +103,7 @@ export function Roster({ squadId }: { squadId: number }) {
         <AthleteTable
           athletes={athletes.data}
           renderActions={(a) => (
-            <div className="flex justify-end gap-1.5 whitespace-nowrap">
+            <div className="flex flex-wrap gap-1.5 sm:flex-nowrap sm:justify-end">
               <button
                 type="button"
                 className="btn-quiet px-2 py-1 text-xs"
