@@ -4,7 +4,7 @@ import { keepPreviousData, useQuery, useSuspenseQuery } from "@tanstack/react-qu
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { Breadcrumbs } from "@/components/breadcrumbs";
-import { Dialog } from "@/components/dialog";
+import { Dialog, DialogCancel } from "@/components/dialog";
 import { LoadFailure } from "@/components/query-status";
 import { useUpdateAthlete } from "@/hooks/use-writes";
 import { type RosterAthlete, squadQueries } from "@/lib/client/queries";
@@ -177,6 +177,10 @@ export function Roster({ squadId }: { squadId: number }) {
       </Dialog>
       <Dialog open={panel?.kind === "settings"} title="Squad settings" onClose={() => setPanel(null)}>
         {panel?.kind === "settings" && <SquadSettings squad={squad} onSaved={done} />}
+        {/* Each part above saves on its own button, so leaving loses nothing saved: Close, not Cancel. */}
+        <div className="mt-6 flex justify-end border-t border-line pt-4">
+          <DialogCancel label="Close" />
+        </div>
       </Dialog>
     </section>
   );
