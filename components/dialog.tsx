@@ -79,7 +79,7 @@ export function Dialog({
 
 /**
  * The visible way out at the foot of a dialog, beside its main button; nothing outside a dialog.
- * `label` is "Close" where nothing typed would be lost (a message to read, settings saved one by one).
+ * `label` is "Done" where nothing typed would be lost (a message to read, settings saved one by one).
  */
 export function DialogCancel({ label = "Cancel", onCancel }: { label?: string; onCancel?: () => void }) {
   const close = useContext(DialogClose);

@@ -124,7 +124,7 @@ function MessageDialog({ id, onClose }: { id: string | null; onClose: () => void
     <Dialog open={id !== null} title="Message" onClose={onClose} wide>
       {id && <MessageBody id={id} />}
       <div className="mt-4 flex justify-end">
-        <DialogCancel label="Close" />
+        <DialogCancel label="Done" />
       </div>
     </Dialog>
   );

@@ -177,9 +177,9 @@ export function Roster({ squadId }: { squadId: number }) {
       </Dialog>
       <Dialog open={panel?.kind === "settings"} title="Squad settings" onClose={() => setPanel(null)}>
         {panel?.kind === "settings" && <SquadSettings squad={squad} onSaved={done} />}
-        {/* Each part above saves on its own button, so leaving loses nothing saved: Close, not Cancel. */}
+        {/* Each part above saves on its own button, so leaving loses nothing saved: Done, not Cancel. */}
         <div className="mt-6 flex justify-end border-t border-line pt-4">
-          <DialogCancel label="Close" />
+          <DialogCancel label="Done" />
         </div>
       </Dialog>
     </section>
