@@ -38,13 +38,14 @@ describe("Squads is the one list of squads", () => {
     const nav = page.getByRole("navigation", { name: "Main" });
     await nav.getByRole("link", { name: "Squads" }).waitFor();
     expect(await nav.getByRole("link").allTextContents()).not.toContain("Roster");
-    expect(await page.title()).toBe("Squads · Changewise");
+    // The title streams in after the page body (metadata is streamed), so it is polled.
+    await expect.poll(() => page.title()).toBe("Squads · Changewise");
     // A coach creates no squad.
     expect(await page.getByRole("button", { name: "New squad" }).count()).toBe(0);
 
     await page.getByRole("link", { name: "Academy U18", exact: true }).click();
     await page.getByRole("heading", { name: "Academy U18", level: 1 }).waitFor();
-    expect(await page.title()).toBe("Roster · Academy U18 · Changewise");
+    await expect.poll(() => page.title()).toBe("Roster · Academy U18 · Changewise");
     const crumb = page.getByRole("navigation", { name: "Breadcrumb" }).getByRole("link", { name: "Squads" });
     expect(await crumb.getAttribute("href")).toBe("/");
 
@@ -52,7 +53,7 @@ describe("Squads is the one list of squads", () => {
     for (const id of [squad("Senior Women").id, 999999]) {
       await page.goto(`${baseUrl}/squads/${id}`);
       await page.getByRole("heading", { name: "Squad not found" }).waitFor();
-      expect(await page.title()).toBe("Roster · Changewise");
+      await expect.poll(() => page.title()).toBe("Roster · Changewise");
       expect(await page.getByRole("link", { name: "Back to Squads" }).getAttribute("href")).toBe("/");
     }
     await page.close();
