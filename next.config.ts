@@ -28,6 +28,10 @@ const nextConfig: NextConfig = {
   turbopack: { root: buildRoot() },
   // Uploads go through route handlers with their own 10 MB limit; server actions stay small.
   experimental: { serverActions: { bodySizeLimit: "1mb" } },
+  /** Squads, the staff home, lists the squads; the old address of a second list leads there. */
+  async redirects() {
+    return [{ source: "/squads", destination: "/", permanent: false }];
+  },
   /**
    * Applied by Next.js before anything else, to every response it sends (pages, API, static
    * files, 404s). The policy here has no nonce, so it lets no inline script run; pages get the

@@ -8,7 +8,7 @@ export function AppShell({ actor, children }: { actor: Actor; children: React.Re
   return (
     <div className="min-h-screen">
       <header className="on-dark bg-ink text-white print:hidden">
-        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-2 px-4 py-3 lg:gap-x-6">
           <Link href="/" className="text-lg font-bold tracking-tight">
             Changewise
           </Link>

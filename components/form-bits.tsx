@@ -2,6 +2,7 @@
 
 import type { ReactNode } from "react";
 import type { FieldValues, Path, UseFormSetError } from "react-hook-form";
+import { DialogCancel } from "@/components/dialog";
 import { ApiClientError } from "@/lib/client/fetch-json";
 
 export function FieldError({ id, message }: { id?: string; message?: string }) {
@@ -47,22 +48,28 @@ export function Field({
   );
 }
 
-/** The end of a form: what went wrong, then the submit button on the right. */
+/**
+ * The end of a form: what went wrong, then Cancel and the submit button on the right. Cancel
+ * shows inside a dialog (it closes it) or wherever `onCancel` is given.
+ */
 export function SubmitRow({
   failure,
   submitting,
   label,
   busyLabel,
+  onCancel,
 }: {
   failure: string | null;
   submitting: boolean;
   label: string;
   busyLabel: string;
+  onCancel?: () => void;
 }) {
   return (
     <>
       <FormAlert message={failure} />
-      <div className="flex justify-end">
+      <div className="flex flex-wrap justify-end gap-2">
+        <DialogCancel onCancel={onCancel} />
         <button type="submit" className="btn-primary" disabled={submitting}>
           {submitting ? busyLabel : label}
         </button>

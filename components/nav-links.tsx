@@ -15,7 +15,7 @@ export function NavLinks({ items }: { items: NavItem[] }) {
             <Link
               href={item.href}
               aria-current={active ? "page" : undefined}
-              className={`block rounded-md px-3 py-1.5 text-sm font-semibold ${
+              className={`block rounded-md px-2 py-1.5 text-sm font-semibold lg:px-3 ${
                 active ? "bg-white text-ink" : "text-white/80 hover:bg-white/10 hover:text-white"
               }`}
             >

@@ -1,4 +1,4 @@
-import type { ReactNode, ThHTMLAttributes } from "react";
+import { Fragment, type ReactNode, type ThHTMLAttributes } from "react";
 
 /** A column heading; any other `<th>` attribute (title, aria-sort…) is passed on. */
 export type Column = {
@@ -48,6 +48,36 @@ export function TableCard({
         </thead>
         <tbody>{children}</tbody>
       </table>
+    </div>
+  );
+}
+
+/**
+ * Cells that leave the row below the `sm` breakpoint: on a phone their content is shown by
+ * `PhoneFacts` inside the row's first cell instead, so the table never scrolls sideways.
+ */
+export const WIDE_ONLY = "hidden sm:table-cell";
+
+export type Fact = { label: string; value: ReactNode };
+
+/**
+ * Below `sm`, a row's key figures as small lines under its name, and its actions as buttons that
+ * wrap. Give it the same nodes the wide cells show, so a row's content is written once.
+ */
+export function PhoneFacts({ facts, actions }: { facts: Fact[]; actions?: ReactNode }) {
+  return (
+    <div className="mt-1 space-y-2 sm:hidden">
+      {facts.length > 0 && (
+        <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-xs">
+          {facts.map((fact) => (
+            <Fragment key={fact.label}>
+              <dt className="text-ink-soft">{fact.label}</dt>
+              <dd className="min-w-0 [overflow-wrap:anywhere]">{fact.value}</dd>
+            </Fragment>
+          ))}
+        </dl>
+      )}
+      {actions}
     </div>
   );
 }

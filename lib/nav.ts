@@ -6,7 +6,6 @@ export type NavItem = { href: string; label: string; roles: readonly Role[] };
 /** Screens by role, with our own names (PRODUCT.md §6). Only screens that exist are listed. */
 export const NAV_ITEMS: NavItem[] = [
   { href: "/", label: "Squads", roles: STAFF },
-  { href: "/squads", label: "Roster", roles: STAFF },
   { href: "/tests", label: "Test library", roles: STAFF },
   { href: "/sessions", label: "Sessions", roles: STAFF },
   { href: "/reports/change", label: "Change report", roles: STAFF },

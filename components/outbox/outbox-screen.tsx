@@ -2,7 +2,7 @@
 
 import { useQuery, useSuspenseQuery } from "@tanstack/react-query";
 import { useState } from "react";
-import { Dialog } from "@/components/dialog";
+import { Dialog, DialogCancel } from "@/components/dialog";
 import { LoadFailure } from "@/components/query-status";
 import { type Column, TableCard } from "@/components/table-card";
 import { type OutboxData, outboxQueries } from "@/lib/client/queries";
@@ -123,6 +123,9 @@ function MessageDialog({ id, onClose }: { id: string | null; onClose: () => void
   return (
     <Dialog open={id !== null} title="Message" onClose={onClose} wide>
       {id && <MessageBody id={id} />}
+      <div className="mt-4 flex justify-end">
+        <DialogCancel label="Done" />
+      </div>
     </Dialog>
   );
 }

@@ -120,7 +120,7 @@ function DeletePreview({
       <FormAlert message={remove.error ? remove.error.message : null} />
       <div className="flex justify-end gap-2">
         <button type="button" className="btn-quiet" onClick={onClose}>
-          Keep
+          Cancel
         </button>
         <button
           type="button"

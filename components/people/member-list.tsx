@@ -157,7 +157,7 @@ function RemoveDialog({
           <FormAlert message={remove.error ? remove.error.message : null} />
           <div className="flex justify-end gap-2">
             <button type="button" className="btn-quiet" onClick={onClose}>
-              Keep
+              Cancel
             </button>
             <button
               type="button"

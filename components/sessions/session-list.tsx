@@ -6,7 +6,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
-import { type Column, TableCard } from "@/components/table-card";
+import { type Column, PhoneFacts, TableCard, WIDE_ONLY } from "@/components/table-card";
 import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
 import { formatDate, PHASE_LABELS, STATUS_LABELS } from "@/lib/labels";
 import { PublishControl } from "./publish-control";
@@ -14,12 +14,12 @@ import { SessionCreateForm } from "./session-create-form";
 
 const COLUMNS: Column[] = [
   { label: "Date" },
-  { label: "Squad" },
-  { label: "Phase" },
-  { label: "Status" },
-  { label: "Battery" },
-  { label: "Results", align: "right" },
-  { label: "Actions", srOnly: true },
+  { label: "Squad", className: WIDE_ONLY },
+  { label: "Phase", className: WIDE_ONLY },
+  { label: "Status", className: WIDE_ONLY },
+  { label: "Battery", className: WIDE_ONLY },
+  { label: "Results", align: "right", className: WIDE_ONLY },
+  { label: "Actions", srOnly: true, className: WIDE_ONLY },
 ];
 
 /** Testing sessions of the caller's squads, newest first, with a squad filter and "New session". */
@@ -50,7 +50,7 @@ export function SessionList({ canPublish, initialSquadId }: { canPublish: boolea
             Dated testing sessions. Open one to enter scores on its Session sheet.
           </p>
         </div>
-        <div className="flex items-center gap-3">
+        <div className="flex flex-wrap items-center gap-3">
           <label htmlFor="session-filter" className="text-sm font-semibold">
             Squad
           </label>
@@ -85,46 +85,68 @@ export function SessionList({ canPublish, initialSquadId }: { canPublish: boolea
       />
       {list.length > 0 && (
         <TableCard columns={COLUMNS}>
-          {list.map((s) => (
-            <tr key={s.id} className="border-b border-line align-top last:border-0">
-              <td className="num whitespace-nowrap px-3 py-2.5">
-                <Link href={`/sessions/${s.id}`} className="font-semibold underline-offset-2 hover:underline">
-                  {formatDate(s.date)}
-                </Link>
-              </td>
-              <td className="whitespace-nowrap px-3 py-2.5">{s.squadName}</td>
-              <td className="whitespace-nowrap px-3 py-2.5">{PHASE_LABELS[s.phase] ?? s.phase}</td>
-              <td className="px-3 py-2.5">
-                <span
-                  className={`rounded px-1.5 py-0.5 text-xs font-semibold ${s.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}
-                >
-                  {STATUS_LABELS[s.status]}
-                </span>
-              </td>
-              <td className="min-w-40 px-3 py-2.5 text-ink-soft">
+          {list.map((s) => {
+            const phase = PHASE_LABELS[s.phase] ?? s.phase;
+            const status = (
+              <span
+                className={`rounded px-1.5 py-0.5 text-xs font-semibold ${s.status === "published" ? "bg-ink text-white" : "bg-band text-ink"}`}
+              >
+                {STATUS_LABELS[s.status]}
+              </span>
+            );
+            const battery = (
+              <>
                 {s.testIds.map((id) => testName.get(id) ?? `Test ${id}`).join(" · ")}
-                {s.notes && <div className="text-xs text-ink-faint">{s.notes}</div>}
-              </td>
-              <td className="num px-3 py-2.5 text-right">{s.resultCount}</td>
-              <td className="px-3 py-2.5">
-                {/* Stacked on a tablet, so both buttons stay on screen beside the battery. */}
-                <div className="flex flex-col items-stretch gap-1.5 whitespace-nowrap xl:flex-row xl:justify-end">
-                  <Link href={`/sessions/${s.id}`} className="btn-quiet px-2 py-1 text-xs">
-                    Session sheet
+                {s.notes && <span className="block text-xs text-ink-soft">{s.notes}</span>}
+              </>
+            );
+            const results = <span className="num">{s.resultCount}</span>;
+            const actions = (
+              // Stacked on a tablet, so both buttons stay on screen beside the battery; wrapping on a phone.
+              <div className="flex flex-wrap gap-1.5 whitespace-nowrap sm:flex-col sm:items-stretch xl:flex-row xl:justify-end">
+                <Link href={`/sessions/${s.id}`} className="btn-quiet px-2 py-1 text-xs">
+                  Session sheet
+                </Link>
+                {canPublish && (
+                  <PublishControl
+                    compact
+                    sessionId={s.id}
+                    status={s.status}
+                    squadName={s.squadName}
+                    version={s.version}
+                  />
+                )}
+              </div>
+            );
+            return (
+              <tr key={s.id} className="border-b border-line align-top last:border-0">
+                <td className="px-3 py-2.5">
+                  <Link
+                    href={`/sessions/${s.id}`}
+                    className="num whitespace-nowrap font-semibold underline-offset-2 hover:underline"
+                  >
+                    {formatDate(s.date)}
                   </Link>
-                  {canPublish && (
-                    <PublishControl
-                      compact
-                      sessionId={s.id}
-                      status={s.status}
-                      squadName={s.squadName}
-                      version={s.version}
-                    />
-                  )}
-                </div>
-              </td>
-            </tr>
-          ))}
+                  <span className="ml-2 font-semibold sm:hidden">{s.squadName}</span>
+                  <PhoneFacts
+                    facts={[
+                      { label: "Phase", value: phase },
+                      { label: "Status", value: status },
+                      { label: "Battery", value: battery },
+                      { label: "Results", value: results },
+                    ]}
+                    actions={actions}
+                  />
+                </td>
+                <td className={`whitespace-nowrap px-3 py-2.5 ${WIDE_ONLY}`}>{s.squadName}</td>
+                <td className={`whitespace-nowrap px-3 py-2.5 ${WIDE_ONLY}`}>{phase}</td>
+                <td className={`px-3 py-2.5 ${WIDE_ONLY}`}>{status}</td>
+                <td className={`min-w-40 px-3 py-2.5 text-ink-soft ${WIDE_ONLY}`}>{battery}</td>
+                <td className={`px-3 py-2.5 text-right ${WIDE_ONLY}`}>{results}</td>
+                <td className={`px-3 py-2.5 ${WIDE_ONLY}`}>{actions}</td>
+              </tr>
+            );
+          })}
         </TableCard>
       )}
 

@@ -2,6 +2,7 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useMemo, useState } from "react";
+import { DialogCancel } from "@/components/dialog";
 import { Field, FormAlert } from "@/components/form-bits";
 import { useAddAthlete } from "@/hooks/use-writes";
 import { athleteQueries, type RosterAthlete } from "@/lib/client/queries";
@@ -26,15 +27,23 @@ export function AddExistingAthlete({
     addAthlete.mutate({ athleteId: Number(athleteId) }, { onSuccess: onDone });
   }
 
-  if (isPending)
+  if (isPending || error || candidates.length === 0)
     return (
-      <p role="status" className="text-sm text-ink-soft">
-        Loading athletes…
-      </p>
+      <div className="space-y-3">
+        {isPending ? (
+          <p role="status" className="text-sm text-ink-soft">
+            Loading athletes…
+          </p>
+        ) : error ? (
+          <FormAlert message={`Athletes could not load: ${error.message}`} />
+        ) : (
+          <p className="text-sm text-ink-soft">Every athlete you can see is already in this squad.</p>
+        )}
+        <div className="flex justify-end">
+          <DialogCancel />
+        </div>
+      </div>
     );
-  if (error) return <FormAlert message={`Athletes could not load: ${error.message}`} />;
-  if (candidates.length === 0)
-    return <p className="text-sm text-ink-soft">Every athlete you can see is already in this squad.</p>;
   return (
     <div className="space-y-3">
       <Field id="existing-athlete" label="Athlete">
@@ -55,7 +64,8 @@ export function AddExistingAthlete({
         </select>
       </Field>
       <FormAlert message={failure} />
-      <div className="flex justify-end">
+      <div className="flex flex-wrap justify-end gap-2">
+        <DialogCancel />
         <button type="button" className="btn-primary" disabled={!athleteId || addAthlete.isPending} onClick={add}>
           {addAthlete.isPending ? "Adding…" : "Add to squad"}
         </button>

@@ -2,6 +2,7 @@
 
 import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
+import { DialogCancel } from "@/components/dialog";
 import { Field, FormAlert } from "@/components/form-bits";
 import { useUpdateAthlete } from "@/hooks/use-writes";
 import { athleteQueries, type RosterAthlete, squadQueries } from "@/lib/client/queries";
@@ -48,13 +49,21 @@ export function AthleteMove({
     );
   }
 
-  if (loading)
+  if (loading || failed)
     return (
-      <p role="status" className="text-sm text-ink-soft">
-        Reading {athlete.name}&apos;s squads…
-      </p>
+      <div className="space-y-3">
+        {failed ? (
+          <FormAlert message={`Squads could not load: ${failed.message}`} />
+        ) : (
+          <p role="status" className="text-sm text-ink-soft">
+            Reading {athlete.name}&apos;s squads…
+          </p>
+        )}
+        <div className="flex justify-end">
+          <DialogCancel />
+        </div>
+      </div>
     );
-  if (failed) return <FormAlert message={`Squads could not load: ${failed.message}`} />;
   return (
     <div className="space-y-4">
       <p className="text-sm">
@@ -82,7 +91,8 @@ export function AthleteMove({
         </>
       )}
       <FormAlert message={failure} />
-      <div className="flex justify-end">
+      <div className="flex flex-wrap justify-end gap-2">
+        <DialogCancel />
         <button type="button" className="btn-primary" disabled={!target || update.isPending} onClick={move}>
           {update.isPending ? "Saving…" : keep ? "Add to squad" : "Move"}
         </button>

@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { useMemo, useState } from "react";
-import { type Column, TableCard } from "@/components/table-card";
+import { type Column, PhoneFacts, TableCard, WIDE_ONLY } from "@/components/table-card";
 import type { RosterAthlete } from "@/lib/client/queries";
 import { formatDate } from "@/lib/labels";
 
@@ -52,6 +52,8 @@ export function AthleteTable({
     ...COLUMNS.map((col): Column => {
       const active = sort.key === col.key;
       return {
+        // On a phone only the name keeps its column; the rest stack under it.
+        className: col.key === "name" ? undefined : WIDE_ONLY,
         "aria-sort": active ? (sort.dir === 1 ? "ascending" : "descending") : "none",
         label: (
           <button
@@ -67,7 +69,7 @@ export function AthleteTable({
         ),
       };
     }),
-    { label: "Actions", srOnly: true },
+    { label: "Actions", srOnly: true, className: WIDE_ONLY },
   ];
 
   return (
@@ -96,30 +98,48 @@ export function AthleteTable({
             </td>
           </tr>
         )}
-        {shown.map((a) => (
-          <tr
-            key={a.id}
-            className={`border-b border-line last:border-0 ${a.archived ? "bg-paper text-ink-faint" : ""}`}
-          >
-            <td className="px-3 py-2">
-              <Link
-                href={`/athletes/${a.id}`}
-                className="font-semibold underline-offset-2 hover:underline"
-                title={`Athlete history of ${a.name}`}
-              >
-                {a.name}
-              </Link>
-              {a.archived && (
-                <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>
-              )}
-            </td>
-            <td className="px-3 py-2">{a.position ?? "–"}</td>
-            <td className="px-3 py-2">{a.sex ? SEX_LABELS[a.sex] : "–"}</td>
-            <td className="num whitespace-nowrap px-3 py-2">{a.dateOfBirth ? formatDate(a.dateOfBirth) : "–"}</td>
-            <td className="num px-3 py-2">{a.externalId ?? "–"}</td>
-            <td className="px-3 py-2">{renderActions(a)}</td>
-          </tr>
-        ))}
+        {shown.map((a) => {
+          const cells = {
+            position: a.position ?? "–",
+            sex: a.sex ? SEX_LABELS[a.sex] : "–",
+            dateOfBirth: (
+              <span className="num whitespace-nowrap">{a.dateOfBirth ? formatDate(a.dateOfBirth) : "–"}</span>
+            ),
+            externalId: <span className="num">{a.externalId ?? "–"}</span>,
+          };
+          const actions = renderActions(a);
+          return (
+            <tr
+              key={a.id}
+              className={`border-b border-line last:border-0 ${a.archived ? "bg-paper text-ink-soft" : ""}`}
+            >
+              <td className="px-3 py-2">
+                <Link
+                  href={`/athletes/${a.id}`}
+                  className="font-semibold underline-offset-2 hover:underline"
+                  title={`Athlete history of ${a.name}`}
+                >
+                  {a.name}
+                </Link>
+                {a.archived && (
+                  <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>
+                )}
+                <PhoneFacts
+                  facts={COLUMNS.filter((col) => col.key !== "name").map((col) => ({
+                    label: col.label,
+                    value: cells[col.key as Exclude<SortKey, "name">],
+                  }))}
+                  actions={actions}
+                />
+              </td>
+              <td className={`px-3 py-2 ${WIDE_ONLY}`}>{cells.position}</td>
+              <td className={`px-3 py-2 ${WIDE_ONLY}`}>{cells.sex}</td>
+              <td className={`px-3 py-2 ${WIDE_ONLY}`}>{cells.dateOfBirth}</td>
+              <td className={`px-3 py-2 ${WIDE_ONLY}`}>{cells.externalId}</td>
+              <td className={`px-3 py-2 ${WIDE_ONLY}`}>{actions}</td>
+            </tr>
+          );
+        })}
       </TableCard>
     </div>
   );

@@ -4,7 +4,7 @@ import { keepPreviousData, useQuery, useSuspenseQuery } from "@tanstack/react-qu
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { Breadcrumbs } from "@/components/breadcrumbs";
-import { Dialog } from "@/components/dialog";
+import { Dialog, DialogCancel } from "@/components/dialog";
 import { LoadFailure } from "@/components/query-status";
 import { useUpdateAthlete } from "@/hooks/use-writes";
 import { type RosterAthlete, squadQueries } from "@/lib/client/queries";
@@ -54,7 +54,7 @@ export function Roster({ squadId }: { squadId: number }) {
   const { squad } = detail;
   return (
     <section aria-labelledby="squad-heading" className="space-y-4">
-      <Breadcrumbs trail={[{ href: "/squads", label: "Roster" }, { label: squad.name }]} />
+      <Breadcrumbs trail={[{ href: "/", label: "Squads" }, { label: squad.name }]} />
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div>
           <h1 id="squad-heading" className="text-2xl font-bold">
@@ -103,7 +103,7 @@ export function Roster({ squadId }: { squadId: number }) {
         <AthleteTable
           athletes={athletes.data}
           renderActions={(a) => (
-            <div className="flex justify-end gap-1.5 whitespace-nowrap">
+            <div className="flex flex-wrap gap-1.5 sm:flex-nowrap sm:justify-end">
               <button
                 type="button"
                 className="btn-quiet px-2 py-1 text-xs"
@@ -177,6 +177,10 @@ export function Roster({ squadId }: { squadId: number }) {
       </Dialog>
       <Dialog open={panel?.kind === "settings"} title="Squad settings" onClose={() => setPanel(null)}>
         {panel?.kind === "settings" && <SquadSettings squad={squad} onSaved={done} />}
+        {/* Each part above saves on its own button, so leaving loses nothing saved: Done, not Cancel. */}
+        <div className="mt-6 flex justify-end border-t border-line pt-4">
+          <DialogCancel label="Done" />
+        </div>
       </Dialog>
     </section>
   );

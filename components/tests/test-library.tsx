@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useState } from "react";
 import { Dialog } from "@/components/dialog";
 import { QueryStatus } from "@/components/query-status";
-import { type Column, TableCard } from "@/components/table-card";
+import { type Column, PhoneFacts, TableCard, WIDE_ONLY } from "@/components/table-card";
 import { type TestItem, testQueries } from "@/lib/client/queries";
 import { formatDate, PHASE_LABELS, trialRuleWords } from "@/lib/labels";
 import { directionWords, rangeWords, swcWords, typicalErrorWords } from "@/lib/words/tests";
@@ -13,17 +13,17 @@ import { TestForm } from "./test-form";
 import { TestRowActions } from "./test-row-actions";
 
 // Below 1280 px the unit, direction, trials and range move into the Test cell, so the table
-// fits a tablet with its Results and actions on screen.
+// fits a tablet with its Results and actions on screen; below `sm` (a phone) the rest follow.
 const WIDE = "hidden xl:table-cell";
 const COLUMNS: Column[] = [
   { label: "Test" },
   { label: "Unit", className: WIDE },
   { label: "Direction", className: WIDE },
   { label: "Trials", className: WIDE },
-  { label: "SWC" },
-  { label: "Typical error" },
+  { label: "SWC", className: WIDE_ONLY },
+  { label: "Typical error", className: WIDE_ONLY },
   { label: "Plausible range", className: WIDE },
-  { label: "Results", align: "right" },
+  { label: "Results", align: "right", className: WIDE_ONLY },
 ];
 
 /** The Test library: every test of the organisation; owner and scientist may change it. */
@@ -50,7 +50,7 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
             {!canEdit && " Your sport scientist keeps this library; you can read it."}
           </p>
         </div>
-        <div className="flex items-center gap-3">
+        <div className="flex flex-wrap items-center gap-3">
           <label className="flex items-center gap-2 text-sm">
             <input type="checkbox" checked={showArchived} onChange={(e) => setShowArchived(e.target.checked)} />
             Show archived
@@ -75,11 +75,17 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
         empty={tests.data?.length === 0 && `No tests yet.${canEdit ? " Add the first one with “New test”." : ""}`}
       />
       {tests.data && tests.data.length > 0 && (
-        <TableCard columns={canEdit ? [...COLUMNS, { label: "Actions", srOnly: true }] : COLUMNS}>
+        <TableCard columns={canEdit ? [...COLUMNS, { label: "Actions", srOnly: true, className: WIDE_ONLY }] : COLUMNS}>
           {tests.data.map((test) => {
             const dir = directionWords(test.direction);
             const te = typicalErrorWords(test);
             const range = rangeWords(test);
+            const swc = <SwcWords test={test} />;
+            const typicalError = <TypicalErrorWords test={test} words={te} />;
+            const results = <span className="num">{test.resultCount}</span>;
+            const actions = canEdit && (
+              <TestRowActions test={test} onEdit={() => setEditing(test)} onNotice={setNotice} />
+            );
             return (
               <tr
                 key={test.id}
@@ -98,6 +104,14 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
                     {dir.words} · {trialRuleWords(test.trialRule, test.trialsPerSession)}
                     {range && ` · plausible ${range}`}
                   </div>
+                  <PhoneFacts
+                    facts={[
+                      { label: "SWC", value: swc },
+                      { label: "Typical error", value: typicalError },
+                      { label: "Results", value: results },
+                    ]}
+                    actions={actions}
+                  />
                 </td>
                 <td className={`px-3 py-2.5 ${WIDE}`}>{test.unit}</td>
                 <td className={`whitespace-nowrap px-3 py-2.5 ${WIDE}`}>
@@ -109,37 +123,13 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
                 <td className={`whitespace-nowrap px-3 py-2.5 ${WIDE}`}>
                   {trialRuleWords(test.trialRule, test.trialsPerSession)}
                 </td>
-                <td className="px-3 py-2.5">
-                  <span className="whitespace-nowrap">{swcWords(test)}</span>
-                  <CurrentSwcWords test={test} />
-                </td>
-                <td className="min-w-40 px-3 py-2.5">
-                  {te ? (
-                    <span className="num">{te}</span>
-                  ) : (
-                    <>
-                      <span className="text-ink-soft">Not set</span>
-                      <Link
-                        href={`/reports/reliability?testId=${test.id}`}
-                        className="block text-xs font-semibold underline underline-offset-2"
-                      >
-                        Measure it in a Reliability check
-                      </Link>
-                    </>
-                  )}
-                  {test.typicalErrorSource && (
-                    <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>
-                  )}
-                </td>
+                <td className={`px-3 py-2.5 ${WIDE_ONLY}`}>{swc}</td>
+                <td className={`min-w-40 px-3 py-2.5 ${WIDE_ONLY}`}>{typicalError}</td>
                 <td className={`num whitespace-nowrap px-3 py-2.5 ${WIDE}`}>
                   {range ?? <span className="text-ink-faint">Any</span>}
                 </td>
-                <td className="num px-3 py-2.5 text-right">{test.resultCount}</td>
-                {canEdit && (
-                  <td className="px-3 py-2.5">
-                    <TestRowActions test={test} onEdit={() => setEditing(test)} onNotice={setNotice} />
-                  </td>
-                )}
+                <td className={`px-3 py-2.5 text-right ${WIDE_ONLY}`}>{results}</td>
+                {canEdit && <td className={`px-3 py-2.5 ${WIDE_ONLY}`}>{actions}</td>}
               </tr>
             );
           })}
@@ -161,6 +151,38 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
         )}
       </Dialog>
     </section>
+  );
+}
+
+/** The SWC method, and the value it gives today. */
+function SwcWords({ test }: { test: TestItem }) {
+  return (
+    <>
+      <span className="whitespace-nowrap">{swcWords(test)}</span>
+      <CurrentSwcWords test={test} />
+    </>
+  );
+}
+
+/** The typical error, or where to measure it, and where it came from. */
+function TypicalErrorWords({ test, words }: { test: TestItem; words: string | null }) {
+  return (
+    <>
+      {words ? (
+        <span className="num">{words}</span>
+      ) : (
+        <>
+          <span className="text-ink-soft">Not set</span>
+          <Link
+            href={`/reports/reliability?testId=${test.id}`}
+            className="block text-xs font-semibold underline underline-offset-2"
+          >
+            Measure it in a Reliability check
+          </Link>
+        </>
+      )}
+      {test.typicalErrorSource && <div className="max-w-56 text-xs text-ink-faint">{test.typicalErrorSource}</div>}
+    </>
   );
 }
 

@@ -50,7 +50,7 @@ export function TestRowActions({
 
   if (confirmDelete) {
     return (
-      <div className="flex items-center justify-end gap-2 whitespace-nowrap">
+      <div className="flex flex-wrap items-center gap-2 sm:flex-nowrap sm:justify-end">
         <span className="text-xs">Delete for good?</span>
         <button type="button" className="btn-quiet px-2 py-1 text-xs" disabled={busy} onClick={deleteTest}>
           Delete
@@ -62,7 +62,7 @@ export function TestRowActions({
     );
   }
   return (
-    <div className="flex justify-end gap-1.5 whitespace-nowrap">
+    <div className="flex flex-wrap gap-1.5 sm:flex-nowrap sm:justify-end">
       <button
         type="button"
         className="btn-quiet px-2 py-1 text-xs"

@@ -119,7 +119,7 @@ describe("people through the mail", () => {
     await expect.poll(() => dialog.getByText("This cannot be undone.").count()).toBe(1);
     await screenshot(page, "people-deletion-dialog-820");
     // Kept here: other browser tests sign in as this athlete.
-    await dialog.getByRole("button", { name: "Keep" }).click();
+    await dialog.getByRole("button", { name: "Cancel" }).click();
     await page.getByRole("button", { name: "Invite someone" }).click();
     const invite = page.getByRole("dialog", { name: "Invite someone" });
     await invite.getByRole("radio", { name: /^Athlete/ }).check();

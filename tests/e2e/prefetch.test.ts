@@ -36,7 +36,6 @@ describe("server-prefetched pages", () => {
 
     const pages: [string, string[]][] = [
       ["/", squads.json.squads.map((s: { name: string }) => s.name)],
-      ["/squads", squads.json.squads.map((s: { name: string }) => s.name)],
       [`/squads/${squads.json.squads[0].id}`, ["Add athlete"]],
       ["/tests", ["Countermovement jump", "10 m sprint"]],
       ["/sessions", [busiest.squadName]],

@@ -1,5 +1,5 @@
 import { RecordNotFound } from "@/components/record-not-found";
 
 export default function AthleteNotFound() {
-  return <RecordNotFound what="Athlete" back="/squads" backLabel="Back to the squads" />;
+  return <RecordNotFound what="Athlete" back="/" backLabel="Back to Squads" />;
 }

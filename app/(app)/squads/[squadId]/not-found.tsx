@@ -1,5 +1,5 @@
 import { RecordNotFound } from "@/components/record-not-found";
 
 export default function SquadNotFound() {
-  return <RecordNotFound what="Squad" back="/squads" backLabel="Back to the Roster" />;
+  return <RecordNotFound what="Squad" back="/" backLabel="Back to Squads" />;
 }

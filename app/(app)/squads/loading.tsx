@@ -1,5 +1,0 @@
-import { TableLoading } from "@/components/table-loading";
-
-export default function Loading() {
-  return <TableLoading label="squads" rows={3} />;
-}
