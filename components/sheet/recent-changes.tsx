@@ -53,7 +53,13 @@ export function RecentChanges({ sessionId }: { sessionId: number }) {
       </div>
       {events.length === 0 && <p className="text-sm text-ink-soft">No changes recorded yet.</p>}
       {events.length > 0 && (
-        <ol className="max-h-80 divide-y divide-line overflow-y-auto text-sm">
+        <ol
+          // A list that scrolls on its own takes focus, so the keyboard can scroll it too (WCAG 2.1.1).
+          // biome-ignore lint/a11y/noNoninteractiveTabindex: a scrollable region must be focusable
+          tabIndex={0}
+          aria-labelledby="changes-heading"
+          className="max-h-80 divide-y divide-line overflow-y-auto text-sm"
+        >
           {events.map((e) => (
             <li key={e.id} className={`grid grid-cols-[6.5rem_1fr] gap-x-3 py-1.5 ${e.undone ? "text-ink-faint" : ""}`}>
               <span className="num text-ink-faint">{timeWords(e.at)}</span>

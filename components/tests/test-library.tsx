@@ -99,6 +99,9 @@ export function TestLibrary({ canEdit }: { canEdit: boolean }) {
                   <div className="text-xs text-ink-faint">
                     {test.decimals} decimal{test.decimals === 1 ? "" : "s"}
                   </div>
+                  {test.aliases.length > 0 && (
+                    <div className="text-xs text-ink-soft">In files also: {test.aliases.join(", ")}</div>
+                  )}
                   <div className="text-xs text-ink-soft xl:hidden">
                     {test.unit} · <span aria-hidden>{dir.arrow} </span>
                     {dir.words} · {trialRuleWords(test.trialRule, test.trialsPerSession)}
