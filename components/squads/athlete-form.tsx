@@ -18,6 +18,7 @@ const FIELDS = [
   "notes",
   "consentRecordedOn",
   "guardianConsentOn",
+  "aliases",
 ] as const;
 const emptyToNull = (v: unknown) => (v === "" || v === undefined ? null : v);
 
@@ -51,6 +52,7 @@ export function AthleteForm({
           notes: athlete.notes ?? "",
           consentRecordedOn: athlete.consentRecordedOn ?? "",
           guardianConsentOn: athlete.guardianConsentOn ?? "",
+          aliases: athlete.aliases.join(", "),
         }
       : { sex: null },
   });
@@ -94,6 +96,25 @@ export function AthleteForm({
             placeholder="id in the gates or force plate"
             {...register("externalId")}
           />
+        </Field>
+        <Field
+          id={id("aliases")}
+          label="Other spellings in files (optional)"
+          error={errors.aliases?.message}
+          className="sm:col-span-2"
+        >
+          <input
+            id={id("aliases")}
+            className="field"
+            placeholder="e.g. L. Dempsey, Dempsey Luca"
+            aria-describedby={`${id("aliases")}-help${errors.aliases ? ` ${id("aliases")}-error` : ""}`}
+            aria-invalid={errors.aliases ? true : undefined}
+            {...register("aliases")}
+          />
+          <p id={`${id("aliases")}-help`} className="mt-1 text-xs text-ink-soft">
+            Separate them with commas. The Import reads these as this athlete; it also remembers the ones you match
+            there.
+          </p>
         </Field>
         <Field id={id("notes")} label="Notes" error={errors.notes?.message} className="sm:col-span-2">
           <textarea id={id("notes")} rows={2} className="field" {...register("notes")} />

@@ -116,7 +116,7 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
         <input
           className="field"
           placeholder="e.g. CMJ, Counter movement jump"
-          aria-describedby={err("aliases") ? "test-aliases-error" : "test-aliases-help"}
+          aria-describedby={`test-aliases-help${err("aliases") ? " test-aliases-error" : ""}`}
           aria-invalid={err("aliases") ? true : undefined}
           id="test-aliases"
           {...register("aliases")}

@@ -1,8 +1,9 @@
 import "server-only";
 import { and, asc, eq, inArray, notInArray } from "drizzle-orm";
-import { getDb, writeTransaction } from "@/db/client";
+import { getDb, type Transaction, writeTransaction } from "@/db/client";
 import { athletes, squadAthletes, squads } from "@/db/schema";
-import { conflict, invalidInput, notFound } from "@/lib/errors";
+import { aliasClash, cleanAliases } from "@/lib/aliases";
+import { ApiError, conflict, invalidInput, notFound } from "@/lib/errors";
 import type { AthleteCreateInput, AthleteUpdateInput, SquadAthleteAddInput } from "@/lib/validation/roster";
 import type { Actor } from "./actors";
 import { recordAudit } from "./audit";
@@ -19,8 +20,34 @@ const rosterColumns = {
   notes: athletes.notes,
   consentRecordedOn: athletes.consentRecordedOn,
   guardianConsentOn: athletes.guardianConsentOn,
+  aliases: athletes.aliases,
   archived: athletes.archived,
 };
+
+/**
+ * An athlete's other names, as stored (lib/aliases.ts), refused when one already belongs to
+ * another athlete of the organisation — without saying whose: a coach may not reach them.
+ */
+async function checkedAliases(
+  tx: Transaction,
+  actor: Actor,
+  athleteId: number | null,
+  name: string,
+  aliases: string[],
+) {
+  const cleaned = cleanAliases(aliases, name);
+  if (cleaned.length === 0) return cleaned;
+  const others = await tx
+    .select({ id: athletes.id, name: athletes.name, aliases: athletes.aliases })
+    .from(athletes)
+    .where(eq(athletes.organizationId, actor.organizationId));
+  const clash = aliasClash(cleaned, athleteId, others);
+  if (clash) {
+    const message = `“${clash.name}” is already the name, or another name, of an athlete in your club; a file could not tell them apart.`;
+    throw new ApiError(409, "conflict", message, { fields: { aliases: message } });
+  }
+  return cleaned;
+}
 
 /**
  * External ids are unique in the organisation, but a coach reaches only their squads: a clash
@@ -63,9 +90,11 @@ export async function addAthleteToSquad(actor: Actor, squadId: number, input: Sq
         if (!existing) throw notFound("Athlete");
         athleteId = existing.id;
       } else {
+        const fresh = input as AthleteCreateInput;
+        const aliases = await checkedAliases(tx, actor, null, fresh.name, fresh.aliases);
         const [created] = await tx
           .insert(athletes)
-          .values({ ...(input as AthleteCreateInput), organizationId: actor.organizationId })
+          .values({ ...fresh, aliases, organizationId: actor.organizationId })
           .returning({ id: athletes.id });
         athleteId = created.id;
       }
@@ -97,6 +126,14 @@ export async function updateAthlete(actor: Actor, athleteId: number, input: Athl
         .from(athletes)
         .where(and(eq(athletes.id, athleteId), athleteScope(actor)));
       if (!before) throw notFound("Athlete");
+      if (changes.aliases !== undefined || changes.name !== undefined)
+        changes.aliases = await checkedAliases(
+          tx,
+          actor,
+          athleteId,
+          changes.name ?? before.name,
+          changes.aliases ?? before.aliases,
+        );
       if (Object.keys(changes).length > 0) await tx.update(athletes).set(changes).where(eq(athletes.id, athleteId));
       if (squadIds) {
         const reachable = (await tx.select({ id: squads.id }).from(squads).where(squadScope(actor))).map((s) => s.id);

@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { SEXES } from "@/lib/domain";
-import { idSchema, optionalIsoDate, optionalText, requiredText } from "./common";
+import { aliasList, idSchema, optionalIsoDate, optionalText, requiredText } from "./common";
 
 export const squadCreateSchema = z.object({
   name: requiredText(80, "Squad name"),
@@ -31,9 +31,11 @@ const athleteFields = {
   consentRecordedOn: optionalIsoDate,
   /** Under 18: day a parent's or guardian's consent was recorded (lib/consent.ts). */
   guardianConsentOn: optionalIsoDate,
+  /** Other spellings of the name that files use ("L. Dempsey"); the Import reads them as this athlete. */
+  aliases: aliasList,
 };
 
-export const athleteCreateSchema = z.object(athleteFields);
+export const athleteCreateSchema = z.object({ ...athleteFields, aliases: athleteFields.aliases.default([]) });
 export type AthleteCreateInput = z.infer<typeof athleteCreateSchema>;
 
 /** Adds an athlete to a squad: either an existing athlete by id, or a new one. */

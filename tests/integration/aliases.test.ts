@@ -172,3 +172,23 @@ describe("matches in the Import", () => {
     expect(luca.aliases).toEqual(["Luca Dempsy"]);
   });
 });
+
+describe("other spellings on the Roster", () => {
+  const athleteRoute = () => import("@/app/api/athletes/[athleteId]/route");
+  it("a coach edits an athlete's other spellings; one that is another athlete's name is refused without naming them", async () => {
+    await signInAs("coach@example.com");
+    const { PATCH } = await athleteRoute();
+    const edit = (aliases: unknown) =>
+      call(PATCH, { method: "PATCH", params: { athleteId: String(ids.luca) }, body: { aliases } });
+    const saved = await edit("Luca Dempsy, L. Dempsey, luca dempsey");
+    expect(saved.status).toBe(200);
+    const [luca] = await env.db.select({ aliases: athletes.aliases }).from(athletes).where(eq(athletes.id, ids.luca));
+    expect(luca.aliases).toEqual(["Luca Dempsy", "L. Dempsey"]);
+    // Femi Castellane is on a squad this coach does not reach.
+    const taken = await edit(["Femi Castellane"]);
+    expect(taken.status).toBe(409);
+    expect(taken.json.error.fields.aliases).toBe(
+      "“Femi Castellane” is already the name, or another name, of an athlete in your club; a file could not tell them apart.",
+    );
+  });
+});
