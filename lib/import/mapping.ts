@@ -190,7 +190,7 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
           column: s.header,
           message:
             s.status === "unknown"
-              ? `No test in the Test library is called ${quote(s.header)}. Rename the column to a test of this session's battery, or ignore it in the mapping step.`
+              ? `No test in the Test library is called ${quote(s.header)}. Match it above (Names in the file), map or ignore the column in the mapping step, or rename the column.`
               : `${quote(s.header)} is in the Test library but not in this session's battery. Add it to the battery, or ignore the column.`,
         });
       }

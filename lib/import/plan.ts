@@ -167,7 +167,7 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
       message:
         match.problem === "ambiguous"
           ? `Two athletes on ${roster} are called ${shown(text)}. Use their external id instead.`
-          : `No athlete ${shown(text)} on ${roster} (matched by external id, then by name). Add them to the Roster first, or correct the name.`,
+          : `No athlete ${shown(text)} on ${roster} (matched by external id, then by name). Match the name above (Names in the file), add them to the Roster, or correct the file.`,
     });
     return null;
   };
@@ -307,7 +307,7 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
             column: tName,
             message:
               found === "unknown"
-                ? `No test in the Test library is called ${shown(testCell)}.`
+                ? `No test in the Test library is called ${shown(testCell)}. Match it above (Names in the file), or give the test this other name in the Test library.`
                 : `${shown(testCell)} is not in this session's battery. Add it to the battery first, or leave these rows out.`,
           });
           failed = true;

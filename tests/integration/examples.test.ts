@@ -171,7 +171,7 @@ describe("examples/ imported into the demo club", () => {
       row: 5,
       column: "athlete",
       message:
-        "No athlete “Luca Dempsy” on the Academy U18 roster (matched by external id, then by name). Add them to the Roster first, or correct the name.",
+        "No athlete “Luca Dempsy” on the Academy U18 roster (matched by external id, then by name). Match the name above (Names in the file), add them to the Roster, or correct the file.",
     });
     expect(await storeChecksum()).toBe(before);
 
