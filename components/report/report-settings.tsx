@@ -1,11 +1,9 @@
 "use client";
 
-import { useSuspenseQuery } from "@tanstack/react-query";
-import { sessionQueries, squadQueries, testQueries } from "@/lib/client/queries";
 import { REPORT_CONFIDENCES, SWC_METHODS, type SwcMethod } from "@/lib/domain";
-import { formatDate, PHASE_LABELS } from "@/lib/labels";
 import { defaultComparison } from "@/lib/reports/defaults";
 import type { ChangeReportQuery } from "@/lib/validation/reports";
+import { SessionPairFields } from "./session-pair-fields";
 
 const SWC_CHOICES: Record<SwcMethod, { label: string; defaultValue: number; unitLabel: (unit: string) => string }> = {
   "sd-factor": { label: "Factor × between-athlete SD", defaultValue: 0.2, unitLabel: () => "factor" },
@@ -26,28 +24,6 @@ export function ReportSettings({
   unit: string;
   onChange: (next: ChangeReportQuery) => void;
 }) {
-  const { data: sessions } = useSuspenseQuery(sessionQueries.list());
-  const { data: squads } = useSuspenseQuery(squadQueries.list());
-  const { data: tests } = useSuspenseQuery(testQueries.list({ archived: true }));
-  const from = sessions.find((s) => s.id === query.fromSessionId);
-  const to = sessions.find((s) => s.id === query.toSessionId);
-  const squadId = from?.squadId ?? to?.squadId ?? squads[0]?.id;
-  const own = sessions.filter((s) => s.squadId === squadId).sort((a, b) => a.date.localeCompare(b.date) || a.id - b.id);
-  const shared = tests.filter((t) => from?.testIds.includes(t.id) && to?.testIds.includes(t.id));
-  const sessionLabel = (s: (typeof own)[number]) => `${formatDate(s.date)} · ${PHASE_LABELS[s.phase]}`;
-
-  function chooseSquad(id: number) {
-    const pick = defaultComparison(sessions, id);
-    if (pick) onChange({ ...query, ...pick });
-  }
-  function chooseSession(side: "fromSessionId" | "toSessionId", id: number) {
-    const next = { ...query, [side]: id };
-    const a = sessions.find((s) => s.id === next.fromSessionId);
-    const b = sessions.find((s) => s.id === next.toSessionId);
-    // Keep the test if both sessions measured it, else the first test they share.
-    const testIds = a && b ? a.testIds.filter((t) => b.testIds.includes(t)) : [];
-    onChange({ ...next, testId: testIds.includes(query.testId) ? query.testId : (testIds[0] ?? query.testId) });
-  }
   function chooseSwc(method: SwcMethod | "") {
     if (method === "") onChange({ ...query, swcMethod: undefined, swcValue: undefined });
     else onChange({ ...query, swcMethod: method, swcValue: SWC_CHOICES[method].defaultValue });
@@ -55,75 +31,17 @@ export function ReportSettings({
 
   return (
     <form className="card grid gap-3 p-4 sm:grid-cols-2 lg:grid-cols-4" onSubmit={(e) => e.preventDefault()}>
-      <div>
-        <label htmlFor="report-squad" className="text-sm font-semibold">
-          Squad
-        </label>
-        <select
-          id="report-squad"
-          className="field mt-1"
-          value={squadId ?? ""}
-          onChange={(e) => chooseSquad(Number(e.target.value))}
-        >
-          {squads.map((s) => (
-            <option key={s.id} value={s.id}>
-              {s.name}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div>
-        <label htmlFor="report-first-session" className="text-sm font-semibold">
-          First session
-        </label>
-        <select
-          id="report-first-session"
-          className="field mt-1"
-          value={query.fromSessionId}
-          onChange={(e) => chooseSession("fromSessionId", Number(e.target.value))}
-        >
-          {own.map((s) => (
-            <option key={s.id} value={s.id} disabled={s.id === query.toSessionId}>
-              {sessionLabel(s)}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div>
-        <label htmlFor="report-second-session" className="text-sm font-semibold">
-          Second session
-        </label>
-        <select
-          id="report-second-session"
-          className="field mt-1"
-          value={query.toSessionId}
-          onChange={(e) => chooseSession("toSessionId", Number(e.target.value))}
-        >
-          {own.map((s) => (
-            <option key={s.id} value={s.id} disabled={s.id === query.fromSessionId}>
-              {sessionLabel(s)}
-            </option>
-          ))}
-        </select>
-      </div>
-      <div>
-        <label htmlFor="report-test" className="text-sm font-semibold">
-          Test
-        </label>
-        <select
-          id="report-test"
-          className="field mt-1"
-          value={query.testId}
-          onChange={(e) => onChange({ ...query, testId: Number(e.target.value) })}
-        >
-          {shared.length === 0 && <option value={query.testId}>No test in both sessions</option>}
-          {shared.map((t) => (
-            <option key={t.id} value={t.id}>
-              {t.name}
-            </option>
-          ))}
-        </select>
-      </div>
+      <SessionPairFields
+        idPrefix="report"
+        pair={{ first: query.fromSessionId, second: query.toSessionId, testId: query.testId }}
+        onSquad={(squadId, sessions) => {
+          const pick = defaultComparison(sessions, squadId);
+          if (pick) onChange({ ...query, ...pick });
+        }}
+        onChange={(pair) =>
+          onChange({ ...query, fromSessionId: pair.first, toSessionId: pair.second, testId: pair.testId })
+        }
+      />
       <div>
         <label htmlFor="report-confidence" className="text-sm font-semibold">
           Confidence
