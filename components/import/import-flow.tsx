@@ -165,7 +165,11 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
               errorCount={commitBody?.error?.details?.errorCount ?? commitProblems.length}
             />
           )}
-          <ReplacementList rows={conflictRows.length ? conflictRows : data.replacements} count={replacements} />
+          <ReplacementList
+            rows={conflictRows.length ? conflictRows : data.replacements}
+            count={replacements}
+            tests={data.tests}
+          />
           <WarningList warnings={data.warnings} count={data.warningCount} />
           <PreviewTable preview={data} />
           <ParsedValues preview={data} />

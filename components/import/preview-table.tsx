@@ -2,6 +2,7 @@
 
 import { type Column, TableCard } from "@/components/table-card";
 import type { ImportPreview } from "@/lib/import/summary";
+import { formatValue } from "@/lib/labels";
 
 const PARSED_COLUMNS: Column[] = [
   { label: "Row", align: "right" },
@@ -80,10 +81,14 @@ export function PreviewTable({ preview }: { preview: ImportPreview }) {
   );
 }
 
+/** In the test's decimals, as the Session sheet shows it. */
+const scoreText = (value: number, test: { decimals: number } | undefined) =>
+  test ? formatValue(value, test.decimals) : String(value);
+
 /** How the first values read: the roster name, the test and the trial each one goes to. */
 export function ParsedValues({ preview }: { preview: ImportPreview }) {
   if (preview.parsed.length === 0) return null;
-  const units = new Map(preview.tests.map((t) => [t.name, t.unit]));
+  const tests = new Map(preview.tests.map((t) => [t.name, t]));
   return (
     <TableCard
       asWritten
@@ -98,7 +103,8 @@ export function ParsedValues({ preview }: { preview: ImportPreview }) {
           <td className="px-3 py-1.5">{v.testName}</td>
           <td className="num px-3 py-1.5 text-right">{v.trial}</td>
           <td className="num px-3 py-1.5 text-right">
-            {v.value} <span className="text-ink-faint">{units.get(v.testName)}</span>
+            {scoreText(v.value, tests.get(v.testName))}{" "}
+            <span className="text-ink-faint">{tests.get(v.testName)?.unit}</span>
           </td>
         </tr>
       ))}

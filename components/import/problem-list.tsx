@@ -3,6 +3,7 @@
 import { useState } from "react";
 import type { RowError } from "@/lib/errors";
 import type { ReplacementRow } from "@/lib/import/summary";
+import { formatValue } from "@/lib/labels";
 
 /** Problems by row and column: what blocks the import, and what it would replace. */
 export function ProblemList({ errors, errorCount, title }: { errors: RowError[]; errorCount: number; title?: string }) {
@@ -79,8 +80,20 @@ export function WarningList({ warnings, count }: { warnings: RowError[]; count: 
   );
 }
 
-export function ReplacementList({ rows, count }: { rows: ReplacementRow[]; count: number }) {
+export function ReplacementList({
+  rows,
+  count,
+  tests,
+}: {
+  rows: ReplacementRow[];
+  count: number;
+  /** The battery, for each score in its test's decimals. */
+  tests: { name: string; decimals: number }[];
+}) {
   if (count === 0) return null;
+  const decimals = new Map(tests.map((t) => [t.name, t.decimals]));
+  const score = (value: number | null, testName: string) =>
+    value === null ? null : formatValue(value, decimals.get(testName) ?? 2);
   return (
     <section aria-labelledby="replace-h" className="card bg-band/40 p-4">
       <h2 id="replace-h" className="text-lg font-bold">
@@ -122,9 +135,9 @@ export function ReplacementList({ rows, count }: { rows: ReplacementRow[]; count
               <td className="py-1.5 pr-3">{r.testName}</td>
               <td className="num py-1.5 pr-3 text-right">{r.trial ?? "–"}</td>
               <td className="num py-1.5 pr-3 text-right">
-                {r.trial === null ? `marked ${r.previousFlag}` : r.previous}
+                {r.trial === null ? `marked ${r.previousFlag}` : score(r.previous, r.testName)}
               </td>
-              <td className="num py-1.5 text-right">{r.next ?? "scores"}</td>
+              <td className="num py-1.5 text-right">{score(r.next, r.testName) ?? "scores"}</td>
             </tr>
           ))}
         </tbody>

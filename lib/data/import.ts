@@ -218,7 +218,13 @@ async function preview(
     counts: writes.counts,
     replacements: describeReplacements(writes.replacements, context, MAX_LISTED_REPLACEMENTS),
     canCommit: plan.errorCount === 0 && plan.valueCount > 0,
-    tests: context.tests.map((t) => ({ id: t.id, name: t.name, unit: t.unit, trialsPerSession: t.trialsPerSession })),
+    tests: context.tests.map((t) => ({
+      id: t.id,
+      name: t.name,
+      unit: t.unit,
+      decimals: t.decimals,
+      trialsPerSession: t.trialsPerSession,
+    })),
     roster: context.athletes.map((a) => ({ id: a.id, name: a.name })),
   };
 }

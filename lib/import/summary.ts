@@ -56,7 +56,7 @@ export type ImportPreview = {
   counts: ImportCounts;
   replacements: ReplacementRow[];
   canCommit: boolean;
-  tests: { id: number; name: string; unit: string; trialsPerSession: number }[];
+  tests: { id: number; name: string; unit: string; decimals: number; trialsPerSession: number }[];
   /** The roster the file is read against, for matching a name the file spells its own way. */
   roster: { id: number; name: string }[];
 };

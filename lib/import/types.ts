@@ -11,6 +11,8 @@ export type ImportTest = {
   id: number;
   name: string;
   unit: string;
+  /** How many decimals the test's scores are shown with, everywhere. */
+  decimals: number;
   direction: Direction;
   trialRule: TrialRule;
   trialsPerSession: number;
