@@ -99,7 +99,12 @@ export function applyServerErrors<T extends FieldValues>(
     else leftover.push(message);
   }
   // A taken name comes back as a 409 without fields; it belongs beside the name.
-  if (error.status === 409 && /already/i.test(error.message) && formFields.includes("name")) {
+  if (
+    error.status === 409 &&
+    Object.keys(fields).length === 0 &&
+    /already/i.test(error.message) &&
+    formFields.includes("name")
+  ) {
     setError("name" as Path<T>, { type: "server", message: error.message });
   }
   return [error.message, ...leftover].join(" ");

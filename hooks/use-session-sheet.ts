@@ -23,7 +23,7 @@ type TrialEntry = { athleteId: number; testId: number; index: number; text: stri
 export function useSessionSheet(sessionId: number) {
   const query = useSuspenseQuery(sessionQueries.sheet(sessionId));
   const cache = useSheetCache(sessionId);
-  const saver = useResultSaver(sessionId, cache);
+  const saver = useResultSaver(sessionId, query.data.writerId, cache);
   const entries = useInvalidEntries();
   const undo = useSheetUndo(sessionId, cache, saver.forget);
   const { cells } = saver;

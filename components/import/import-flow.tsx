@@ -6,7 +6,14 @@ import { ApiClientError } from "@/lib/client/fetch-json";
 import { queryKeys } from "@/lib/client/queries";
 import { type UploadProgress, uploadImport } from "@/lib/client/upload";
 import type { RowError } from "@/lib/errors";
-import { draftFromPreview, fieldsOf, hasMatches, type MappingDraft, matchFields } from "@/lib/import/mapping-draft";
+import {
+  draftFromPreview,
+  fieldsOf,
+  hasMatches,
+  type MappingDraft,
+  matchFields,
+  withTestMatch,
+} from "@/lib/import/mapping-draft";
 import { NO_MATCHES } from "@/lib/import/matches";
 import type { ImportCommitted, ImportPreview, ReplacementRow } from "@/lib/import/summary";
 import type { ImportMatches } from "@/lib/import/types";
@@ -74,7 +81,11 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
     if (id === null) delete next[kind][value];
     else next[kind][value] = id;
     setMatches(next);
-    preview.mutate({ file, fields: { ...fieldsOf(draft), ...matchFields(next) } });
+    // A mapping the server suggested stays its suggestion (the match then reads every column of that
+    // name); one the user chose is sent again, with the matched test's columns pointed at it.
+    const chosen = dirty || Object.keys(sentFields).some((field) => field !== "matches");
+    const columns = kind === "tests" && preview.data ? withTestMatch(draft, preview.data.headers, value, id) : draft;
+    preview.mutate({ file, fields: { ...(chosen ? fieldsOf(columns) : {}), ...matchFields(next) } });
   };
   const startOver = () => {
     setFile(null);

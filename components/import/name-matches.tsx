@@ -218,7 +218,7 @@ function UnknownName({
           onChange={(e) => e.target.value && onMatch(kind, item.value, Number(e.target.value))}
         >
           <option value="">
-            {item.suggestions.length > 0 ? optionLabel : optionLabel.replace("Another", "Choose an")}
+            {item.suggestions.length > 0 ? optionLabel : `Choose ${optionLabel.replace(/^Another /, "the ")}`}
           </option>
           {options.map((o) => (
             <option key={o.id} value={o.id}>

@@ -163,7 +163,7 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
         )}
       </div>
 
-      <p aria-live="polite" className="min-h-5 text-sm">
+      <p aria-live="polite" className="min-h-10 text-sm">
         {announcement}
         {refused > 0 &&
           ` ${refused} cell${refused === 1 ? " holds" : "s hold"} text that is not a number and ${refused === 1 ? "was" : "were"} not saved.`}

@@ -119,11 +119,6 @@ export function SheetGrid({
     // A sheet wider than the screen scrolls in a box as tall as the window instead, so the header
     // and the names still stick ("Show" one test makes it fit again).
     <>
-      {tooWide && (
-        <p className="text-sm text-ink-soft">
-          These tests are wider than the screen: the sheet scrolls sideways, or choose one test under Show.
-        </p>
-      )}
       <div
         ref={boxRef}
         className={`card relative w-fit max-w-full ${tooWide ? "max-h-[calc(100dvh-1rem)] overflow-auto" : ""}`}
@@ -163,6 +158,12 @@ export function SheetGrid({
           </tbody>
         </table>
       </div>
+      {/* Below the sheet, so the grid never moves under a finger when this appears after loading. */}
+      {tooWide && (
+        <p className="text-sm text-ink-soft">
+          These tests are wider than the screen: the sheet scrolls sideways, or Show (above it) picks one test.
+        </p>
+      )}
     </>
   );
 }

@@ -43,7 +43,7 @@ const offline = () => typeof navigator !== "undefined" && !navigator.onLine;
  * result are queued, so the sheet never conflicts with itself; a conflict with someone else
  * waits in its cell until the person chooses theirs or ours.
  */
-export function useResultSaver(sessionId: number, cache: SheetCache) {
+export function useResultSaver(sessionId: number, userId: number, cache: SheetCache) {
   const [cells, setCells] = useState<Record<string, CellState>>({});
   // The same map for `send`, which also runs from mutation callbacks outside render.
   const cellsRef = useRef(cells);
@@ -162,7 +162,7 @@ export function useResultSaver(sessionId: number, cache: SheetCache) {
   /** Keeps a write in the browser until the network is back; the cell says it is waiting. */
   function hold(athleteId: number, testId: number, wanted: Wanted, version: number | null, note: string | null) {
     setCell(cellKey(athleteId, testId), { status: "waiting", wanted });
-    void keepWrite({ sessionId, athleteId, testId, ...wanted, note, version, typedAt: Date.now() }).catch(() =>
+    void keepWrite({ sessionId, userId, athleteId, testId, ...wanted, note, version, typedAt: Date.now() }).catch(() =>
       setCell(cellKey(athleteId, testId), {
         status: "failed",
         wanted,
@@ -177,7 +177,7 @@ export function useResultSaver(sessionId: number, cache: SheetCache) {
     if (replaying.current) return;
     replaying.current = true;
     try {
-      for (const write of await waitingWrites(sessionId)) {
+      for (const write of await waitingWrites(sessionId, userId)) {
         const key = cellKey(write.athleteId, write.testId);
         const wanted = { trials: write.trials, flag: write.flag };
         try {
@@ -195,7 +195,8 @@ export function useResultSaver(sessionId: number, cache: SheetCache) {
           if (row) cache.writeRow(write.athleteId, write.testId, row);
           setCell(key, { status: "saved" });
         } catch (error) {
-          if (!(error instanceof ApiClientError)) return; // still offline: try again at the next "online"
+          // Still offline, or the server busy or failing: keep it, and try again at the next "online" or visit.
+          if (!(error instanceof ApiClientError) || error.status >= 500 || error.status === 429) return;
           const hit = error.status === 409 ? conflictOf(error, write.athleteId, write.testId) : undefined;
           if (hit) {
             cache.writeRow(write.athleteId, write.testId, hit.current);
@@ -214,7 +215,7 @@ export function useResultSaver(sessionId: number, cache: SheetCache) {
   // biome-ignore lint/correctness/useExhaustiveDependencies: once per sheet; replay reads refs and the store
   useEffect(() => {
     let live = true;
-    void waitingWrites(sessionId)
+    void waitingWrites(sessionId, userId)
       .then((writes) => {
         if (!live) return;
         for (const w of writes)

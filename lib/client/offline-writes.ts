@@ -11,6 +11,8 @@ export type OfflineWrite = {
   /** Order of typing; assigned by the store. */
   seq?: number;
   sessionId: number;
+  /** The account that typed it: on a shared tablet, only that account sends it. */
+  userId: number;
   athleteId: number;
   testId: number;
   trials: (number | null)[];
@@ -38,10 +40,10 @@ function db() {
   return opening;
 }
 
-/** The session's waiting writes, oldest first. */
-export async function waitingWrites(sessionId: number): Promise<OfflineWrite[]> {
+/** The session's writes waiting from one account, oldest first. */
+export async function waitingWrites(sessionId: number, userId: number): Promise<OfflineWrite[]> {
   const all = await (await db()).getAllFromIndex("writes", "bySession", sessionId);
-  return all.sort((a, b) => (a.seq ?? 0) - (b.seq ?? 0));
+  return all.filter((w) => w.userId === userId).sort((a, b) => (a.seq ?? 0) - (b.seq ?? 0));
 }
 
 /**
@@ -53,7 +55,7 @@ export async function keepWrite(write: OfflineWrite): Promise<void> {
   const database = await db();
   const tx = database.transaction("writes", "readwrite");
   const earlier = (await tx.store.index("bySession").getAll(write.sessionId)).find(
-    (w) => w.athleteId === write.athleteId && w.testId === write.testId,
+    (w) => w.userId === write.userId && w.athleteId === write.athleteId && w.testId === write.testId,
   );
   if (earlier) await tx.store.put({ ...write, seq: earlier.seq, version: earlier.version });
   else {

@@ -11,7 +11,7 @@ import { aliasClash, aliasKey, cleanAliases, type Named } from "@/lib/aliases";
 import { canEditRoster, canEditTestLibrary } from "@/lib/auth/permissions";
 import type { ImportCommitted } from "@/lib/import/summary";
 import type { ImportMatches } from "@/lib/import/types";
-import { MAX_ALIASES } from "@/lib/validation/common";
+import { ALIAS_CHARS, cleanText, hasVisibleText, MAX_ALIASES } from "@/lib/validation/common";
 import type { Actor } from "./actors";
 
 type Outcome = Pick<ImportCommitted, "remembered" | "unremembered">;
@@ -21,9 +21,18 @@ function plan(kind: "athlete" | "test", matches: Record<string, number>, everyon
   const byId = new Map(everyone.map((e) => [e.id, { ...e, aliases: [...e.aliases] }]));
   const changed = new Set<number>();
   for (const [raw, id] of Object.entries(matches)) {
-    const value = raw.trim().replace(/\s+/g, " ");
+    const value = cleanText(raw).replace(/\s+/g, " ");
     const owner = byId.get(id);
     if (!owner || aliasKey(value) === "" || aliasKey(value) === aliasKey(owner.name)) continue;
+    // The rules of the Test library and Roster forms (lib/validation/common.ts, aliasList).
+    if (value.length > ALIAS_CHARS || !hasVisibleText(value)) {
+      outcome.unremembered.push({
+        kind,
+        value: raw,
+        reason: `another name is kept only with 1 to ${ALIAS_CHARS} visible characters`,
+      });
+      continue;
+    }
     if (owner.aliases.some((a) => aliasKey(a) === aliasKey(value))) continue;
     // A name that already belongs to someone else stays a one-off match: remembered, it would make
     // every later file ambiguous.

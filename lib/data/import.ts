@@ -20,10 +20,10 @@ import {
   PREVIEW_ROWS,
   TOO_LARGE_MESSAGE,
 } from "@/lib/import/limits";
-import { applyMatches, NO_MATCHES } from "@/lib/import/matches";
+import { applyMatches, NO_MATCHES, namesInFile, usedMatches } from "@/lib/import/matches";
 import { planWrites, type ResultWrite, resultKey } from "@/lib/import/merge";
 import { describeReplacements, type ImportCommitted, type ImportPreview } from "@/lib/import/summary";
-import type { ExistingResult, ImportContext, ImportMatches } from "@/lib/import/types";
+import type { ExistingResult, ImportContext } from "@/lib/import/types";
 import { type ImportOptions, mappingRequestOf } from "@/lib/validation/import";
 import type { Actor } from "./actors";
 import { rememberMatches } from "./aliases";
@@ -170,7 +170,7 @@ export async function runImport(
   }
   return commitImport(actor, session, context, analysis, file, {
     replace: options.replace,
-    remember: options.remember ? matches : NO_MATCHES,
+    remember: options.remember ? usedMatches(matches, namesInFile(table, analysis.resolved.mapping)) : null,
   });
 }
 
@@ -271,7 +271,7 @@ async function commitImport(
   context: ImportContext,
   analysis: Analysis,
   file: ImportFile,
-  { replace, remember }: { replace: boolean; remember: ImportMatches },
+  { replace, remember }: { replace: boolean; remember: ReturnType<typeof usedMatches> | null },
 ): Promise<ImportCommitted> {
   const { plan } = analysis;
   const rowsImported = plan.rowsWithValues;
@@ -304,7 +304,9 @@ async function commitImport(
       })
       .returning({ id: uploads.id });
     await upsertResults(tx, session, writes, actor.userId, new Date());
-    const names = await rememberMatches(tx, actor, remember);
+    const names = await rememberMatches(tx, actor, remember?.used ?? NO_MATCHES);
+    for (const { kind, value } of remember?.absent ?? [])
+      names.unremembered.push({ kind, value, reason: "the file does not use this name" });
     const before = writes
       .filter((w) => !w.isNew)
       .map((w) => {

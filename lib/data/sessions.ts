@@ -159,6 +159,8 @@ export async function getSessionSheet(actor: Actor, sessionId: number) {
     canEdit: canEditSession(actor, session.status),
     canPublish: canPublish(actor),
     canDelete: canDeleteSession(actor, session),
+    /** Who is typing: scores kept offline in this browser are sent only under the account that typed them. */
+    writerId: actor.userId,
   };
 }
 

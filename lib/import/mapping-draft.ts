@@ -1,3 +1,5 @@
+import { aliasKey } from "@/lib/aliases";
+import { parseTrialHeader } from "@/lib/import/columns";
 import type { ImportPreview } from "@/lib/import/summary";
 import type { ImportFormat, ImportMatches, WideTarget } from "@/lib/import/types";
 
@@ -70,3 +72,27 @@ export const hasMatches = (matches: ImportMatches) =>
 /** The multipart field that carries the names matched in the mapping step (none: no field). */
 export const matchFields = (matches: ImportMatches): Record<string, string> =>
   hasMatches(matches) ? { matches: JSON.stringify(matches) } : {};
+
+/**
+ * A wide file's columns after a test name was matched in the mapping step ("Sprnt 10 m" is the
+ * 10 m sprint): every column of that name now reads as the test, at the trial its header gives
+ * (trial 1 without one); undone (null), they are ignored again. A long file's draft is unchanged.
+ * @example withTestMatch(draft, ["athlete", "Sprnt 10 m 2"], "Sprnt 10 m", 7).columns // { "Sprnt 10 m 2": { testId: 7, trial: 2 } }
+ */
+export function withTestMatch(
+  draft: MappingDraft,
+  headers: string[],
+  name: string,
+  testId: number | null,
+): MappingDraft {
+  if (draft.format !== "wide") return draft;
+  const key = aliasKey(name);
+  const columns = { ...draft.columns };
+  for (const header of headers) {
+    if (header === draft.athleteColumn || header === "") continue;
+    const split = parseTrialHeader(header);
+    const trial = aliasKey(header) === key ? 1 : split && aliasKey(split.name) === key ? split.trial : null;
+    if (trial !== null) columns[header] = testId === null ? null : { testId, trial };
+  }
+  return { ...draft, columns };
+}

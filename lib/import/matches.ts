@@ -4,7 +4,9 @@
  * or test; remembered, it becomes one (lib/aliases.ts) for the next import.
  */
 import { aliasKey } from "@/lib/aliases";
-import type { ImportContext, ImportMatches } from "./types";
+import { parseTrialHeader } from "./columns";
+import type { CsvTable } from "./csv";
+import type { ImportContext, ImportMapping, ImportMatches } from "./types";
 
 export const NO_MATCHES: ImportMatches = { athletes: {}, tests: {} };
 
@@ -46,4 +48,38 @@ export function applyMatches(
       tests: context.tests.map((t) => ({ ...t, aliases: [...t.aliases, ...(testNames.get(t.id) ?? [])] })),
     },
   };
+}
+
+/** The athlete and test names a file holds (keys as aliasKey makes them), read with its mapping. */
+export function namesInFile(table: CsvTable, mapping: ImportMapping): { athletes: Set<string>; tests: Set<string> } {
+  const athletes = new Set<string>();
+  const tests = new Set<string>();
+  const column = (name: string | null) => (name === null ? -1 : table.headers.indexOf(name));
+  const athleteAt = column(mapping.format === "long" ? mapping.columns.athlete : mapping.athleteColumn);
+  const testAt = mapping.format === "long" ? column(mapping.columns.test) : -1;
+  for (const cells of table.rows) {
+    if (athleteAt >= 0) athletes.add(aliasKey(cells[athleteAt] ?? ""));
+    if (testAt >= 0) tests.add(aliasKey(cells[testAt] ?? ""));
+  }
+  if (mapping.format === "wide")
+    for (const header of table.headers) {
+      tests.add(aliasKey(header));
+      tests.add(aliasKey(parseTrialHeader(header)?.name ?? header));
+    }
+  return { athletes, tests };
+}
+
+/**
+ * The matches a file used, and the names it does not hold (a match sent for a name the file
+ * never mentions is no reason to remember that name).
+ */
+export function usedMatches(matches: ImportMatches, present: ReturnType<typeof namesInFile>) {
+  const used: ImportMatches = { athletes: {}, tests: {} };
+  const absent: { kind: "athlete" | "test"; value: string }[] = [];
+  for (const kind of ["athletes", "tests"] as const)
+    for (const [value, id] of Object.entries(matches[kind])) {
+      if (present[kind].has(aliasKey(value))) used[kind][value] = id;
+      else absent.push({ kind: kind === "athletes" ? "athlete" : "test", value });
+    }
+  return { used, absent };
 }

@@ -61,9 +61,14 @@ function closeness(value: string, candidate: string): number | null {
   // Numbers name different things: a 10 m sprint is never a 30 m sprint mistyped.
   const digits = (text: string) => text.replace(/\D+/g, " ").trim();
   if (digits(value) !== digits(candidate)) return null;
-  // A slip of a key or two: at most one edit in five characters.
+  // A slip of a key or two: at most one edit in five characters — in the candidate's word order, or
+  // with the words sorted ("Sprnt 10 m" for "10 m sprint"), which counts half an edit more.
+  const limit = Math.max(1, Math.floor(candidate.length / 5));
   const distance = editDistance(value, candidate);
-  return distance <= Math.max(1, Math.floor(candidate.length / 5)) ? distance : null;
+  if (distance <= limit) return distance;
+  const sorted = (words: string[]) => [...words].sort().join(" ");
+  const reordered = editDistance(sorted(v), sorted(c)) + 0.5;
+  return reordered <= limit ? reordered : null;
 }
 
 /**

@@ -75,7 +75,7 @@ export const isoDate = z
 export const optionalIsoDate = isoDate.nullish().or(z.literal("").transform(() => null));
 
 export const MAX_ALIASES = 12;
-const ALIAS_CHARS = 60;
+export const ALIAS_CHARS = 60;
 
 /**
  * Other names a file may use ("CMJ, Counter movement jump"): typed comma-separated in a form, a
@@ -86,13 +86,19 @@ export const aliasList = z
   .preprocess(
     (value) => (typeof value === "string" ? value.split(",") : value),
     z.array(
-      z.string().transform((v) => cleanText(v)),
+      z.string({ message: "Other names are text, separated by commas." }).transform((v) => cleanText(v)),
       { message: "Other names are a list of names." },
     ),
   )
   .transform((list) => list.filter((alias) => alias !== "" && hasVisibleText(alias)))
-  .pipe(
-    z
-      .array(z.string().max(ALIAS_CHARS, `Each other name is limited to ${ALIAS_CHARS} characters.`))
-      .max(MAX_ALIASES, `At most ${MAX_ALIASES} other names.`),
-  );
+  // Checked on the whole list, so the message lands beside the one field a form shows for it.
+  .superRefine((list, ctx) => {
+    const long = list.find((alias) => alias.length > ALIAS_CHARS);
+    if (long)
+      ctx.addIssue({
+        code: "custom",
+        message: `“${long.slice(0, 24)}…” is too long: each other name is limited to ${ALIAS_CHARS} characters.`,
+      });
+    if (list.length > MAX_ALIASES)
+      ctx.addIssue({ code: "custom", message: `At most ${MAX_ALIASES} other names (${list.length} given).` });
+  });

@@ -18,20 +18,36 @@ const wideTarget = z
 
 const wideMappingSchema = z
   .record(column, wideTarget)
-  .refine((m) => Object.keys(m).length <= 500, "At most 500 columns.");
+  .refine((m) => Object.keys(m).length <= 500, "at most 500 columns.");
 
+const matchKey = z.string().refine((key) => key.trim() !== "" && key.length <= 200, {
+  message: "each name is 1 to 200 characters.",
+});
 const matchesSchema = z
   .object({
-    athletes: z.record(column, z.number().int().positive()).default({}),
-    tests: z.record(column, z.number().int().positive()).default({}),
+    athletes: z.record(matchKey, z.number().int().positive()).default({}),
+    tests: z.record(matchKey, z.number().int().positive()).default({}),
   })
-  .refine((m) => Object.keys(m.athletes).length + Object.keys(m.tests).length <= 500, "At most 500 matches.");
+  .refine((m) => Object.keys(m.athletes).length + Object.keys(m.tests).length <= 500, {
+    message: "at most 500 names can be matched.",
+  });
+
+type Issue = { code: string; message: string; issues?: Issue[] };
+/** The first of our own messages, also inside a record key's issues. */
+function customIssue(issues: readonly Issue[]): Issue | undefined {
+  for (const issue of issues) {
+    if (issue.code === "custom") return issue;
+    const inner = issue.issues && customIssue(issue.issues);
+    if (inner) return inner;
+  }
+  return undefined;
+}
 
 /** A JSON text field, parsed and checked against `schema`; empty means not sent. */
-const jsonField = <T>(schema: z.ZodType<T>, what: string) =>
+const jsonField = <T>(name: string, schema: z.ZodType<T>, shape: string) =>
   z
     .string()
-    .max(200_000)
+    .max(200_000, `${name} is limited to 200 000 characters.`)
     .optional()
     .transform((text, ctx): T | undefined => {
       if (text === undefined || text === "") return undefined;
@@ -39,12 +55,14 @@ const jsonField = <T>(schema: z.ZodType<T>, what: string) =>
       try {
         parsed = JSON.parse(text);
       } catch {
-        ctx.addIssue({ code: "custom", message: `${what.split(" ")[0]} is not valid JSON.` });
+        ctx.addIssue({ code: "custom", message: `${name} is not valid JSON.` });
         return z.NEVER;
       }
       const result = schema.safeParse(parsed);
       if (!result.success) {
-        ctx.addIssue({ code: "custom", message: what });
+        // Our own limits say what is wrong; anything else gets the expected shape.
+        const own = customIssue(result.error.issues);
+        ctx.addIssue({ code: "custom", message: own ? `${name}: ${own.message}` : `${name} ${shape}` });
         return z.NEVER;
       }
       return result.data;
@@ -63,9 +81,9 @@ export const importOptionsSchema = z.object({
   /** An empty string says "no trial column": every row is trial 1. */
   trialColumn: column.optional(),
   valueColumn: column.optional(),
-  mapping: jsonField(wideMappingSchema, "mapping maps each column to { testId, trial } or null."),
+  mapping: jsonField("mapping", wideMappingSchema, "maps each column to { testId, trial } or null."),
   /** Names in the file read as a roster athlete or a battery test: { athletes: { name: id }, tests: { name: id } }. */
-  matches: jsonField(matchesSchema, "matches gives { athletes: { name: athleteId }, tests: { name: testId } }."),
+  matches: jsonField("matches", matchesSchema, "gives { athletes: { name: athleteId }, tests: { name: testId } }."),
   replace: yes,
   /** Keep the matches as other names of those athletes and tests, for the next import. */
   remember: yes,

@@ -161,6 +161,28 @@ describe("matches in the Import", () => {
     expect(cmj.version).toBe(versionBefore + 1);
   });
 
+  it("remembers only names the file uses, with the forms' rules for other names", async () => {
+    await signInAs("scientist@example.com");
+    const long = `Luca ${"D".repeat(70)}`;
+    const matches = JSON.stringify({
+      athletes: { "Nobody Here": ids.luca, [long]: ids.luca },
+      tests: { Bench: ids.sprint10 },
+    });
+    const text = `athlete,test,trial,value\n${long},10 m sprint,2,1.81\n`;
+    const { status, json } = await uploadTo(importRoute.POST, sessionId, text, {
+      fields: { matches, remember: "yes", replace: "yes" },
+    });
+    expect(status).toBe(200);
+    expect(json.remembered).toEqual([]);
+    expect(json.unremembered).toEqual([
+      { kind: "athlete", value: long, reason: "another name is kept only with 1 to 60 visible characters" },
+      { kind: "athlete", value: "Nobody Here", reason: "the file does not use this name" },
+      { kind: "test", value: "Bench", reason: "the file does not use this name" },
+    ]);
+    const [luca] = await env.db.select({ aliases: athletes.aliases }).from(athletes).where(eq(athletes.id, ids.luca));
+    expect(luca.aliases).toEqual(["Luca Dempsy"]);
+  });
+
   it("without remember, a match serves this import only", async () => {
     await signInAs("scientist@example.com");
     const matches = JSON.stringify({ athletes: { "L Dempsey": ids.luca }, tests: {} });

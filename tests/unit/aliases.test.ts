@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { aliasClash, cleanAliases } from "@/lib/aliases";
 import { analyseCsv } from "@/lib/import/analyse";
+import { withTestMatch } from "@/lib/import/mapping-draft";
 import { applyMatches } from "@/lib/import/matches";
 import { context } from "./import-fixtures";
 
@@ -75,5 +76,27 @@ describe("aliases in the Import", () => {
       "“Ghost” is matched to an athlete who is not on the Academy U18 roster.",
       "“Jump” is matched to a test that is not in this battery.",
     ]);
+  });
+});
+
+describe("withTestMatch", () => {
+  it("points every column of the matched name at the test, at its header's trial, and back to ignored on undo", () => {
+    const draft = {
+      format: "wide" as const,
+      athleteColumn: "Athlete",
+      columns: { "CMJ 1": { testId: 1, trial: 1 }, "Sprnt 10 m 1": null, "Sprnt 10 m (trial 2)": null, Notes: null },
+    };
+    const headers = ["Athlete", "CMJ 1", "Sprnt 10 m 1", "Sprnt 10 m (trial 2)", "Notes"];
+    const matched = withTestMatch(draft, headers, "sprnt 10 m", 2);
+    expect(matched).toEqual({
+      ...draft,
+      columns: {
+        "CMJ 1": { testId: 1, trial: 1 },
+        "Sprnt 10 m 1": { testId: 2, trial: 1 },
+        "Sprnt 10 m (trial 2)": { testId: 2, trial: 2 },
+        Notes: null,
+      },
+    });
+    expect(withTestMatch(matched, headers, "Sprnt 10 m", null)).toEqual(draft);
   });
 });

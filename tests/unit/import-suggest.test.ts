@@ -31,6 +31,8 @@ describe("suggestNames", () => {
   it("offers test names too, and folds punctuation", () => {
     expect(suggestNames("10m sprint", ["10 m sprint", "30 m sprint"])).toEqual(["10 m sprint"]);
     expect(suggestNames("Countermovment jump", ["Countermovement jump"])).toEqual(["Countermovement jump"]);
+    // Words in another order, with a slip: a timing-gate export's "Sprnt 10 m".
+    expect(suggestNames("Sprnt 10 m", ["10 m sprint", "30 m sprint"])).toEqual(["10 m sprint"]);
     expect(foldName("Clío  O'Neil")).toBe("clio o neil");
   });
 });
