@@ -12,6 +12,7 @@ import {
   hasMatches,
   type MappingDraft,
   matchFields,
+  withLeftOut,
   withTestMatch,
 } from "@/lib/import/mapping-draft";
 import { NO_MATCHES } from "@/lib/import/matches";
@@ -75,18 +76,24 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
     preview.mutate({ file: next, fields: {} });
   };
   // A match is checked at once: one click, and the preview shows what the name now reads as.
-  const match = (kind: keyof ImportMatches, value: string, id: number | null) => {
-    if (!file || !draft) return;
+  const match = (kind: "athletes" | "tests", value: string, id: number | null) => {
+    if (!draft) return;
     const next = { ...matches, [kind]: { ...matches[kind] } };
     if (id === null) delete next[kind][value];
     else next[kind][value] = id;
-    setMatches(next);
-    // A mapping the server suggested stays its suggestion (the match then reads every column of that
-    // name); one the user chose is sent again, with the matched test's columns pointed at it.
-    const chosen = dirty || Object.keys(sentFields).some((field) => field !== "matches");
-    const columns = kind === "tests" && preview.data ? withTestMatch(draft, preview.data.headers, value, id) : draft;
-    preview.mutate({ file, fields: { ...(chosen ? fieldsOf(columns) : {}), ...matchFields(next) } });
+    recheck(next, kind === "tests" && preview.data ? withTestMatch(draft, preview.data.headers, value, id) : draft);
   };
+  // Leaving a name's rows out (or taking them back in) is checked at once too.
+  const leave = (kind: "athletes" | "tests", name: string, out: boolean) =>
+    recheck(withLeftOut(matches, kind, name, out), draft);
+  function recheck(next: ImportMatches, columns: MappingDraft | null) {
+    if (!file || !columns) return;
+    setMatches(next);
+    // A mapping the server suggested stays its suggestion (a match then reads every column of that
+    // name); one the user chose is sent again, with a matched test's columns pointed at it.
+    const chosen = dirty || Object.keys(sentFields).some((field) => field !== "matches");
+    preview.mutate({ file, fields: { ...(chosen ? fieldsOf(columns) : {}), ...matchFields(next) } });
+  }
   const startOver = () => {
     setFile(null);
     setResult(null);
@@ -166,6 +173,7 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
             busy={busy}
             canRememberTests={canRememberTests}
             onMatch={match}
+            onLeave={leave}
             onRemember={setRemember}
           />
           <ProblemList errors={data.errors} errorCount={data.errorCount} />

@@ -81,6 +81,18 @@ export function ImportDone({
           — stored as in the file; the Session sheet shows which and why.
         </p>
       )}
+      {result.leftOut.length > 0 && (
+        <p className="mt-2 text-sm">
+          Left out as asked:{" "}
+          {result.leftOut.map((l, i) => (
+            <span key={`${l.kind}:${l.name}`}>
+              {i > 0 && "; "}
+              {l.name} (<span className="num">{l.rows}</span> {l.rows === 1 ? "row" : "rows"})
+            </span>
+          ))}
+          .
+        </p>
+      )}
       {result.remembered.length > 0 && (
         <p className="mt-2 text-sm">
           Remembered for the next file:{" "}

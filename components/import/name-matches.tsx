@@ -4,7 +4,7 @@ import { useId } from "react";
 import type { ImportPreview } from "@/lib/import/summary";
 import type { ImportMatches } from "@/lib/import/types";
 
-type Kind = keyof ImportMatches;
+type Kind = "athletes" | "tests";
 type Unknown = {
   value: string;
   rows: number[];
@@ -30,6 +30,7 @@ export function NameMatches({
   busy,
   canRememberTests,
   onMatch,
+  onLeave,
   onRemember,
 }: {
   preview: ImportPreview;
@@ -38,6 +39,7 @@ export function NameMatches({
   busy: boolean;
   canRememberTests: boolean;
   onMatch: (kind: Kind, value: string, id: number | null) => void;
+  onLeave: (kind: Kind, name: string, leave: boolean) => void;
   onRemember: (remember: boolean) => void;
 }) {
   const athletes: Unknown[] = preview.unknownAthletes.map((a) => ({
@@ -56,14 +58,15 @@ export function NameMatches({
     inLibrary: t.reason === "not-in-battery",
     suggestions: t.suggestions ?? [],
   }));
-  const made = (Object.keys(matches) as Kind[]).flatMap((kind) =>
+  const made = (["athletes", "tests"] as const).flatMap((kind) =>
     Object.entries(matches[kind]).map(([value, id]) => ({
       kind,
       value,
       name: (kind === "athletes" ? preview.roster : preview.tests).find((x) => x.id === id)?.name ?? "?",
     })),
   );
-  if (athletes.length === 0 && tests.length === 0 && made.length === 0) return null;
+  const leftOut = preview.leftOut;
+  if (athletes.length === 0 && tests.length === 0 && made.length === 0 && leftOut.length === 0) return null;
   const moreAthletes = preview.unknownAthleteCount - athletes.length;
 
   return (
@@ -86,6 +89,7 @@ export function NameMatches({
               optionLabel="Another athlete on the roster…"
               busy={busy}
               onMatch={onMatch}
+              onLeave={onLeave}
             />
           ))}
           {moreAthletes > 0 && <li className="text-sm text-ink-soft">and {moreAthletes} more names</li>}
@@ -95,12 +99,24 @@ export function NameMatches({
         <NameGroup title="Tests not in this session's battery">
           {tests.map((t) =>
             t.inLibrary ? (
-              <li key={`t:${t.value}`} className="text-sm">
-                <span className="font-semibold">{t.value}</span>{" "}
-                <span className="text-ink-soft">
-                  is in the Test library but not in this battery · {rowsText(t.rows, t.count, t.column)}. Add it to the
-                  session's battery, or leave these scores out.
-                </span>
+              <li key={`t:${t.value}`} className="rounded-md border border-line bg-paper px-3 py-2 text-sm">
+                <p>
+                  <span className="font-semibold">{t.value}</span>{" "}
+                  <span className="text-ink-soft">
+                    is in the Test library but not in this battery · {rowsText(t.rows, t.count, t.column)}. Add it to
+                    the session's battery on the Session sheet (Edit session), or leave its scores out of this import.
+                  </span>
+                </p>
+                {!t.column && (
+                  <button
+                    type="button"
+                    className="btn-quiet mt-1 px-2 py-1 text-sm"
+                    disabled={busy}
+                    onClick={() => onLeave("tests", t.value, true)}
+                  >
+                    Leave out these rows
+                  </button>
+                )}
               </li>
             ) : (
               <UnknownName
@@ -112,10 +128,35 @@ export function NameMatches({
                 optionLabel="Another test of the battery…"
                 busy={busy}
                 onMatch={onMatch}
+                onLeave={t.column ? undefined : onLeave}
               />
             ),
           )}
         </NameGroup>
+      )}
+      {leftOut.length > 0 && (
+        <div>
+          <h3 className="text-sm font-semibold">Left out of this import</h3>
+          <ul className="mt-1 space-y-1 text-sm">
+            {leftOut.map((l) => (
+              <li key={`${l.kind}:${l.name}`} className="flex flex-wrap items-center gap-x-2">
+                <span>
+                  <span className="font-semibold">{l.name}</span>: <span className="num">{l.rows}</span>{" "}
+                  {l.rows === 1 ? "row" : "rows"} not imported
+                </span>
+                <button
+                  type="button"
+                  className="btn-quiet px-2 py-0.5 text-sm"
+                  disabled={busy}
+                  onClick={() => onLeave(l.kind === "athlete" ? "athletes" : "tests", l.name, false)}
+                  aria-label={`Take ${l.name} back in`}
+                >
+                  Take back in
+                </button>
+              </li>
+            ))}
+          </ul>
+        </div>
       )}
       {made.length > 0 && (
         <div>
@@ -179,6 +220,7 @@ function UnknownName({
   optionLabel,
   busy,
   onMatch,
+  onLeave,
 }: {
   kind: Kind;
   item: Unknown;
@@ -187,6 +229,7 @@ function UnknownName({
   optionLabel: string;
   busy: boolean;
   onMatch: (kind: Kind, value: string, id: number | null) => void;
+  onLeave?: (kind: Kind, name: string, leave: boolean) => void;
 }) {
   const selectId = useId();
   return (
@@ -226,6 +269,16 @@ function UnknownName({
             </option>
           ))}
         </select>
+        {onLeave && (
+          <button
+            type="button"
+            className="btn-quiet px-2 py-1 text-sm"
+            disabled={busy}
+            onClick={() => onLeave(kind, item.value, true)}
+          >
+            Leave out these rows
+          </button>
+        )}
       </div>
     </li>
   );

@@ -211,6 +211,7 @@ async function preview(
     unknownAthletes: plan.unknownAthletes,
     unknownAthleteCount: plan.unknownAthleteCount,
     unknownTests: plan.unknownTests,
+    leftOut: plan.leftOut,
     errors: plan.errors,
     errorCount: plan.errorCount,
     warnings: plan.warnings,
@@ -327,6 +328,7 @@ async function commitImport(
         replace,
         ...counts,
         ...(names.remembered.length ? { remembered: names.remembered } : {}),
+        ...(plan.leftOut.length ? { leftOut: plan.leftOut } : {}),
       },
     });
     return {
@@ -337,6 +339,7 @@ async function commitImport(
         format: plan.format,
         rowsImported,
         counts,
+        leftOut: plan.leftOut,
         ...names,
       },
       written: writes,

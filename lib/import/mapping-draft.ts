@@ -67,7 +67,19 @@ export function fieldsOf(draft: MappingDraft): Record<string, string> {
 }
 
 export const hasMatches = (matches: ImportMatches) =>
-  Object.keys(matches.athletes).length + Object.keys(matches.tests).length > 0;
+  Object.keys(matches.athletes).length +
+    Object.keys(matches.tests).length +
+    (matches.leaveOut?.athletes.length ?? 0) +
+    (matches.leaveOut?.tests.length ?? 0) >
+  0;
+
+/** The matches with `name` left out of the import (or, `leave` false, taken back in). */
+export function withLeftOut(matches: ImportMatches, kind: "athletes" | "tests", name: string, leave: boolean) {
+  const leaveOut = { athletes: [...(matches.leaveOut?.athletes ?? [])], tests: [...(matches.leaveOut?.tests ?? [])] };
+  leaveOut[kind] = leaveOut[kind].filter((n) => n !== name);
+  if (leave) leaveOut[kind].push(name);
+  return { ...matches, leaveOut };
+}
 
 /** The multipart field that carries the names matched in the mapping step (none: no field). */
 export const matchFields = (matches: ImportMatches): Record<string, string> =>

@@ -44,6 +44,10 @@ export function applyMatches(
     problems,
     context: {
       ...context,
+      leaveOut: {
+        athletes: new Set((matches.leaveOut?.athletes ?? []).map(aliasKey)),
+        tests: new Set((matches.leaveOut?.tests ?? []).map(aliasKey)),
+      },
       athletes: context.athletes.map((a) => ({ ...a, aliases: [...a.aliases, ...(athleteNames.get(a.id) ?? [])] })),
       tests: context.tests.map((t) => ({ ...t, aliases: [...t.aliases, ...(testNames.get(t.id) ?? [])] })),
     },

@@ -20,6 +20,7 @@ import type {
   ImportGroup,
   ImportMapping,
   ImportTest,
+  LeftOut,
   UnknownAthlete,
   UnknownTest,
 } from "./types";
@@ -52,6 +53,8 @@ export type ImportPlan = {
   unknownAthletes: UnknownAthlete[];
   unknownAthleteCount: number;
   unknownTests: UnknownTest[];
+  /** Rows left out as asked, by name. */
+  leftOut: LeftOut[];
   sample: PreviewValue[];
 };
 
@@ -146,6 +149,22 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
   const sample: PreviewValue[] = [];
   let valueCount = 0;
   const roster = `the ${context.squadName} roster`;
+  const leftOut = new Map<string, LeftOut>();
+  /** True when the row's athlete or test is one the person importing asked to leave out. */
+  const leaveOut = (athleteCell: string, testCell: string | null): boolean => {
+    const kinds = context.leaveOut;
+    if (!kinds) return false;
+    const athlete = normaliseName(athleteCell);
+    const test = testCell === null ? "" : normaliseName(testCell);
+    const kind = kinds.athletes.has(athlete) ? "athlete" : test !== "" && kinds.tests.has(test) ? "test" : null;
+    if (kind === null) return false;
+    const name = kind === "athlete" ? athleteCell.trim() : (testCell ?? "").trim();
+    const key = `${kind}:${kind === "athlete" ? athlete : test}`;
+    const entry = leftOut.get(key) ?? { kind, name: clip(name), rows: 0 };
+    entry.rows++;
+    leftOut.set(key, entry);
+    return true;
+  };
 
   const athleteFor = (cell: string, row: number, column: string): ImportAthlete | null => {
     const match = matchAthlete(cell);
@@ -272,6 +291,7 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
         });
         continue;
       }
+      if (leaveOut(cells[ai] ?? "", cells[ti] ?? "")) continue;
       const score = parseScore(cells[vi], delimiter);
       if (score === null) continue;
       let failed = false;
@@ -390,6 +410,7 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
           break;
         }
       }
+      if (leaveOut(cells[ai] ?? "", null)) continue;
       const scores = targets.map((t) => parseScore(cells[t.index] ?? "", delimiter));
       if (scores.every((s) => s === null)) continue;
       const athlete = athleteFor(cells[ai] ?? "", row, mapping.athleteColumn!);
@@ -426,6 +447,7 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
           : a,
       ),
     unknownAthleteCount: unknownAthletes.byKey.size,
+    leftOut: [...leftOut.values()],
     unknownTests: unknownTests
       .list()
       .slice(0, MAX_LISTED_ERRORS)

@@ -10,6 +10,7 @@ import type {
   ImportCounts,
   ImportFormat,
   ImportMapping,
+  LeftOut,
   LongColumns,
   UnknownAthlete,
   UnknownTest,
@@ -49,6 +50,8 @@ export type ImportPreview = {
   unknownAthletes: UnknownAthlete[];
   unknownAthleteCount: number;
   unknownTests: UnknownTest[];
+  /** Rows left out as asked in the mapping step, by name. */
+  leftOut: LeftOut[];
   errors: RowError[];
   errorCount: number;
   warnings: RowError[];
@@ -69,6 +72,7 @@ export type ImportCommitted = {
   format: ImportFormat;
   rowsImported: number;
   counts: ImportCounts;
+  leftOut: LeftOut[];
   /** Matches kept as other names of athletes and tests, for the next import. */
   remembered: { kind: "athlete" | "test"; value: string; id: number; name: string }[];
   /** Matches asked to be remembered that were not, and why. */

@@ -32,6 +32,8 @@ export type ImportContext = {
   /** Names of the organisation's tests that are not in this session's battery. */
   otherTestNames: string[];
   athletes: ImportAthlete[];
+  /** Names (as normaliseName makes them) whose rows are left out, as asked in the mapping step. */
+  leaveOut?: { athletes: Set<string>; tests: Set<string> };
 };
 
 export type LongColumns = { athlete: string | null; test: string | null; trial: string | null; value: string | null };
@@ -84,7 +86,15 @@ export type UnknownTest = {
  * Names in a file that the person importing has said are a roster athlete or a battery test
  * (the mapping step's "Use …"), keyed by the file's text.
  */
-export type ImportMatches = { athletes: Record<string, number>; tests: Record<string, number> };
+export type ImportMatches = {
+  athletes: Record<string, number>;
+  tests: Record<string, number>;
+  /** Names whose rows this import leaves out, as asked (an athlete of another squad, a test not in the battery). */
+  leaveOut?: { athletes: string[]; tests: string[] };
+};
+
+/** Rows left out of an import because their athlete or test name was asked to be, counted by name. */
+export type LeftOut = { kind: "athlete" | "test"; name: string; rows: number };
 
 export type ExistingResult = { trials: (number | null)[]; flag: ResultFlag | null; version: number };
 

@@ -27,6 +27,12 @@ const matchesSchema = z
   .object({
     athletes: z.record(matchKey, z.number().int().positive()).default({}),
     tests: z.record(matchKey, z.number().int().positive()).default({}),
+    leaveOut: z
+      .object({
+        athletes: z.array(matchKey).max(500, "at most 500 names can be left out.").default([]),
+        tests: z.array(matchKey).max(500, "at most 500 names can be left out.").default([]),
+      })
+      .optional(),
   })
   .refine((m) => Object.keys(m.athletes).length + Object.keys(m.tests).length <= 500, {
     message: "at most 500 names can be matched.",

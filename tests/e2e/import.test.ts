@@ -133,6 +133,52 @@ describe("Import in the browser", () => {
     await page.close();
   });
 
+  it("leaves out the rows of a guest and of a test outside the battery, as asked, and says so", async () => {
+    const page = await browser.context.newPage();
+    await signInThroughForm(page, baseUrl, "coach@example.com");
+    await page.setViewportSize({ width: 820, height: 1180 });
+    await page.goto(`${baseUrl}/sessions/${session.id}/import`);
+    const text = [
+      "athlete,test,trial,value",
+      "Sami Okonkwo,10 m sprint,2,1.83",
+      "Guest Runner,10 m sprint,1,1.97",
+      "Sami Okonkwo,30 m sprint,1,4.41",
+    ].join("\n");
+    await page
+      .locator('input[type="file"]')
+      .setInputFiles({ name: "gates.csv", mimeType: "text/csv", buffer: Buffer.from(text) });
+    await page.getByRole("heading", { name: "Names in the file" }).waitFor();
+    await page.getByRole("button", { name: "Leave out these rows" }).first().click();
+    await page.getByText("Guest Runner: 1 row not imported").waitFor();
+    await page.getByRole("button", { name: "Leave out these rows" }).click();
+    await page.getByText("30 m sprint: 1 row not imported").waitFor();
+    const importButton = page.getByRole("button", { name: "Import 1 result" });
+    await expect.poll(() => importButton.isEnabled()).toBe(true);
+    await screenshot(page, "import-left-out");
+    await importButton.click();
+    await page.getByText("Left out as asked: Guest Runner (1 row); 30 m sprint (1 row).").waitFor();
+    await page.close();
+  });
+
+  it("a wide file's misspelt test, matched once, reads in every one of its columns", async () => {
+    const page = await browser.context.newPage();
+    await signInThroughForm(page, baseUrl, "coach@example.com");
+    await page.setViewportSize({ width: 820, height: 1180 });
+    await page.goto(`${baseUrl}/sessions/${session.id}/import`);
+    const text =
+      "Athlete,CMJ 1,CMJ 2,Sprnt 10 m 1,Sprnt 10 m 2\nRafael Strand,38.2,38.9,1.79,1.77\nMateo Rusk,31.0,31.4,1.84,1.83\n";
+    await page
+      .locator('input[type="file"]')
+      .setInputFiles({ name: "wide.csv", mimeType: "text/csv", buffer: Buffer.from(text) });
+    await page.getByRole("button", { name: "Use 10 m sprint" }).click();
+    await page.getByText("Sprnt 10 m reads as 10 m sprint").waitFor();
+    const importButton = page.getByRole("button", { name: "Import 4 results" });
+    await expect.poll(() => importButton.isEnabled()).toBe(true);
+    await importButton.click();
+    await page.getByText(/8 scores in 2 rows/).waitFor();
+    await page.close();
+  });
+
   it("maps an unknown column in the mapping step, and replaces a stored value only when asked", async () => {
     const page = await browser.context.newPage();
     await signInThroughForm(page, baseUrl, "coach@example.com");

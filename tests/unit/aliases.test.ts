@@ -100,3 +100,24 @@ describe("withTestMatch", () => {
     expect(withTestMatch(matched, headers, "Sprnt 10 m", null)).toEqual(draft);
   });
 });
+
+describe("leaving rows out", () => {
+  it("skips the rows of a name asked to be left out, counts them, and lists no problem for them", () => {
+    const text =
+      "athlete,test,trial,value\nAna Silva,10 m sprint,1,1.81\nGuest Runner,10 m sprint,1,1.95\nAna Silva,30 m sprint,1,4.4\nAna Silva,30 m sprint,2,4.38\n";
+    const before = analyseCsv(text, {}, context).plan;
+    expect(before.errorCount).toBe(3);
+    const { context: asked } = applyMatches(context, {
+      athletes: {},
+      tests: {},
+      leaveOut: { athletes: ["guest runner"], tests: ["30 M SPRINT"] },
+    });
+    const after = analyseCsv(text, {}, asked).plan;
+    expect(after.errorCount).toBe(0);
+    expect(after.valueCount).toBe(1);
+    expect(after.leftOut).toEqual([
+      { kind: "athlete", name: "Guest Runner", rows: 1 },
+      { kind: "test", name: "30 m sprint", rows: 2 },
+    ]);
+  });
+});
