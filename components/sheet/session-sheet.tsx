@@ -34,6 +34,18 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
   const unsaved = Object.values(sheet.cells).filter((c) => c.status === "failed" || c.status === "conflict").length;
   const { suspects, count: suspectCount, news } = useSuspects(data, sheet.shownFor);
 
+  const message = [
+    announcement,
+    refused > 0 &&
+      `${refused} cell${refused === 1 ? " holds" : "s hold"} text that is not a number and ${refused === 1 ? "was" : "were"} not saved.`,
+    unsaved > 0 && `${unsaved} result${unsaved === 1 ? " needs" : "s need"} your attention below.`,
+    news,
+    sheet.waiting > 0 &&
+      `No connection: ${sheet.waiting} ${sheet.waiting === 1 ? "result is" : "results are"} kept in this browser and will be sent when the network is back.`,
+  ]
+    .filter(Boolean)
+    .join(" ");
+
   return (
     <section aria-labelledby="sheet-heading" className="space-y-3">
       <Breadcrumbs
@@ -154,24 +166,21 @@ export function SessionSheet({ sessionId }: { sessionId: number }) {
             ))}
           </select>
         </div>
-        {data.canEdit && (
-          <p className="text-xs text-ink-soft">
-            Type a score, <kbd className="rounded border border-line px-1">Tab</kbd> to the next trial,{" "}
-            <kbd className="rounded border border-line px-1">Enter</kbd> for the next athlete. Decimal commas are fine;
-            paste a block from a spreadsheet into the first cell.
+        {/* The keyboard hint and what just happened share one slot beside Show, so a message never
+            pushes the sheet down while someone types. */}
+        <div className="grid min-h-10 min-w-64 flex-1">
+          {data.canEdit && (
+            <p className={`text-xs text-ink-soft [grid-area:1/1] sm:text-right ${message ? "invisible" : ""}`}>
+              Type a score, <kbd className="rounded border border-line px-1">Tab</kbd> to the next trial,{" "}
+              <kbd className="rounded border border-line px-1">Enter</kbd> for the next athlete. Decimal commas are
+              fine; paste a block from a spreadsheet into the first cell.
+            </p>
+          )}
+          <p aria-live="polite" className="text-sm [grid-area:1/1] sm:text-right">
+            {message}
           </p>
-        )}
+        </div>
       </div>
-
-      <p aria-live="polite" className="min-h-10 text-sm">
-        {announcement}
-        {refused > 0 &&
-          ` ${refused} cell${refused === 1 ? " holds" : "s hold"} text that is not a number and ${refused === 1 ? "was" : "were"} not saved.`}
-        {unsaved > 0 && ` ${unsaved} result${unsaved === 1 ? " needs" : "s need"} your attention below.`}
-        {news && ` ${news}`}
-        {sheet.waiting > 0 &&
-          ` No connection: ${sheet.waiting} ${sheet.waiting === 1 ? "result is" : "results are"} kept in this browser and will be sent when the network is back.`}
-      </p>
 
       <MissingScores data={data} shownFor={sheet.shownFor} />
 
