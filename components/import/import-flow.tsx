@@ -41,6 +41,8 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
   const [replace, setReplace] = useState(false);
   const [matches, setMatches] = useState<ImportMatches>(NO_MATCHES);
   const [remember, setRemember] = useState(true);
+  // Which file this is (1, 2, …): the mapping step starts afresh with each.
+  const [chosen, setChosen] = useState(0);
   const [progress, setProgress] = useState<UploadProgress | null>(null);
   const [result, setResult] = useState<ImportCommitted | null>(null);
 
@@ -69,6 +71,7 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
 
   const choose = (next: File) => {
     setFile(next);
+    setChosen((n) => n + 1);
     setResult(null);
     setDraft(null);
     setMatches(NO_MATCHES);
@@ -91,8 +94,8 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
     setMatches(next);
     // A mapping the server suggested stays its suggestion (a match then reads every column of that
     // name); one the user chose is sent again, with a matched test's columns pointed at it.
-    const chosen = dirty || Object.keys(sentFields).some((field) => field !== "matches");
-    preview.mutate({ file, fields: { ...(chosen ? fieldsOf(columns) : {}), ...matchFields(next) } });
+    const userMapping = dirty || Object.keys(sentFields).some((field) => field !== "matches");
+    preview.mutate({ file, fields: { ...(userMapping ? fieldsOf(columns) : {}), ...matchFields(next) } });
   }
   const startOver = () => {
     setFile(null);
@@ -134,6 +137,7 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
         <>
           <PreviewFacts preview={data} />
           <MappingStep
+            key={chosen}
             preview={data}
             draft={draft}
             onChange={(next) => {

@@ -1,6 +1,6 @@
 "use client";
 
-import { useId } from "react";
+import { useId, useState } from "react";
 import { defaultDraft, type MappingDraft, withAthleteColumn } from "@/lib/import/mapping-draft";
 import type { ImportPreview } from "@/lib/import/summary";
 import type { WideColumnStatus } from "@/lib/import/types";
@@ -65,6 +65,7 @@ export function MappingStep({
   const formatId = useId();
   const testsById = new Map(preview.tests.map((t) => [t.id, t]));
   const suggestion = new Map(preview.suggestions.map((s) => [s.header, s.status]));
+  const [touched, setTouched] = useState<Set<string>>(() => new Set());
 
   return (
     <section aria-labelledby={`${formatId}-h`} className="card space-y-4 p-4">
@@ -152,6 +153,9 @@ export function MappingStep({
                 {Object.entries(draft.columns).map(([header, target]) => {
                   const status = suggestion.get(header) ?? "unknown";
                   const words = STATUS_WORDS[status];
+                  // A column the file names with no test found is not "ignored" until someone says so.
+                  const unread =
+                    !target && !touched.has(header) && (status === "unknown" || status === "not-in-battery");
                   const test = target ? testsById.get(target.testId) : undefined;
                   const set = (next: typeof target) =>
                     onChange({ ...draft, columns: { ...draft.columns, [header]: next } });
@@ -169,11 +173,17 @@ export function MappingStep({
                         <select
                           aria-label={`Test for column ${header}`}
                           className="field py-1"
-                          value={target ? String(target.testId) : ""}
-                          onChange={(e) =>
-                            set(e.target.value ? { testId: Number(e.target.value), trial: target?.trial ?? 1 } : null)
-                          }
+                          value={target ? String(target.testId) : unread ? "unread" : ""}
+                          onChange={(e) => {
+                            setTouched((before) => new Set(before).add(header));
+                            set(e.target.value ? { testId: Number(e.target.value), trial: target?.trial ?? 1 } : null);
+                          }}
                         >
+                          {unread && (
+                            <option value="unread" disabled>
+                              Not read yet: choose a test
+                            </option>
+                          )}
                           <option value="">Ignore this column</option>
                           {preview.tests.map((t) => (
                             <option key={t.id} value={t.id}>
