@@ -35,7 +35,7 @@ export function AthleteTable({
     const q = query.trim().toLowerCase();
     const filtered = q
       ? athletes.filter((a) =>
-          [a.name, a.position, a.externalId, a.sex ? SEX_LABELS[a.sex] : null, a.dateOfBirth].some((v) =>
+          [a.name, ...a.aliases, a.position, a.externalId, a.sex ? SEX_LABELS[a.sex] : null, a.dateOfBirth].some((v) =>
             v?.toLowerCase().includes(q),
           ),
         )
@@ -123,6 +123,9 @@ export function AthleteTable({
                 </Link>
                 {a.archived && (
                   <span className="ml-2 rounded bg-steady-soft px-1.5 py-0.5 text-xs text-ink-soft">Archived</span>
+                )}
+                {a.aliases.length > 0 && (
+                  <span className="block text-xs text-ink-soft">In files also: {a.aliases.join(", ")}</span>
                 )}
                 <PhoneFacts
                   facts={COLUMNS.filter((col) => col.key !== "name").map((col) => ({
