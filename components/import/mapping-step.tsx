@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, useState } from "react";
+import { useId } from "react";
 import { defaultDraft, type MappingDraft, withAthleteColumn } from "@/lib/import/mapping-draft";
 import type { ImportPreview } from "@/lib/import/summary";
 import type { WideColumnStatus } from "@/lib/import/types";
@@ -65,7 +65,6 @@ export function MappingStep({
   const formatId = useId();
   const testsById = new Map(preview.tests.map((t) => [t.id, t]));
   const suggestion = new Map(preview.suggestions.map((s) => [s.header, s.status]));
-  const [touched, setTouched] = useState<Set<string>>(() => new Set());
 
   return (
     <section aria-labelledby={`${formatId}-h`} className="card space-y-4 p-4">
@@ -150,14 +149,17 @@ export function MappingStep({
                 </tr>
               </thead>
               <tbody>
-                {Object.entries(draft.columns).map(([header, target]) => {
+                {Object.entries(draft.columns).map(([header, chosen]) => {
                   const status = suggestion.get(header) ?? "unknown";
-                  const words = STATUS_WORDS[status];
-                  // A column the file names with no test found is not "ignored" until someone says so.
-                  const unread =
-                    !target && !touched.has(header) && (status === "unknown" || status === "not-in-battery");
+                  // A column nobody has chosen for yet is read as its header says, or reported: never ignored unasked.
+                  const unread = chosen === "unread";
+                  const target = unread ? null : chosen;
+                  const words =
+                    target && status !== "matched"
+                      ? { text: "chosen here", className: STATUS_WORDS.matched.className }
+                      : STATUS_WORDS[status];
                   const test = target ? testsById.get(target.testId) : undefined;
-                  const set = (next: typeof target) =>
+                  const set = (next: typeof chosen) =>
                     onChange({ ...draft, columns: { ...draft.columns, [header]: next } });
                   return (
                     <tr key={header} className="border-b border-line last:border-0">
@@ -173,11 +175,10 @@ export function MappingStep({
                         <select
                           aria-label={`Test for column ${header}`}
                           className="field py-1"
-                          value={target ? String(target.testId) : unread ? "unread" : ""}
-                          onChange={(e) => {
-                            setTouched((before) => new Set(before).add(header));
-                            set(e.target.value ? { testId: Number(e.target.value), trial: target?.trial ?? 1 } : null);
-                          }}
+                          value={unread ? "unread" : target ? String(target.testId) : ""}
+                          onChange={(e) =>
+                            set(e.target.value ? { testId: Number(e.target.value), trial: target?.trial ?? 1 } : null)
+                          }
                         >
                           {unread && (
                             <option value="unread" disabled>

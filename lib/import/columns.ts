@@ -2,7 +2,7 @@
  * Reading the header: which format the file is in, which column names the athlete, and which
  * test and trial each wide column holds.
  */
-import type { ImportContext, ImportFormat, ImportTest, LongColumns, WideColumnSuggestion, WideTarget } from "./types";
+import type { ImportContext, ImportFormat, ImportTest, LongColumns, WideColumnSuggestion } from "./types";
 
 /** Case-insensitive, trimmed, inner runs of spaces collapsed. */
 export const normaliseName = (value: string) => value.trim().replace(/\s+/g, " ").toLowerCase();
@@ -155,14 +155,4 @@ export function suggestWideColumns(
     }
     return { header, status: match.status, testId: null, trial: null };
   });
-}
-
-/** The wide mapping a suggestion stands for (unknown columns stay in it as null, and are reported). */
-export function wideMappingOf(suggestions: WideColumnSuggestion[]): Record<string, WideTarget> {
-  const columns: Record<string, WideTarget> = {};
-  for (const s of suggestions) {
-    if (s.status === "athlete") continue;
-    columns[s.header] = s.status === "matched" ? { testId: s.testId!, trial: s.trial! } : null;
-  }
-  return columns;
 }

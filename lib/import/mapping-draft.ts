@@ -3,10 +3,16 @@ import { parseTrialHeader } from "@/lib/import/columns";
 import type { ImportPreview } from "@/lib/import/summary";
 import type { ImportFormat, ImportMatches, WideTarget } from "@/lib/import/types";
 
+/**
+ * A wide column in the mapping step: a test and trial, null when someone chose to ignore it, or
+ * "unread" while nobody has — the server then reads it as its header suggests, or reports it.
+ */
+export type DraftTarget = WideTarget | "unread";
+
 /** The mapping step's choices, in the shape the selects need. */
 export type MappingDraft =
   | { format: "long"; athlete: string; test: string; trial: string; value: string }
-  | { format: "wide"; athleteColumn: string; columns: Record<string, WideTarget> };
+  | { format: "wide"; athleteColumn: string; columns: Record<string, DraftTarget> };
 
 export function draftFromPreview(preview: ImportPreview): MappingDraft {
   const m = preview.mapping;
@@ -20,9 +26,9 @@ export function draftFromPreview(preview: ImportPreview): MappingDraft {
     };
   }
   const athleteColumn = m.athleteColumn ?? "";
-  const columns: Record<string, WideTarget> = {};
+  const columns: Record<string, DraftTarget> = {};
   for (const header of preview.headers)
-    if (header !== athleteColumn && header !== "") columns[header] = m.columns[header] ?? null;
+    if (header !== athleteColumn && header !== "") columns[header] = header in m.columns ? m.columns[header] : "unread";
   return { format: "wide", athleteColumn, columns };
 }
 
@@ -33,10 +39,11 @@ export function defaultDraft(preview: ImportPreview, format: ImportFormat): Mapp
     return { format: "long", athlete: c.athlete ?? "", test: c.test ?? "", trial: c.trial ?? "", value: c.value ?? "" };
   }
   const athleteColumn = preview.suggestions.find((s) => s.status === "athlete")?.header ?? preview.headers[0] ?? "";
-  const columns: Record<string, WideTarget> = {};
+  const columns: Record<string, DraftTarget> = {};
   for (const s of preview.suggestions) {
     if (s.header === athleteColumn || s.header === "") continue;
-    columns[s.header] = s.status === "matched" ? { testId: s.testId!, trial: s.trial! } : null;
+    columns[s.header] =
+      s.status === "matched" ? { testId: s.testId!, trial: s.trial! } : s.status === "ignored" ? null : "unread";
   }
   return { format: "wide", athleteColumn, columns };
 }
@@ -46,9 +53,9 @@ export function withAthleteColumn(
   headers: string[],
   athleteColumn: string,
 ): MappingDraft {
-  const columns: Record<string, WideTarget> = {};
+  const columns: Record<string, DraftTarget> = {};
   for (const header of headers)
-    if (header !== athleteColumn && header !== "") columns[header] = draft.columns[header] ?? null;
+    if (header !== athleteColumn && header !== "") columns[header] = draft.columns[header] ?? "unread";
   return { format: "wide", athleteColumn, columns };
 }
 
@@ -63,7 +70,9 @@ export function fieldsOf(draft: MappingDraft): Record<string, string> {
       valueColumn: draft.value,
     };
   }
-  return { format: "wide", athleteColumn: draft.athleteColumn, mapping: JSON.stringify(draft.columns) };
+  // Columns nobody has read yet are left out: the server reads them as their header suggests.
+  const chosen = Object.fromEntries(Object.entries(draft.columns).filter(([, target]) => target !== "unread"));
+  return { format: "wide", athleteColumn: draft.athleteColumn, mapping: JSON.stringify(chosen) };
 }
 
 export const hasMatches = (matches: ImportMatches) =>
@@ -88,7 +97,7 @@ export const matchFields = (matches: ImportMatches): Record<string, string> =>
 /**
  * A wide file's columns after a test name was matched in the mapping step ("Sprnt 10 m" is the
  * 10 m sprint): every column of that name now reads as the test, at the trial its header gives
- * (trial 1 without one); undone (null), they are ignored again. A long file's draft is unchanged.
+ * (trial 1 without one); undone (null), they are unread again. A long file's draft is unchanged.
  * @example withTestMatch(draft, ["athlete", "Sprnt 10 m 2"], "Sprnt 10 m", 7).columns // { "Sprnt 10 m 2": { testId: 7, trial: 2 } }
  */
 export function withTestMatch(
@@ -104,7 +113,7 @@ export function withTestMatch(
     if (header === draft.athleteColumn || header === "") continue;
     const split = parseTrialHeader(header);
     const trial = aliasKey(header) === key ? 1 : split && aliasKey(split.name) === key ? split.trial : null;
-    if (trial !== null) columns[header] = testId === null ? null : { testId, trial };
+    if (trial !== null) columns[header] = testId === null ? "unread" : { testId, trial };
   }
   return { ...draft, columns };
 }

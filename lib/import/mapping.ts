@@ -12,7 +12,6 @@ import {
   normaliseName,
   parseTrialHeader,
   suggestWideColumns,
-  wideMappingOf,
 } from "./columns";
 import type { CsvTable } from "./csv";
 import { suggestionsFor } from "./suggest";
@@ -125,100 +124,105 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
     errors.push({ row, column: athleteColumn, message: `This file has no column ${quote(athleteColumn)}.` });
   }
 
-  let columns: Record<string, WideTarget>;
-  if (request.columns) {
-    columns = {};
-    const testsById = new Map(context.tests.map((t) => [t.id, t]));
-    const targetOwner = new Map<string, string>();
-    for (const [header, target] of Object.entries(request.columns)) {
-      if (!has(header)) {
-        errors.push({ row, column: header, message: `This file has no column ${quote(header)}.` });
-        continue;
-      }
-      if (header === athleteColumn || target === null) continue;
-      const test = testsById.get(target.testId);
-      if (!test) {
-        errors.push({
-          row,
-          column: header,
-          message: `Column ${quote(header)} is mapped to a test that is not in this session's battery.`,
-        });
-        continue;
-      }
-      const limit = trialLimit(test.trialsPerSession);
-      if (!Number.isInteger(target.trial) || target.trial < 1 || target.trial > limit) {
-        errors.push({
-          row,
-          column: header,
-          message: `${test.name} takes trials 1 to ${limit} in a session; ${quote(header)} is mapped to trial ${target.trial}.`,
-        });
-        continue;
-      }
-      const key = `${target.testId}:${target.trial}`;
-      const other = targetOwner.get(key);
-      if (other !== undefined) {
-        errors.push({
-          row,
-          column: header,
-          message: `Columns ${quote(other)} and ${quote(header)} are both mapped to ${test.name} trial ${target.trial}.`,
-        });
-        continue;
-      }
-      targetOwner.set(key, header);
-      columns[header] = target;
+  // A mapping sent from the mapping step names the columns someone chose (null: ignore it); every
+  // other column is read as the header suggests, so a column nobody has looked at is never
+  // dropped without a word: it is read, or reported.
+  const columns: Record<string, WideTarget> = {};
+  const testsById = new Map(context.tests.map((t) => [t.id, t]));
+  const targetOwner = new Map<string, string>();
+  const chosen = request.columns ?? {};
+  for (const [header, target] of Object.entries(chosen)) {
+    if (!has(header)) {
+      errors.push({ row, column: header, message: `This file has no column ${quote(header)}.` });
+      continue;
     }
-  } else {
-    columns = wideMappingOf(suggestions);
-    const testsById = new Map(context.tests.map((t) => [t.id, t]));
-    const targetOwner = new Map<string, string>();
-    // "CMJ 1", "CMJ 2", "CMJ 3" are one unknown test, named as the file names it.
-    const unknownByName = new Map<string, UnknownTest>();
-    for (const s of suggestions) {
-      if (s.status === "unknown" || s.status === "not-in-battery") {
-        const name = parseTrialHeader(s.header)?.name ?? s.header.trim();
-        const key = normaliseName(name);
-        const known = unknownByName.get(key);
-        if (known) known.count++;
-        else {
-          const entry: UnknownTest = { name, reason: s.status, count: 1, rows: [row], column: s.header };
-          if (s.status === "unknown") entry.suggestions = suggestionsFor(name, context.tests);
-          unknownByName.set(key, entry);
-          unknownTests.push(entry);
-        }
-        errors.push({
-          row,
-          column: s.header,
-          message:
-            s.status === "unknown"
-              ? `No test in the Test library is called ${quote(s.header)}. Match it above (Names in the file), map or ignore the column in the mapping step, or rename the column.`
-              : `${quote(s.header)} is in the Test library but not in this session's battery. Add it to the battery, or ignore the column.`,
-        });
-      }
-      if (s.status !== "matched") continue;
-      const test = testsById.get(s.testId!)!;
-      const limit = trialLimit(test.trialsPerSession);
-      if (s.trial! > limit) {
-        errors.push({
-          row,
-          column: s.header,
-          message: `${test.name} takes trials 1 to ${limit} in a session; this column reads as trial ${s.trial}.`,
-        });
-        columns[s.header] = null;
-        continue;
-      }
-      const key = `${s.testId}:${s.trial}`;
-      const other = targetOwner.get(key);
-      if (other !== undefined) {
-        errors.push({
-          row,
-          column: s.header,
-          message: `Columns ${quote(other)} and ${quote(s.header)} both read as ${test.name} trial ${s.trial}. Rename one, or map them in the mapping step.`,
-        });
-        columns[s.header] = null;
-        continue;
-      }
-      targetOwner.set(key, s.header);
+    if (header === athleteColumn) continue;
+    if (target === null) {
+      columns[header] = null;
+      continue;
     }
+    const test = testsById.get(target.testId);
+    if (!test) {
+      errors.push({
+        row,
+        column: header,
+        message: `Column ${quote(header)} is mapped to a test that is not in this session's battery.`,
+      });
+      continue;
+    }
+    const limit = trialLimit(test.trialsPerSession);
+    if (!Number.isInteger(target.trial) || target.trial < 1 || target.trial > limit) {
+      errors.push({
+        row,
+        column: header,
+        message: `${test.name} takes trials 1 to ${limit} in a session; ${quote(header)} is mapped to trial ${target.trial}.`,
+      });
+      continue;
+    }
+    const key = `${target.testId}:${target.trial}`;
+    const other = targetOwner.get(key);
+    if (other !== undefined) {
+      errors.push({
+        row,
+        column: header,
+        message: `Columns ${quote(other)} and ${quote(header)} are both mapped to ${test.name} trial ${target.trial}.`,
+      });
+      continue;
+    }
+    targetOwner.set(key, header);
+    columns[header] = target;
+  }
+  // "CMJ 1", "CMJ 2", "CMJ 3" are one unknown test, named as the file names it.
+  const unknownByName = new Map<string, UnknownTest>();
+  for (const s of suggestions) {
+    if (s.status === "athlete" || s.header === athleteColumn || s.header in chosen) continue;
+    if (s.status === "unknown" || s.status === "not-in-battery") {
+      const name = parseTrialHeader(s.header)?.name ?? s.header.trim();
+      const key = normaliseName(name);
+      const known = unknownByName.get(key);
+      if (known) known.count++;
+      else {
+        const entry: UnknownTest = { name, reason: s.status, count: 1, rows: [row], column: s.header };
+        if (s.status === "unknown") entry.suggestions = suggestionsFor(name, context.tests);
+        unknownByName.set(key, entry);
+        unknownTests.push(entry);
+      }
+      errors.push({
+        row,
+        column: s.header,
+        message:
+          s.status === "unknown"
+            ? `No test in the Test library is called ${quote(s.header)}. Match it above (Names in the file), map or ignore the column in the mapping step, or rename the column.`
+            : `${quote(s.header)} is in the Test library but not in this session's battery. Add it to the battery, or ignore the column.`,
+      });
+      continue;
+    }
+    if (s.status !== "matched") {
+      columns[s.header] = null;
+      continue;
+    }
+    const test = testsById.get(s.testId!)!;
+    const limit = trialLimit(test.trialsPerSession);
+    if (s.trial! > limit) {
+      errors.push({
+        row,
+        column: s.header,
+        message: `${test.name} takes trials 1 to ${limit} in a session; this column reads as trial ${s.trial}. Map it to a trial in the mapping step, or ignore it.`,
+      });
+      continue;
+    }
+    const key = `${s.testId}:${s.trial}`;
+    const other = targetOwner.get(key);
+    if (other !== undefined) {
+      errors.push({
+        row,
+        column: s.header,
+        message: `Columns ${quote(other)} and ${quote(s.header)} both read as ${test.name} trial ${s.trial}. Rename one, or map them in the mapping step.`,
+      });
+      continue;
+    }
+    targetOwner.set(key, s.header);
+    columns[s.header] = { testId: s.testId!, trial: s.trial! };
   }
   if (!Object.values(columns).some((t) => t !== null) && !errors.some((e) => e.column)) {
     errors.push({

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { aliasClash, cleanAliases } from "@/lib/aliases";
 import { analyseCsv } from "@/lib/import/analyse";
-import { withTestMatch } from "@/lib/import/mapping-draft";
+import { type MappingDraft, withTestMatch } from "@/lib/import/mapping-draft";
 import { applyMatches } from "@/lib/import/matches";
 import { context } from "./import-fixtures";
 
@@ -42,6 +42,22 @@ describe("aliases in the Import", () => {
     expect(wide.groups).toEqual([{ athleteId: 11, testId: 1, values: [35.5, 36.1], rows: [2, 2] }]);
   });
 
+  it("a mapping that names some columns leaves the others to be read as their headers say, or reported", () => {
+    const mapping = { format: "wide" as const, columns: { "Jump A": { testId: 1, trial: 1 } } };
+    const read = analyseCsv("athlete,Jump A,CMJ 2\nAna Silva,35,36\n", mapping, withCmj).plan;
+    expect(read.errorCount).toBe(0);
+    expect(read.groups).toEqual([{ athleteId: 11, testId: 1, values: [35, 36], rows: [2, 2] }]);
+    const unread = analyseCsv("athlete,Jump A,Dash 1\nAna Silva,35,1.8\n", mapping, withCmj).plan;
+    expect(unread.errors.map((e) => e.column)).toEqual(["Dash 1"]);
+    expect(unread.unknownTests.map((t) => t.name)).toEqual(["Dash"]);
+    const ignored = analyseCsv(
+      "athlete,Jump A,Dash 1\nAna Silva,35,1.8\n",
+      { ...mapping, columns: { ...mapping.columns, "Dash 1": null } },
+      withCmj,
+    ).plan;
+    expect(ignored.errorCount).toBe(0);
+  });
+
   it("lists an unknown wide test once, by the name the file uses, with what it may be", () => {
     const { plan } = analyseCsv("athlete,CMJ 1,CMJ 2\nAna Silva,35.5,36.1\n", {}, context);
     expect(plan.unknownTests).toEqual([
@@ -80,11 +96,16 @@ describe("aliases in the Import", () => {
 });
 
 describe("withTestMatch", () => {
-  it("points every column of the matched name at the test, at its header's trial, and back to ignored on undo", () => {
-    const draft = {
+  it("points every column of the matched name at the test, at its header's trial, and back to unread on undo", () => {
+    const draft: MappingDraft = {
       format: "wide" as const,
       athleteColumn: "Athlete",
-      columns: { "CMJ 1": { testId: 1, trial: 1 }, "Sprnt 10 m 1": null, "Sprnt 10 m (trial 2)": null, Notes: null },
+      columns: {
+        "CMJ 1": { testId: 1, trial: 1 },
+        "Sprnt 10 m 1": "unread",
+        "Sprnt 10 m (trial 2)": "unread",
+        Notes: null,
+      },
     };
     const headers = ["Athlete", "CMJ 1", "Sprnt 10 m 1", "Sprnt 10 m (trial 2)", "Notes"];
     const matched = withTestMatch(draft, headers, "sprnt 10 m", 2);
