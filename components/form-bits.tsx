@@ -93,19 +93,25 @@ export function applyServerErrors<T extends FieldValues>(
     return error instanceof Error ? error.message : "The change could not be saved.";
   const fields = (error.body as ErrorBody | null)?.error?.fields ?? {};
   const leftover: string[] = [];
+  let placed = false;
   for (const [key, message] of Object.entries(fields)) {
     const root = key.split(".")[0];
-    if (formFields.includes(root)) setError(root as Path<T>, { type: "server", message });
-    else leftover.push(message);
+    if (formFields.includes(root)) {
+      setError(root as Path<T>, { type: "server", message });
+      placed = true;
+    } else leftover.push(message);
   }
   // A taken name comes back as a 409 without fields; it belongs beside the name.
   if (
     error.status === 409 &&
-    Object.keys(fields).length === 0 &&
+    !placed &&
+    leftover.length === 0 &&
     /already/i.test(error.message) &&
     formFields.includes("name")
   ) {
     setError("name" as Path<T>, { type: "server", message: error.message });
+    placed = true;
   }
-  return [error.message, ...leftover].join(" ");
+  // Said beside its field, a message is not said again at the foot of the form.
+  return placed ? leftover.join(" ") : [error.message, ...leftover].join(" ");
 }

@@ -36,7 +36,7 @@ export function SignInForm() {
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-4">
       <Field id="email" label="E-mail" error={errors.email?.message}>
         <input id="email" type="email" autoComplete="username" className="field" {...register("email")} />
       </Field>

@@ -58,7 +58,7 @@ export function AcceptInvitationForm({
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-4">
       {!existingAccount && (
         <Field id="name" label="Your name" error={errors.name?.message}>
           <input id="name" autoComplete="name" className="field" {...register("name")} />

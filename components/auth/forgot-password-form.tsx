@@ -33,7 +33,7 @@ export function ForgotPasswordForm() {
       </p>
     );
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-4">
       <Field id="email" label="E-mail" error={formState.errors.email?.message}>
         <input id="email" type="email" autoComplete="username" className="field" {...register("email")} />
       </Field>

@@ -75,6 +75,7 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
     setResult(null);
     setDraft(null);
     setMatches(NO_MATCHES);
+    setRemember(true);
     commit.reset();
     preview.mutate({ file: next, fields: {} });
   };

@@ -104,7 +104,8 @@ export function NameMatches({
                   <span className="font-semibold">{t.value}</span>{" "}
                   <span className="text-ink-soft">
                     is in the Test library but not in this battery · {rowsText(t.rows, t.count, t.column)}. Add it to
-                    the session's battery on the Session sheet (Edit session), or leave its scores out of this import.
+                    the session's battery on the Session sheet (Edit session), or leave its scores out of this import
+                    {t.column ? " (ignore its columns in the mapping above)" : ""}.
                   </span>
                 </p>
                 {!t.column && (
@@ -149,7 +150,7 @@ export function NameMatches({
                   className="btn-quiet px-2 py-0.5 text-sm"
                   disabled={busy}
                   onClick={() => onLeave(l.kind === "athlete" ? "athletes" : "tests", l.name, false)}
-                  aria-label={`Take ${l.name} back in`}
+                  aria-label={`Take back in: ${l.name}`}
                 >
                   Take back in
                 </button>

@@ -67,7 +67,7 @@ function InviteForm({
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-4">
       <Field id="invite-email" label="E-mail" error={formState.errors.email?.message}>
         <input
           id="invite-email"

@@ -58,7 +58,7 @@ export function SessionCreateForm({
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-4">
       <div className="grid gap-4 sm:grid-cols-3">
         <Field id="session-squad" label="Squad" error={errors.squadId?.message && "Choose the squad."}>
           <select

@@ -56,7 +56,7 @@ export function SessionEditForm({ data, onDone }: { data: SheetData; onDone: () 
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-4">
       <div className="grid gap-4 sm:grid-cols-2">
         <Field id="edit-session-date" label="Date" error={errors.date?.message}>
           <input id="edit-session-date" type="date" className="field" {...register("date")} />

@@ -107,9 +107,8 @@ export function SheetGrid({
       });
     });
     const { refused } = sheet.enterTrials(entries);
+    // Cells refused as not numbers are counted beside this by the sheet itself, for as long as they stay.
     const parts = [`Pasted ${entries.length - refused} value${entries.length - refused === 1 ? "" : "s"}.`];
-    if (refused > 0)
-      parts.push(`${refused} ${refused === 1 ? "was not a number and was" : "were not numbers and were"} not saved.`);
     if (outside > 0) parts.push(`${outside} fell outside the sheet and ${outside === 1 ? "was" : "were"} left out.`);
     onAnnounce(parts.join(" "));
   }

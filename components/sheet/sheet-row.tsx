@@ -163,26 +163,39 @@ export function SheetRow({
       {doubts.length > 0 && (
         <tr>
           <td colSpan={totalColumns} className="border-b border-line bg-paper px-2 py-1.5">
-            <div className="sticky left-2 w-fit max-w-[calc(100vw-4rem)]">
+            <NoteBox>
               <SuspectNotes suspects={doubts} tests={tests} />
-            </div>
+            </NoteBox>
           </td>
         </tr>
       )}
       {issues.length > 0 && (
         <tr>
           <td colSpan={totalColumns} className="border-b border-line bg-paper px-2 py-1.5">
-            <div className="sticky left-2 w-fit max-w-[calc(100vw-4rem)]">
+            <NoteBox>
               <CellIssues
                 athleteName={athlete.name}
                 issues={issues}
                 onRetry={(testId) => sheet.retry(athlete.id, testId)}
                 onTheirs={(testId) => sheet.takeTheirs(athlete.id, testId)}
               />
-            </div>
+            </NoteBox>
           </td>
         </tr>
       )}
     </>
+  );
+}
+
+/**
+ * A note under a row: as wide as the sheet at most (its text never widens the table and pulls
+ * the columns away from their headings), within the screen, and kept in view as the sheet
+ * scrolls sideways.
+ */
+function NoteBox({ children }: { children: React.ReactNode }) {
+  return (
+    <div className="w-0 min-w-full">
+      <div className="sticky left-2 w-fit max-w-[min(100%,calc(100vw-4rem))]">{children}</div>
+    </div>
   );
 }

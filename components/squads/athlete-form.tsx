@@ -70,7 +70,7 @@ export function AthleteForm({
 
   const id = (name: string) => `athlete-${athlete?.id ?? "new"}-${name}`;
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-4">
       <div className="grid gap-4 sm:grid-cols-2">
         <Field id={id("name")} label="Name" error={errors.name?.message} className="sm:col-span-2">
           <input id={id("name")} className="field" autoComplete="off" {...register("name")} />

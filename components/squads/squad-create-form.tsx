@@ -30,7 +30,7 @@ export function SquadCreateForm({ onDone }: { onDone: (squad: { id: number }) =>
   }
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-4">
       <Field id="squad-name" label="Squad name" error={errors.name?.message}>
         <input id="squad-name" className="field" placeholder="e.g. Academy U16" {...register("name")} />
       </Field>

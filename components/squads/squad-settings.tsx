@@ -45,7 +45,7 @@ function RenameForm({ squad, onSaved }: { squad: Squad; onSaved: (message: strin
     }
   }
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-3">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-3">
       <h3 className="font-semibold">Name</h3>
       <div className="grid gap-3 sm:grid-cols-2">
         <Field id="settings-name" label="Squad name" error={formState.errors.name?.message}>

@@ -94,7 +94,7 @@ export function TestForm({ test, onDone }: { test: TestItem | null; onDone: (sav
   const optionalNum = { setValueAs: numberOrNull };
 
   return (
-    <form onSubmit={handleSubmit(onSubmit)} noValidate className="space-y-4">
+    <form onSubmit={handleSubmit(onSubmit, () => setFailure(null))} noValidate className="space-y-4">
       {test && (test.resultCount ?? 0) > 0 && (
         <p className="rounded-md bg-band px-3 py-2 text-sm">
           {test.resultCount} results already use this test. Changing its unit or direction changes how they read.

@@ -17,13 +17,29 @@ import type { Actor } from "./actors";
 type Outcome = Pick<ImportCommitted, "remembered" | "unremembered">;
 
 /** Decides, for one kind, which matches become other names, and the new alias lists by id. */
-function plan(kind: "athlete" | "test", matches: Record<string, number>, everyone: Named[], outcome: Outcome) {
+function plan(
+  kind: "athlete" | "test",
+  matches: Record<string, number>,
+  everyone: Named[],
+  outcome: Outcome,
+  /** Further names that are taken (athletes' external ids). */
+  taken: Named[] = [],
+) {
   const byId = new Map(everyone.map((e) => [e.id, { ...e, aliases: [...e.aliases] }]));
   const changed = new Set<number>();
   for (const [raw, id] of Object.entries(matches)) {
     const value = cleanText(raw).replace(/\s+/g, " ");
     const owner = byId.get(id);
-    if (!owner || aliasKey(value) === "" || aliasKey(value) === aliasKey(owner.name)) continue;
+    if (!owner || aliasKey(value) === "") continue;
+    if (aliasKey(value) === aliasKey(owner.name)) {
+      // Only a name two share needs matching to its own owner: as another name it would settle nothing.
+      outcome.unremembered.push({
+        kind,
+        value: raw,
+        reason: `more than one is called “${value}”; match it in each file`,
+      });
+      continue;
+    }
     // The rules of the Test library and Roster forms (lib/validation/common.ts, aliasList).
     if (value.length > ALIAS_CHARS || !hasVisibleText(value)) {
       outcome.unremembered.push({
@@ -36,7 +52,7 @@ function plan(kind: "athlete" | "test", matches: Record<string, number>, everyon
     if (owner.aliases.some((a) => aliasKey(a) === aliasKey(value))) continue;
     // A name that already belongs to someone else stays a one-off match: remembered, it would make
     // every later file ambiguous.
-    const clash = aliasClash([value], id, [...byId.values()]);
+    const clash = aliasClash([value], id, [...byId.values(), ...taken]);
     if (clash) {
       outcome.unremembered.push({ kind, value, reason: `“${value}” already names ${clash.owner}` });
       continue;
@@ -70,10 +86,14 @@ export async function rememberMatches(tx: Transaction, actor: Actor, asked: Impo
   if (canEditRoster(actor) && Object.keys(matches.athletes).length > 0) {
     // Every athlete of the organisation: a remembered name must not clash with anyone's, on any squad.
     const everyone = await tx
-      .select({ id: athletes.id, name: athletes.name, aliases: athletes.aliases })
+      .select({ id: athletes.id, name: athletes.name, aliases: athletes.aliases, externalId: athletes.externalId })
       .from(athletes)
       .where(eq(athletes.organizationId, organizationId));
-    for (const { id, aliases } of plan("athlete", matches.athletes, everyone, outcome))
+    // An external id is read before any name: another name equal to one would never be reached.
+    const externalIds = everyone.flatMap((a) =>
+      a.externalId ? [{ id: a.id, name: a.name, aliases: [a.externalId] }] : [],
+    );
+    for (const { id, aliases } of plan("athlete", matches.athletes, everyone, outcome, externalIds))
       await tx
         .update(athletes)
         .set({ aliases })

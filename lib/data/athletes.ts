@@ -38,12 +38,17 @@ async function checkedAliases(
   const cleaned = cleanAliases(aliases, name);
   if (cleaned.length === 0) return cleaned;
   const others = await tx
-    .select({ id: athletes.id, name: athletes.name, aliases: athletes.aliases })
+    .select({ id: athletes.id, name: athletes.name, aliases: athletes.aliases, externalId: athletes.externalId })
     .from(athletes)
     .where(eq(athletes.organizationId, actor.organizationId));
-  const clash = aliasClash(cleaned, athleteId, others);
+  // An external id is read before any name, so another name equal to one would never be reached.
+  const clash = aliasClash(
+    cleaned,
+    athleteId,
+    others.map((o) => ({ ...o, aliases: o.externalId ? [...o.aliases, o.externalId] : o.aliases })),
+  );
   if (clash) {
-    const message = `“${clash.name}” is already the name, or another name, of an athlete in your club; a file could not tell them apart.`;
+    const message = `“${clash.name}” is already the name, external id or another name of an athlete in your club; a file could not tell them apart.`;
     throw new ApiError(409, "conflict", message, { fields: { aliases: message } });
   }
   return cleaned;

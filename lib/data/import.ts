@@ -7,6 +7,7 @@ import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
 import { getDb, type Reader, type Transaction as Tx, writeTransaction } from "@/db/client";
 import { athletes, results, squads, testingSessions, tests, uploads } from "@/db/schema";
+import { aliasKey } from "@/lib/aliases";
 import { canEditSession } from "@/lib/auth/permissions";
 import type { Phase, SessionStatus } from "@/lib/domain";
 import { ApiError, forbidden, invalidInput } from "@/lib/errors";
@@ -69,7 +70,13 @@ export async function loadImportContext(session: ImportSession, db: Reader = get
       .where(eq(tests.organizationId, session.organizationId)),
     // The same athletes the Session sheet takes scores for (lib/data/scope.ts, onSessionSheet).
     db
-      .select({ id: athletes.id, name: athletes.name, externalId: athletes.externalId, aliases: athletes.aliases })
+      .select({
+        id: athletes.id,
+        name: athletes.name,
+        externalId: athletes.externalId,
+        aliases: athletes.aliases,
+        position: athletes.position,
+      })
       .from(athletes)
       .where(and(eq(athletes.organizationId, session.organizationId), onSessionSheet(session)))
       .orderBy(asc(athletes.name)),
@@ -83,6 +90,22 @@ export async function loadImportContext(session: ImportSession, db: Reader = get
     otherTestNames: others.flatMap((t) => [t.name, ...t.aliases]),
     athletes: roster,
   };
+}
+
+/**
+ * The roster as the mapping step offers it: where two athletes share a name, each is told apart
+ * by position and external id, so a coach picks the right one.
+ */
+function rosterChoices(context: ImportContext) {
+  const named = new Map<string, number>();
+  for (const a of context.athletes) named.set(aliasKey(a.name), (named.get(aliasKey(a.name)) ?? 0) + 1);
+  return context.athletes.map((a) => ({
+    id: a.id,
+    name:
+      (named.get(aliasKey(a.name)) ?? 0) > 1
+        ? `${a.name} (${[a.position, a.externalId ?? "no external id"].filter(Boolean).join(", ")})`
+        : a.name,
+  }));
 }
 
 async function loadExisting(
@@ -226,7 +249,7 @@ async function preview(
       decimals: t.decimals,
       trialsPerSession: t.trialsPerSession,
     })),
-    roster: context.athletes.map((a) => ({ id: a.id, name: a.name })),
+    roster: rosterChoices(context),
   };
 }
 

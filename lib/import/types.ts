@@ -23,7 +23,14 @@ export type ImportTest = {
 };
 
 /** An athlete on the session's squad roster, with other spellings remembered from earlier imports. */
-export type ImportAthlete = { id: number; name: string; externalId: string | null; aliases: string[] };
+export type ImportAthlete = {
+  id: number;
+  name: string;
+  externalId: string | null;
+  aliases: string[];
+  /** Told apart by position and external id where two on the roster share a name. */
+  position?: string | null;
+};
 
 /** What a file is checked against: the battery, the rest of the Test library, the roster. */
 export type ImportContext = {

@@ -210,7 +210,10 @@ describe("other spellings on the Roster", () => {
     const taken = await edit(["Femi Castellane"]);
     expect(taken.status).toBe(409);
     expect(taken.json.error.fields.aliases).toBe(
-      "“Femi Castellane” is already the name, or another name, of an athlete in your club; a file could not tell them apart.",
+      "“Femi Castellane” is already the name, external id or another name of an athlete in your club; a file could not tell them apart.",
     );
+    // Mateo Rusk's external id: a file's "NHA010" rows are his, whatever else is typed here.
+    const externalId = await edit(["NHA010"]);
+    expect(externalId.status).toBe(409);
   });
 });
