@@ -9,13 +9,12 @@ import type { RowError } from "@/lib/errors";
 import {
   draftFromPreview,
   fieldsOf,
-  hasMatches,
   type MappingDraft,
   matchFields,
   withLeftOut,
   withTestMatch,
 } from "@/lib/import/mapping-draft";
-import { NO_MATCHES } from "@/lib/import/matches";
+import { hasMatches, NO_MATCHES } from "@/lib/import/matches";
 import type { ImportCommitted, ImportPreview, ReplacementRow } from "@/lib/import/summary";
 import type { ImportMatches } from "@/lib/import/types";
 import { FilePicker } from "./file-picker";
@@ -41,8 +40,6 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
   const [replace, setReplace] = useState(false);
   const [matches, setMatches] = useState<ImportMatches>(NO_MATCHES);
   const [remember, setRemember] = useState(true);
-  // Which file this is (1, 2, …): the mapping step starts afresh with each.
-  const [chosen, setChosen] = useState(0);
   const [progress, setProgress] = useState<UploadProgress | null>(null);
   const [result, setResult] = useState<ImportCommitted | null>(null);
 
@@ -71,7 +68,6 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
 
   const choose = (next: File) => {
     setFile(next);
-    setChosen((n) => n + 1);
     setResult(null);
     setDraft(null);
     setMatches(NO_MATCHES);
@@ -138,7 +134,6 @@ export function ImportFlow({ sessionId, canRememberTests }: { sessionId: number;
         <>
           <PreviewFacts preview={data} />
           <MappingStep
-            key={chosen}
             preview={data}
             draft={draft}
             onChange={(next) => {

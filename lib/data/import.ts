@@ -21,7 +21,7 @@ import {
   PREVIEW_ROWS,
   TOO_LARGE_MESSAGE,
 } from "@/lib/import/limits";
-import { applyMatches, NO_MATCHES, namesInFile, usedMatches } from "@/lib/import/matches";
+import { applyMatches, hasMatches, NO_MATCHES, namesInFile, usedMatches } from "@/lib/import/matches";
 import { planWrites, type ResultWrite, resultKey } from "@/lib/import/merge";
 import { describeReplacements, type ImportCommitted, type ImportPreview } from "@/lib/import/summary";
 import type { ExistingResult, ImportContext } from "@/lib/import/types";
@@ -193,7 +193,11 @@ export async function runImport(
   }
   return commitImport(actor, session, context, analysis, file, {
     replace: options.replace,
-    remember: options.remember ? usedMatches(matches, namesInFile(table, analysis.resolved.mapping)) : null,
+    // The file is read for its names only when there is a match to remember.
+    remember:
+      options.remember && hasMatches(matches)
+        ? usedMatches(matches, namesInFile(table, analysis.resolved.mapping))
+        : null,
   });
 }
 

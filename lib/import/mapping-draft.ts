@@ -1,5 +1,6 @@
 import { aliasKey } from "@/lib/aliases";
 import { parseTrialHeader } from "@/lib/import/columns";
+import { hasMatches } from "@/lib/import/matches";
 import type { ImportPreview } from "@/lib/import/summary";
 import type { ImportFormat, ImportMatches, WideTarget } from "@/lib/import/types";
 
@@ -74,13 +75,6 @@ export function fieldsOf(draft: MappingDraft): Record<string, string> {
   const chosen = Object.fromEntries(Object.entries(draft.columns).filter(([, target]) => target !== "unread"));
   return { format: "wide", athleteColumn: draft.athleteColumn, mapping: JSON.stringify(chosen) };
 }
-
-export const hasMatches = (matches: ImportMatches) =>
-  Object.keys(matches.athletes).length +
-    Object.keys(matches.tests).length +
-    (matches.leaveOut?.athletes.length ?? 0) +
-    (matches.leaveOut?.tests.length ?? 0) >
-  0;
 
 /** The matches with `name` left out of the import (or, `leave` false, taken back in). */
 export function withLeftOut(matches: ImportMatches, kind: "athletes" | "tests", name: string, leave: boolean) {

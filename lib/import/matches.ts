@@ -12,6 +12,14 @@ export const NO_MATCHES: ImportMatches = { athletes: {}, tests: {} };
 
 const quote = (s: string) => `“${s}”`;
 
+/** Whether any name is matched or left out. */
+export const hasMatches = (matches: ImportMatches) =>
+  Object.keys(matches.athletes).length +
+    Object.keys(matches.tests).length +
+    (matches.leaveOut?.athletes.length ?? 0) +
+    (matches.leaveOut?.tests.length ?? 0) >
+  0;
+
 /**
  * The context with each match added to its athlete's or test's other names; a match to an
  * athlete who is not on the roster, or a test not in the battery, is a problem (sentences).

@@ -151,8 +151,9 @@ export function* planSteps(table: CsvTable, mapping: ImportMapping, context: Imp
   const roster = `the ${context.squadName} roster`;
   const leftOut = new Map<string, LeftOut>();
   /** True when the row's athlete or test is one the person importing asked to leave out. */
+  // Read once: most imports leave nothing out, and then no row pays for the check.
+  const kinds = context.leaveOut?.athletes.size || context.leaveOut?.tests.size ? context.leaveOut : undefined;
   const leaveOut = (athleteCell: string, testCell: string | null): boolean => {
-    const kinds = context.leaveOut;
     if (!kinds) return false;
     const athlete = normaliseName(athleteCell);
     const test = testCell === null ? "" : normaliseName(testCell);
