@@ -68,6 +68,22 @@ function plan(
   return [...changed].map((id) => ({ id, aliases: byId.get(id)!.aliases }));
 }
 
+/**
+ * Every athlete of the organisation with their name and other names, and their external ids as
+ * names taken too: the Import reads an external id before any name, so another name equal to one
+ * would never be reached. For checking a new other name against all of them.
+ */
+export async function athleteNames(tx: Transaction, organizationId: number) {
+  const everyone = await tx
+    .select({ id: athletes.id, name: athletes.name, aliases: athletes.aliases, externalId: athletes.externalId })
+    .from(athletes)
+    .where(eq(athletes.organizationId, organizationId));
+  const externalIds: Named[] = everyone.flatMap((a) =>
+    a.externalId ? [{ id: a.id, name: a.name, aliases: [a.externalId] }] : [],
+  );
+  return { everyone, externalIds };
+}
+
 /** Stores each match as another name of its athlete or test, unless the name is taken. */
 export async function rememberMatches(tx: Transaction, actor: Actor, asked: ImportMatches): Promise<Outcome> {
   const { organizationId } = actor;
@@ -85,14 +101,7 @@ export async function rememberMatches(tx: Transaction, actor: Actor, asked: Impo
   }
   if (canEditRoster(actor) && Object.keys(matches.athletes).length > 0) {
     // Every athlete of the organisation: a remembered name must not clash with anyone's, on any squad.
-    const everyone = await tx
-      .select({ id: athletes.id, name: athletes.name, aliases: athletes.aliases, externalId: athletes.externalId })
-      .from(athletes)
-      .where(eq(athletes.organizationId, organizationId));
-    // An external id is read before any name: another name equal to one would never be reached.
-    const externalIds = everyone.flatMap((a) =>
-      a.externalId ? [{ id: a.id, name: a.name, aliases: [a.externalId] }] : [],
-    );
+    const { everyone, externalIds } = await athleteNames(tx, organizationId);
     for (const { id, aliases } of plan("athlete", matches.athletes, everyone, outcome, externalIds))
       await tx
         .update(athletes)

@@ -6,6 +6,7 @@ import { aliasClash, cleanAliases } from "@/lib/aliases";
 import { ApiError, conflict, invalidInput, notFound } from "@/lib/errors";
 import type { AthleteCreateInput, AthleteUpdateInput, SquadAthleteAddInput } from "@/lib/validation/roster";
 import type { Actor } from "./actors";
+import { athleteNames } from "./aliases";
 import { recordAudit } from "./audit";
 import { isUniqueViolation } from "./errors";
 import { athleteScope, squadScope } from "./scope";
@@ -37,16 +38,8 @@ async function checkedAliases(
 ) {
   const cleaned = cleanAliases(aliases, name);
   if (cleaned.length === 0) return cleaned;
-  const others = await tx
-    .select({ id: athletes.id, name: athletes.name, aliases: athletes.aliases, externalId: athletes.externalId })
-    .from(athletes)
-    .where(eq(athletes.organizationId, actor.organizationId));
-  // An external id is read before any name, so another name equal to one would never be reached.
-  const clash = aliasClash(
-    cleaned,
-    athleteId,
-    others.map((o) => ({ ...o, aliases: o.externalId ? [...o.aliases, o.externalId] : o.aliases })),
-  );
+  const { everyone, externalIds } = await athleteNames(tx, actor.organizationId);
+  const clash = aliasClash(cleaned, athleteId, [...everyone, ...externalIds]);
   if (clash) {
     const message = `“${clash.name}” is already the name, external id or another name of an athlete in your club; a file could not tell them apart.`;
     throw new ApiError(409, "conflict", message, { fields: { aliases: message } });
