@@ -19,6 +19,7 @@ import type {
   ImportContext,
   ImportFormat,
   ImportMapping,
+  ImportTest,
   LongColumns,
   UnknownTest,
   WideColumnSuggestion,
@@ -131,6 +132,39 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
   const testsById = new Map(context.tests.map((t) => [t.id, t]));
   const targetOwner = new Map<string, string>();
   const chosen = request.columns ?? {};
+  /**
+   * Reads `header` as the test's trial, if the test takes that trial and no other column is read
+   * as it already; otherwise says why on the header row, worded for a choice or for a suggestion.
+   */
+  const claim = (header: string, test: ImportTest, trial: number, how: "chosen" | "suggested") => {
+    const limit = trialLimit(test.trialsPerSession);
+    if (!Number.isInteger(trial) || trial < 1 || trial > limit) {
+      errors.push({
+        row,
+        column: header,
+        message:
+          how === "chosen"
+            ? `${test.name} takes trials 1 to ${limit} in a session; ${quote(header)} is mapped to trial ${trial}.`
+            : `${test.name} takes trials 1 to ${limit} in a session; this column reads as trial ${trial}. Map it to a trial in the mapping step, or ignore it.`,
+      });
+      return;
+    }
+    const key = `${test.id}:${trial}`;
+    const other = targetOwner.get(key);
+    if (other !== undefined) {
+      errors.push({
+        row,
+        column: header,
+        message:
+          how === "chosen"
+            ? `Columns ${quote(other)} and ${quote(header)} are both mapped to ${test.name} trial ${trial}.`
+            : `Columns ${quote(other)} and ${quote(header)} both read as ${test.name} trial ${trial}. Rename one, or map them in the mapping step.`,
+      });
+      return;
+    }
+    targetOwner.set(key, header);
+    columns[header] = { testId: test.id, trial };
+  };
   for (const [header, target] of Object.entries(chosen)) {
     if (!has(header)) {
       errors.push({ row, column: header, message: `This file has no column ${quote(header)}.` });
@@ -150,27 +184,7 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
       });
       continue;
     }
-    const limit = trialLimit(test.trialsPerSession);
-    if (!Number.isInteger(target.trial) || target.trial < 1 || target.trial > limit) {
-      errors.push({
-        row,
-        column: header,
-        message: `${test.name} takes trials 1 to ${limit} in a session; ${quote(header)} is mapped to trial ${target.trial}.`,
-      });
-      continue;
-    }
-    const key = `${target.testId}:${target.trial}`;
-    const other = targetOwner.get(key);
-    if (other !== undefined) {
-      errors.push({
-        row,
-        column: header,
-        message: `Columns ${quote(other)} and ${quote(header)} are both mapped to ${test.name} trial ${target.trial}.`,
-      });
-      continue;
-    }
-    targetOwner.set(key, header);
-    columns[header] = target;
+    claim(header, test, target.trial, "chosen");
   }
   // "CMJ 1", "CMJ 2", "CMJ 3" are one unknown test, named as the file names it.
   const unknownByName = new Map<string, UnknownTest>();
@@ -201,28 +215,7 @@ export function resolveMapping(table: CsvTable, request: MappingRequest, context
       columns[s.header] = null;
       continue;
     }
-    const test = testsById.get(s.testId!)!;
-    const limit = trialLimit(test.trialsPerSession);
-    if (s.trial! > limit) {
-      errors.push({
-        row,
-        column: s.header,
-        message: `${test.name} takes trials 1 to ${limit} in a session; this column reads as trial ${s.trial}. Map it to a trial in the mapping step, or ignore it.`,
-      });
-      continue;
-    }
-    const key = `${s.testId}:${s.trial}`;
-    const other = targetOwner.get(key);
-    if (other !== undefined) {
-      errors.push({
-        row,
-        column: s.header,
-        message: `Columns ${quote(other)} and ${quote(s.header)} both read as ${test.name} trial ${s.trial}. Rename one, or map them in the mapping step.`,
-      });
-      continue;
-    }
-    targetOwner.set(key, s.header);
-    columns[s.header] = { testId: s.testId!, trial: s.trial! };
+    claim(s.header, testsById.get(s.testId!)!, s.trial!, "suggested");
   }
   if (!Object.values(columns).some((t) => t !== null) && !errors.some((e) => e.column)) {
     errors.push({
